@@ -1,0 +1,3 @@
+module github.com/hydrosize/hydrosize
+
+go 1.26

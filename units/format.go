@@ -1,0 +1,158 @@
+package units
+
+import (
+	"fmt"
+	"math"
+	"strconv"
+)
+
+// appendNumber appends v with the given number of significant digits in
+// plain decimal notation, trailing zeros removed; very large or very small
+// magnitudes use exponent notation.
+func appendNumber(b []byte, v float64, digits int) []byte {
+	if digits <= 0 {
+		digits = 4
+	}
+	a := math.Abs(v)
+	if a == 0 {
+		return append(b, '0')
+	}
+	if a < 1e-4 || a >= 1e9 {
+		return strconv.AppendFloat(b, v, 'g', digits, 64)
+	}
+	decimals := digits - 1 - int(math.Floor(math.Log10(a)))
+	if decimals < 0 {
+		decimals = 0
+	}
+	start := len(b)
+	b = strconv.AppendFloat(b, v, 'f', decimals, 64)
+	if decimals > 0 {
+		for b[len(b)-1] == '0' {
+			b = b[:len(b)-1]
+		}
+		if b[len(b)-1] == '.' {
+			b = b[:len(b)-1]
+		}
+	}
+	if string(b[start:]) == "-0" {
+		b = append(b[:start], '0')
+	}
+	return b
+}
+
+// fromSI converts an SI value to a number of unit u.
+func fromSI(v float64, u *unitDef) float64 {
+	return (v - u.offset) / u.factor
+}
+
+// appendIn appends v as a number of unit u, a space and the unit symbol.
+func appendIn(b []byte, v float64, u *unitDef, digits int) []byte {
+	b = appendNumber(b, fromSI(v, u), digits)
+	b = append(b, ' ')
+	return append(b, u.sym...)
+}
+
+// goString formats v as "v * base", the shortest decimal that reads back.
+func goString(v float64, base string) string {
+	var buf [48]byte
+	b := strconv.AppendFloat(buf[:0], v, 'g', -1, 64)
+	b = append(b, " * "...)
+	b = append(b, base...)
+	return string(b)
+}
+
+// formatQuantity implements fmt.Formatter for every quantity type.
+func formatQuantity(f fmt.State, verb rune, v float64, u *unitDef, typeName, base string) {
+	var buf [64]byte
+	var b []byte
+	switch verb {
+	case 'v', 's':
+		if verb == 'v' && f.Flag('#') {
+			b = append(buf[:0], goString(v, base)...)
+			break
+		}
+		b = appendIn(buf[:0], v, u, 4)
+	case 'e', 'E', 'f', 'F', 'g', 'G':
+		prec, ok := f.Precision()
+		if !ok {
+			prec = -1
+			if verb != 'g' && verb != 'G' {
+				prec = 6
+			}
+		}
+		x := fromSI(v, u)
+		b = buf[:0]
+		if f.Flag('+') && x >= 0 {
+			b = append(b, '+')
+		}
+		b = strconv.AppendFloat(b, x, byte(verb), prec, 64)
+		b = append(b, ' ')
+		b = append(b, u.sym...)
+	default:
+		fmt.Fprintf(f, "%%!%c(units.%s=%s)", verb, typeName, appendIn(buf[:0], v, u, 4))
+		return
+	}
+	pad(f, b)
+}
+
+// pad writes b to f, padded with spaces to the width, if any.
+func pad(f fmt.State, b []byte) {
+	w, ok := f.Width()
+	n := len([]rune(string(b)))
+	if !ok || w <= n {
+		f.Write(b)
+		return
+	}
+	spaces := make([]byte, w-n)
+	for i := range spaces {
+		spaces[i] = ' '
+	}
+	if f.Flag('-') {
+		f.Write(b)
+		f.Write(spaces)
+		return
+	}
+	f.Write(spaces)
+	f.Write(b)
+}
+
+// marshalText writes v in unit u when the shortest decimal of the number reads
+// back to exactly v, else in the SI unit; either way parsing restores v.
+func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
+	if math.IsInf(v, 0) || math.IsNaN(v) {
+		return nil, &RangeError{Func: "units." + t.name + ".MarshalText", Param: "value",
+			Value: strconv.FormatFloat(v, 'g', -1, 64), Valid: "finite"}
+	}
+	b := make([]byte, 0, 32)
+	if x := fromSI(v, u); !math.IsInf(x, 0) {
+		// The fewest digits that read back to exactly v: 20 °C, not
+		// 20.000000000000057 °C.
+		for prec := 1; prec <= 17; prec++ {
+			b = strconv.AppendFloat(b[:0], x, 'g', prec, 64)
+			y, err := strconv.ParseFloat(string(b), 64)
+			back := float64(y * u.factor)
+			if t.useOffset {
+				back += u.offset
+			}
+			if err == nil && back == v {
+				b = append(b, ' ')
+				return append(b, u.sym...), nil
+			}
+		}
+	}
+	si := siUnit(t)
+	b = strconv.AppendFloat(b, v, 'g', -1, 64)
+	b = append(b, ' ')
+	return append(b, si.sym...), nil
+}
+
+// siUnit returns the registered unit of t with factor 1 and no offset.
+func siUnit(t *typeInfo) *unitDef {
+	for i := range unitTable {
+		u := &unitTable[i]
+		if u.dim == t.dim && u.factor == 1 && u.offset == 0 && !u.noReg && u.ref&t.accept != 0 {
+			return u
+		}
+	}
+	return &unitTable[0] // unreachable: every type has an SI unit (tested)
+}

@@ -1,0 +1,181 @@
+package units
+
+import (
+	"errors"
+	"math"
+	"strconv"
+)
+
+// scanNumber returns the length of the decimal number at the start of s:
+//
+//	[+-] ( digits [ "." digits ] | "." digits ) [ ("e" | "E") [+-] digits ]
+//
+// Hexadecimal, underscores, NaN and Inf are not numbers here.
+func scanNumber(s string) int {
+	i := 0
+	if i < len(s) && (s[i] == '+' || s[i] == '-') {
+		i++
+	}
+	intStart := i
+	i = skipDigits(s, i)
+	digits := i > intStart
+	if i < len(s) && s[i] == '.' {
+		j := skipDigits(s, i+1)
+		if j > i+1 {
+			digits = true
+		}
+		if digits {
+			i = j
+		}
+	}
+	if !digits {
+		return 0
+	}
+	if i < len(s) && (s[i] == 'e' || s[i] == 'E') {
+		j := i + 1
+		if j < len(s) && (s[j] == '+' || s[j] == '-') {
+			j++
+		}
+		if k := skipDigits(s, j); k > j {
+			i = k
+		}
+	}
+	return i
+}
+
+func skipDigits(s string, i int) int {
+	for i < len(s) && s[i] >= '0' && s[i] <= '9' {
+		i++
+	}
+	return i
+}
+
+// splitNumber reads the number at the start of s (after leading spaces) and
+// returns it with the offset where the unit starts. Errors carry the offset.
+func splitNumber(s string) (float64, int, failure) {
+	start := 0
+	for start < len(s) && s[start] == ' ' {
+		start++
+	}
+	n := scanNumber(s[start:])
+	if n == 0 {
+		return 0, 0, failure{start, ErrSyntax, "want a decimal number first"}
+	}
+	v, err := strconv.ParseFloat(s[start:start+n], 64)
+	if err != nil {
+		if errors.Is(err, strconv.ErrRange) {
+			return 0, 0, failure{start, ErrRange, "number overflows float64"}
+		}
+		return 0, 0, failure{start, ErrSyntax, "want a decimal number first"}
+	}
+	i := start + n
+	if i < len(s) && (s[i] == '_' || (s[i] == 'x' || s[i] == 'X') && s[start:i] == "0") {
+		return 0, 0, failure{i, ErrSyntax, "hexadecimal numbers and underscores are not accepted"}
+	}
+	for i < len(s) && s[i] == ' ' {
+		i++
+	}
+	return v, i, failure{}
+}
+
+// failure is a parse problem: where, which sentinel, and what was wanted.
+// A zero failure means success.
+type failure struct {
+	pos    int
+	err    error
+	detail string
+}
+
+func (f failure) at(fn, input string, offset int) error {
+	return &ParseError{Func: fn, Input: input, Pos: offset + f.pos, Err: f.err, Detail: f.detail}
+}
+
+// trimRight returns s without trailing spaces.
+func trimRight(s string) string {
+	for len(s) > 0 && s[len(s)-1] == ' ' {
+		s = s[:len(s)-1]
+	}
+	return s
+}
+
+// parseTyped parses "number unit" into the SI value of type t.
+func parseTyped(fn, s string, t *typeInfo) (float64, error) {
+	in := trimRight(s)
+	num, at, f := splitNumber(in)
+	if f.err != nil {
+		return 0, f.at(fn, s, 0)
+	}
+	if at == len(in) {
+		return 0, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax,
+			Detail: "missing unit; want a unit of " + t.kind + " such as " + t.examples}
+	}
+	r, f := resolveUnit(in[at:])
+	if f.err != nil {
+		if f.err == ErrUnknownUnit || f.err == ErrSyntax {
+			f.detail += "; want a unit of " + t.kind + " such as " + t.examples
+		}
+		return 0, f.at(fn, s, at)
+	}
+	v, f := toTyped(num, r, t)
+	if f.err != nil {
+		return 0, f.at(fn, s, at)
+	}
+	return v, nil
+}
+
+// toTyped converts num in unit r to the SI value of type t, checking
+// dimension, reference and range.
+func toTyped(num float64, r resolved, t *typeInfo) (float64, failure) {
+	if r.dim != t.dim {
+		return 0, failure{0, ErrDimension, "unit has dimension " + r.dim.String() + " (" + dimName(r.dim) +
+			"), want " + t.dim.String() + " (" + t.kind + ")"}
+	}
+	if r.ref&t.accept == 0 {
+		return 0, failure{0, ErrReference, refDetail(r.ref, t)}
+	}
+	v := float64(num * r.factor)
+	if t.useOffset {
+		v += r.offset
+	}
+	return checkValue(v, t)
+}
+
+func checkValue(v float64, t *typeInfo) (float64, failure) {
+	if math.IsInf(v, 0) || math.IsNaN(v) {
+		return 0, failure{0, ErrRange, "value is not finite"}
+	}
+	if t.hasMin && v < t.min {
+		return 0, failure{0, ErrRange, "want " + t.kind + " " + t.minText}
+	}
+	return v, failure{}
+}
+
+func refDetail(got reference, t *typeInfo) string {
+	switch got {
+	case refAbsolute:
+		return "an absolute pressure spelling where a gauge pressure is wanted; convert with an explicit ambient (AbsolutePressure.Gauge)"
+	case refGauge:
+		return "a gauge pressure spelling where an absolute pressure is wanted; use bara, psia or atm, or convert with an explicit ambient (Pressure.Absolute)"
+	case refNone:
+		if t.dim == typeTemperature.dim {
+			return "a temperature difference where a temperature is wanted; use K, °C or °F"
+		}
+	}
+	return "unit does not fit " + t.kind
+}
+
+// dimName names the quantity type of dimension d, or "no hydrosize type".
+func dimName(d Dimension) string {
+	for _, t := range allTypes {
+		if t.dim == d {
+			return t.kind
+		}
+	}
+	switch d {
+	case dim(0, 0, 1, 0, 0):
+		return "time"
+	case Dimension{}:
+		return "dimensionless"
+	}
+	return "no hydrosize type"
+}

@@ -1,0 +1,153 @@
+package units
+
+import (
+	"math"
+	"strconv"
+)
+
+// Quantity is a value with a run-time dimension, for units that arrive as
+// text: forms, files, sensor tags. Parse reads one; the typed methods
+// (q.Pressure(), q.Flow(), …) convert it to a typed value when the dimension
+// matches. Use typed values everywhere else: they cost nothing at run time.
+//
+// The zero Quantity is a dimensionless zero.
+type Quantity struct {
+	value  float64   // SI value, offset applied for a temperature point
+	offset float64   // the offset applied (temperature points only)
+	dim    Dimension // SI dimension
+	ref    reference // gauge, absolute or temperature point of a lone spelling
+}
+
+// Parse reads a number followed by a unit expression, such as "1.3 gal/min",
+// "750 in^3/rev", "12 kW/(m²·K)" or "55 barg".
+//
+// Grammar: optional spaces, a decimal number ([+-] digits [. digits]
+// [e [+-] digits]; no hex, underscores, NaN or Inf), optional spaces, then a
+// unit expression:
+//
+//	expr    = product { "/" product }
+//	product = power { ("*" | "·" | "⋅" | "." | "-" | space) power }
+//	power   = primary [ "^" [+-] digits | superscript digits | digits ]
+//	primary = "(" expr ")" | "1" | registered unit name
+//
+// Everything after the first "/" at one level divides, as engineers read
+// W/m²·K. A lone registered spelling keeps its meaning: °C and °F are points
+// on their scales, psia and bara absolute, psi and bar gauge. Inside a longer
+// expression, temperature units count as intervals (BTU/(lbm·°F)).
+// Every spelling is listed in the package documentation.
+func Parse(s string) (Quantity, error) {
+	in := trimRight(s)
+	num, at, f := splitNumber(in)
+	if f.err != nil {
+		return Quantity{}, f.at("Parse", s, 0)
+	}
+	if at == len(in) {
+		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: at, Err: ErrSyntax, Detail: "missing unit"}
+	}
+	r, f := resolveUnit(in[at:])
+	if f.err != nil {
+		return Quantity{}, f.at("Parse", s, at)
+	}
+	q := Quantity{value: float64(num * r.factor), dim: r.dim, ref: r.ref}
+	if r.ref == refPoint {
+		q.value += r.offset
+		q.offset = r.offset
+	}
+	if math.IsInf(q.value, 0) || math.IsNaN(q.value) {
+		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: 0, Err: ErrRange, Detail: "value is not finite"}
+	}
+	return q, nil
+}
+
+// Value returns q's value in coherent SI units (the unit of its dimension
+// built from m, kg, s, K and rev). A temperature point is in kelvins.
+func (q Quantity) Value() float64 { return q.value }
+
+// Dimension returns q's dimension.
+func (q Quantity) Dimension() Dimension { return q.dim }
+
+// String formats q as its SI value and dimension, such as "689475.7 kg·m^-1·s^-2".
+func (q Quantity) String() string {
+	b := strconv.AppendFloat(nil, q.value, 'g', 7, 64)
+	if !q.dim.IsDimensionless() {
+		b = append(b, ' ')
+		b = append(b, q.dim.String()...)
+	}
+	return string(b)
+}
+
+// In returns q as a number of the unit expression unit, such as "gpm" or
+// "kW/(m²·K)". Temperature points convert between scales with their offsets.
+func (q Quantity) In(unit string) (float64, error) {
+	r, f := resolveUnit(trimRight(unit))
+	if f.err != nil {
+		return 0, &ParseError{Func: "Quantity.In", Input: unit, Pos: f.pos, Err: f.err, Detail: f.detail}
+	}
+	if r.dim != q.dim {
+		return 0, &ConversionError{From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
+	}
+	v := q.value
+	switch {
+	case q.ref == refPoint && r.ref == refPoint:
+		v = (v - r.offset) / r.factor
+	case q.ref|r.ref == refGauge|refAbsolute:
+		return 0, &ConversionError{From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
+	default:
+		v = (v - q.offset) / r.factor
+	}
+	if math.IsInf(v, 0) || math.IsNaN(v) {
+		return 0, &ConversionError{From: q.String(), To: unit, Err: ErrRange}
+	}
+	return v, nil
+}
+
+// Convert converts value from one unit expression to another, such as
+// Convert(1, "gpm", "L/min") or Convert(20, "°C", "°F"). Lone temperature
+// spellings are points on their scales (with offsets); gauge and absolute
+// pressure spellings do not mix (ErrReference): cross with an explicit ambient.
+func Convert(value float64, from, to string) (float64, error) {
+	if math.IsInf(value, 0) || math.IsNaN(value) {
+		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64), Valid: "finite"}
+	}
+	r, f := resolveUnit(trimRight(from))
+	if f.err != nil {
+		return 0, &ParseError{Func: "Convert", Input: from, Pos: f.pos, Err: f.err, Detail: f.detail}
+	}
+	q := Quantity{value: float64(value * r.factor), dim: r.dim, ref: r.ref}
+	if r.ref == refPoint {
+		q.value += r.offset
+		q.offset = r.offset
+	}
+	return q.In(to)
+}
+
+func refName(r reference) string {
+	switch r {
+	case refGauge:
+		return "gauge pressure"
+	case refAbsolute:
+		return "absolute pressure"
+	case refPoint:
+		return "temperature"
+	}
+	return "difference"
+}
+
+// as converts q to the SI value of type t.
+func (q Quantity) as(t *typeInfo) (float64, error) {
+	if q.dim != t.dim {
+		return 0, &ConversionError{From: q.dim.String() + " (" + dimName(q.dim) + ")", To: t.name + " (" + t.dim.String() + ")", Err: ErrDimension}
+	}
+	if q.ref&t.accept == 0 {
+		return 0, &ConversionError{From: refName(q.ref), To: t.name, Err: ErrReference}
+	}
+	v := q.value
+	if !t.useOffset {
+		v -= q.offset
+	}
+	v, f := checkValue(v, t)
+	if f.err != nil {
+		return 0, &RangeError{Func: "units.Quantity." + t.name, Param: "q", Value: q.String(), Valid: f.detail}
+	}
+	return v, nil
+}
