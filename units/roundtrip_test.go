@@ -33,16 +33,26 @@ type box[T any] struct {
 // typedCase ties a quantity type to its parser, for the tests and fuzz
 // targets that run over every type.
 type typedCase struct {
-	name  string
-	check func(t *testing.T, info *typeInfo)
-	parse func(s string) (float64, error)
+	name      string
+	check     func(t *testing.T, info *typeInfo)
+	parse     func(s string) (float64, error)
+	marshal   func(v float64) ([]byte, error)
+	unmarshal func(text []byte) (float64, error)
+	str       func(v float64) string
 }
 
 func typed[T quantity, P textQuantity[T]](name string, parse func(string) (T, error)) typedCase {
 	return typedCase{
-		name:  name,
-		check: roundTripType[T, P](parse),
-		parse: func(s string) (float64, error) { v, err := parse(s); return float64(v), err },
+		name:    name,
+		check:   roundTripType[T, P](parse),
+		parse:   func(s string) (float64, error) { v, err := parse(s); return float64(v), err },
+		marshal: func(v float64) ([]byte, error) { return T(v).MarshalText() },
+		unmarshal: func(text []byte) (float64, error) {
+			var v T
+			err := P(&v).UnmarshalText(text)
+			return float64(v), err
+		},
+		str: func(v float64) string { return T(v).String() },
 	}
 }
 
