@@ -2,6 +2,7 @@ package units
 
 import (
 	"strconv"
+	"strings"
 	"testing"
 )
 
@@ -164,5 +165,21 @@ func TestZeroAllocs(t *testing.T) {
 		if n := testing.AllocsPerRun(100, c.f); n != 0 {
 			t.Errorf("%s: %v allocs per run, want 0", c.name, n)
 		}
+	}
+}
+
+// BenchmarkParseUnknownUnit measures the error path for an unknown unit,
+// whose message suggests the nearest spellings. Its cost grows with the
+// length of the unknown word times the size of the registry (see the
+// report on nearestSpellings): untrusted text should be bounded in length.
+func BenchmarkParseUnknownUnit(b *testing.B) {
+	for _, n := range []int{8, 1000} {
+		s := "55 " + strings.Repeat("x", n)
+		b.Run(strconv.Itoa(n)+"_letters", func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				sinkPressure, sinkErr = ParsePressure(s)
+			}
+		})
 	}
 }
