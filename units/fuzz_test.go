@@ -60,15 +60,19 @@ func checkParseError(t *testing.T, fn, s string, v float64, err error) {
 	}
 }
 
-// fuzzTyped fuzzes the typed parser of one quantity type.
-func fuzzTyped(f *testing.F, name string) {
-	var c typedCase
-	for _, tc := range typedCases {
-		if tc.name == name {
-			c = tc
+// caseByName returns the typed case and description of quantity type name.
+func caseByName(name string) (typedCase, *typeInfo) {
+	for _, c := range typedCases {
+		if c.name == name {
+			return c, typeByName(name)
 		}
 	}
-	info := typeByName(name)
+	panic("no quantity type " + name) // a typo in a fuzz target
+}
+
+// fuzzTyped fuzzes the typed parser of one quantity type.
+func fuzzTyped(f *testing.F, name string) {
+	c, info := caseByName(name)
 	for _, s := range seedsFor(info) {
 		f.Add(s)
 	}
@@ -165,13 +169,7 @@ func TestFuzzTargetsComplete(t *testing.T) {
 // fuzzUnmarshal fuzzes UnmarshalText of one type: it must agree with the
 // typed parser, and what it accepts must marshal back to the same bits.
 func fuzzUnmarshal(f *testing.F, name string) {
-	var c typedCase
-	for _, tc := range typedCases {
-		if tc.name == name {
-			c = tc
-		}
-	}
-	info := typeByName(name)
+	c, info := caseByName(name)
 	for _, s := range seedsFor(info) {
 		f.Add([]byte(s))
 	}
