@@ -10,9 +10,9 @@
 // a factor of 2π. Values are built by multiplying a number by a unit constant
 // and read back by accessors that name the unit:
 //
-// 	p := 210 * units.Bar
-// 	q := 45 * units.LitrePerMinute
-// 	fmt.Println(p.PSI(), q.USGallonsPerMinute(), p.TimesFlow(q).Kilowatts())
+//	p := 210 * units.Bar
+//	q := 45 * units.LitrePerMinute
+//	fmt.Println(p.PSI(), q.USGallonsPerMinute(), p.TimesFlow(q).Kilowatts())
 //
 // Arithmetic on quantities compiles to plain float64 arithmetic. Physics across
 // types is typed (Pressure.TimesArea returns a Force; Flow.PerArea a Velocity).
@@ -48,16 +48,16 @@
 // The typed parsers (ParsePressure, ParseFlow, …) read a decimal number, optional
 // spaces, then a unit:
 //
-// 	number = [ "+" | "-" ] ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+//	number = [ "+" | "-" ] ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
 //
 // No hexadecimal, underscores, NaN or Inf. Leading and trailing spaces are
 // ignored. The unit is any registered spelling of the type (listed below) or a
 // unit expression of registered names with the right dimension:
 //
-// 	expr    = product { "/" product }
-// 	product = power { ( "*" | "·" | "⋅" | "." | "-" | " " ) power }
-// 	power   = primary [ "^" [ "+" | "-" ] digits | superscript digits | digits ]
-// 	primary = "(" expr ")" | "1" | name
+//	expr    = product { "/" product }
+//	product = power { ( "*" | "·" | "⋅" | "." | "-" | " " ) power }
+//	power   = primary [ "^" [ "+" | "-" ] digits | superscript digits | digits ]
+//	primary = "(" expr ")" | "1" | name
 //
 // Everything after the first "/" at one parenthesis level divides, the way
 // engineers read W/m²·K. A lone spelling keeps its reference (gauge, absolute,

@@ -357,7 +357,11 @@ func writeDoc() {
 		b.WriteString("//   - " + name + ": " + strings.Join(sp, "; ") + "\n")
 	}
 	b.WriteString("package units\n")
-	if err := os.WriteFile("doc.go", []byte(b.String()), 0o644); err != nil {
+	out, err := format.Source([]byte(b.String()))
+	if err != nil {
+		fail(err)
+	}
+	if err := os.WriteFile("doc.go", out, 0o644); err != nil {
 		fail(err)
 	}
 }
