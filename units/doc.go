@@ -116,7 +116,7 @@
 //   - ThermalConductivity: W/(m·K) W/m/K W/(m*K) W/mK; BTU/(h·ft·°F) BTU/(h*ft*F) Btu/(h·ft·°F) BTU/h/ft/F
 //   - Stiffness: N/m; N/mm; kN/mm; lbf/in lb/in
 //   - Frequency: Hz 1/s s⁻¹ s^-1; cpm cycles/min
-//   - Acceleration: m/s² m/s2 m/s^2; g₀ gn g0; ft/s² ft/s2 ft/s^2
+//   - Acceleration: m/s² m/s2 m/s^2; g₀ gn; ft/s² ft/s2 ft/s^2
 //   - time (in expressions only): s sec; ms; min; h hr
 //   - angle (in expressions only): rev r revolution; rad
 package units

@@ -274,7 +274,7 @@ var quantities = []quantity{
 		Doc: "Acceleration is an acceleration in metres per second squared (m/s²).",
 		Units: []unit{
 			{"MetrePerSecondSquared", "1", "is the SI unit of acceleration.", "MetresPerSecondSquared", "m/s²", []string{"m/s2", "m/s^2"}, "", "", false},
-			{"StandardGravity", "gravity", "is g₀ = 9.80665 m/s² exactly (CGPM 1901).", "StandardGravities", "g₀", []string{"gn", "g0"}, "", "", false},
+			{"StandardGravity", "gravity", "is g₀ = 9.80665 m/s² exactly (CGPM 1901).", "StandardGravities", "g₀", []string{"gn"}, "", "", false},
 			{"FootPerSecondSquared", "footM", "is 0.3048 m/s² exactly.", "FeetPerSecondSquared", "ft/s²", []string{"ft/s2", "ft/s^2"}, "", "", false},
 		}},
 	{Name: "time", NoType: true, Kind: "time", Dim: "dim(0, 0, 1, 0, 0)",
