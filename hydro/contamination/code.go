@@ -169,15 +169,15 @@ func (c Code) Validate() error {
 	if !measured {
 		return validate.Fail(fn, "N", 0.0, "at least one size measured")
 	}
-	if i, ok := c.ordered(); !ok {
-		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(i+1))
+	if i, j, ok := c.ordered(); !ok {
+		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(j))
 	}
 	return nil
 }
 
 // ordered reports whether the measured numbers of c do not grow with size;
-// when they do, i is the smaller size of the first offending pair.
-func (c Code) ordered() (i int, ok bool) {
+// when they do, small and large are the first offending pair of sizes.
+func (c Code) ordered() (small, large int, ok bool) {
 	prev, at := -1, 0
 	for j := range c.Len() {
 		r := c.N[j].rank()
@@ -185,11 +185,11 @@ func (c Code) ordered() (i int, ok bool) {
 			continue
 		}
 		if prev >= 0 && r > prev {
-			return at, false
+			return at, j, false
 		}
 		prev, at = r, j
 	}
-	return 0, true
+	return 0, 0, true
 }
 
 // orderError reports counts that grow from size small to size large.
@@ -219,8 +219,8 @@ func (c Code) checkPlain(fn string, names ...string) error {
 			return validate.Fail(fn, names[i], float64(s), "a scale number from 0 to 28")
 		}
 	}
-	if i, ok := c.ordered(); !ok {
-		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(i+1))
+	if i, j, ok := c.ordered(); !ok {
+		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(j))
 	}
 	return nil
 }

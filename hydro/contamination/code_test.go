@@ -249,9 +249,10 @@ func TestParseCodeBadInput(t *testing.T) {
 		{"29/16/13", 0, units.ErrRange},
 		{"18/16/99", 6, units.ErrRange},
 		// Numbers growing with size.
-		{"13/16/18", 0, ErrOrder},
-		{"18/16/*", 0, ErrOrder},
-		{"13/16", 0, ErrOrder},
+		{"13/16/18", 3, ErrOrder},
+		{"18/16/*", 6, ErrOrder},
+		{"13/-/ 16", 6, ErrOrder},
+		{"13/16", 3, ErrOrder},
 	}
 	for _, c := range cases {
 		_, err := ParseCode(c.in)

@@ -69,12 +69,14 @@ func ParseCode(s string) (Code, error) {
 
 func parseCode(fn, s string) (Code, error) {
 	var c Code
+	var starts [3]int
 	n, i := 0, 0
 	for {
 		if n == 3 {
 			return Code{}, &ParseError{Func: fn, Input: s, Pos: i, Err: units.ErrSyntax, Detail: "at most three numbers"}
 		}
 		i = skipSpace(s, i)
+		starts[n] = i
 		num, j, perr := parseNumber(s, i)
 		if perr != nil {
 			perr.Func, perr.Input = fn, s
@@ -100,9 +102,9 @@ func parseCode(fn, s string) (Code, error) {
 	if c.N[0].Mark == MarkNotMeasured && c.N[1].Mark == MarkNotMeasured && (n == 2 || c.N[2].Mark == MarkNotMeasured) {
 		return Code{}, &ParseError{Func: fn, Input: s, Pos: 0, Err: units.ErrSyntax, Detail: "no size measured"}
 	}
-	if k, ok := c.ordered(); !ok {
-		return Code{}, &ParseError{Func: fn, Input: s, Pos: 0, Err: ErrOrder,
-			Detail: "the number at " + c.Form.SizeLabel(k) + " is smaller than a number at a larger size"}
+	if small, large, ok := c.ordered(); !ok {
+		return Code{}, &ParseError{Func: fn, Input: s, Pos: starts[large], Err: ErrOrder,
+			Detail: "the number at " + c.Form.SizeLabel(large) + " is above the number at " + c.Form.SizeLabel(small)}
 	}
 	return c, nil
 }
