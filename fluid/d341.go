@@ -124,9 +124,19 @@ func (c Curve) At(t units.Temperature) (units.KinematicViscosity, error) {
 	if !(t >= c.lo && t <= c.hi) || c.b <= 0 {
 		return 0, c.rangeError("fluid.Curve.At", "t", t)
 	}
-	z := math.Pow(10, math.Pow(10, c.a-c.b*math.Log10(float64(t))))
-	return units.KinematicViscosity(nuFromZ(z)) * units.SquareMillimetrePerSecond, nil
+	// 10^(10^y) written with Exp and Log, about three times faster than Pow.
+	y := c.a - c.b*math.Log(float64(t))*(1/math.Ln10)
+	nu := nuFromZ(math.Exp(math.Ln10 * math.Exp(math.Ln10*y)))
+	// t in range puts ν in range; clamp the last-bit round-off at the ends
+	// so that TemperatureFor accepts every value At returns.
+	nu = min(max(nu, minNu), maxNu)
+	return units.KinematicViscosity(nu) * units.SquareMillimetrePerSecond, nil
 }
+
+const (
+	minNu = float64(MinViscosity / units.SquareMillimetrePerSecond)
+	maxNu = float64(MaxViscosity / units.SquareMillimetrePerSecond)
+)
 
 // TemperatureFor returns the temperature at which the curve has viscosity v:
 // T = 10^((A − log₁₀ log₁₀ Z)/B). It is the exact inverse of At. v must lie
@@ -167,15 +177,12 @@ func nuFromZ(z float64) float64 {
 		return w // exp term below 1e-17 of ν: nothing to refine
 	}
 	nu := w - math.Exp(-0.7487-3.295*w+0.6119*w*w-0.3193*w*w*w)
-	for range 4 {
+	// The explicit form is within 2·10⁻⁴ of the root over 0.21–7 mm²/s;
+	// two Newton steps (quadratic convergence) reach round-off, as
+	// TestNuFromZ checks.
+	for range 2 {
 		e := math.Exp(-1.47 - 1.84*nu - 0.51*nu*nu)
-		f := nu + 0.7 + e - z
-		d := 1 - (1.84+1.02*nu)*e
-		step := f / d
-		nu -= step
-		if math.Abs(step) <= 1e-15*nu {
-			break
-		}
+		nu -= (nu + 0.7 + e - z) / (1 - (1.84+1.02*nu)*e)
 	}
 	return nu
 }
