@@ -224,8 +224,8 @@ func parseGrade(fn, s string) (Grade, error) {
 	p.sep()
 	start := p.i
 	n := 0
-	for p.i < len(s) && s[p.i] >= '0' && s[p.i] <= '9' && n < 100000 {
-		n = n*10 + int(s[p.i]-'0')
+	for p.i < len(s) && s[p.i] >= '0' && s[p.i] <= '9' {
+		n = min(n*10+int(s[p.i]-'0'), 100000) // saturate: no grade is that large
 		p.i++
 	}
 	if p.i == start || (s[start] == '0') {
