@@ -62,7 +62,7 @@ type ThermalModel struct {
 type Fluid struct {
 	Name      string
 	Class     Class
-	Curve     Curve             // ASTM D341 viscosity–temperature curve
+	Curve     Curve // ASTM D341 viscosity–temperature curve
 	V40, V100 units.KinematicViscosity
 	PourPoint units.Temperature // viscosity is refused below it; 0 if unknown
 	Density15 units.Density     // at 15 °C and atmospheric pressure
