@@ -83,8 +83,11 @@ func cragoeThermal(sg float64) ThermalModel {
 //	HFDU   185  920         −30 °C      1.7 GPa     VG 32–68
 //	HEES   180  920         −36 °C      1.7 GPa     VG 32–68
 //
-// with ν₄₀ at the grade midpoint and ν₁₀₀ from the VI (V100ForVI). The
-// values are typical of each class (from memory), not of any product; the
+// with ν₄₀ at the grade midpoint and ν₁₀₀ from the VI (V100ForVI). Within
+// the mineral classes, density and pour point step evenly from the lightest
+// to the heaviest grade across the ranges shown: a simplification of ours,
+// not data for each grade. The values are typical of each class (from
+// memory), not of any product; the
 // supplier's data sheet governs, and FromDataSheet builds a fluid from it.
 // Mineral oils take specific heat and conductivity from Cragoe's
 // correlations; the others typical constants. Water-glycols (HFC) hold
