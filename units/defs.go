@@ -1,5 +1,7 @@
 package units
 
+//go:generate go run gen.go
+
 import "math"
 
 // Exact definitions, written once. These untyped constants carry the full

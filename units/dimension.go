@@ -46,20 +46,6 @@ func dim(l, m, t, k, a int8) Dimension {
 	return d
 }
 
-func (d Dimension) mul(o Dimension) Dimension {
-	for i := range d.e {
-		d.e[i] += o.e[i]
-	}
-	return d
-}
-
-func (d Dimension) pow(n int8) Dimension {
-	for i := range d.e {
-		d.e[i] *= n
-	}
-	return d
-}
-
 // IsDimensionless reports whether every exponent of d is zero.
 func (d Dimension) IsDimensionless() bool { return d == Dimension{} }
 

@@ -29,7 +29,7 @@ var (
 // It quotes the input and the byte offset where the problem starts, and
 // unwraps to one of the package's sentinel errors.
 type ParseError struct {
-	Func   string // the function that failed, e.g. "ParsePressure"
+	Func   string // the function that failed: "ParsePressure", or qualified as "contamination.ParseCode"
 	Input  string // the text given
 	Pos    int    // byte offset into Input where the problem starts
 	Err    error  // sentinel: ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange or ErrReference
@@ -38,7 +38,9 @@ type ParseError struct {
 
 func (e *ParseError) Error() string {
 	var b strings.Builder
-	b.WriteString("units.")
+	if !strings.Contains(e.Func, ".") {
+		b.WriteString("units.")
+	}
 	b.WriteString(e.Func)
 	b.WriteString(": parsing ")
 	b.WriteString(strconv.Quote(e.Input))

@@ -128,13 +128,14 @@ func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
 		// The fewest digits that read back to exactly v: 20 °C, not
 		// 20.000000000000057 °C.
 		for prec := 1; prec <= 17; prec++ {
-			b = strconv.AppendFloat(b[:0], x, 'g', prec, 64)
+			b = strconv.AppendFloat(b[:0], x, 'e', prec-1, 64)
 			y, err := strconv.ParseFloat(string(b), 64)
 			back := float64(y * u.factor)
 			if t.useOffset {
 				back += u.offset
 			}
 			if err == nil && back == v {
+				b = strconv.AppendFloat(b[:0], y, 'g', -1, 64)
 				b = append(b, ' ')
 				return append(b, u.sym...), nil
 			}

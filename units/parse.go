@@ -57,6 +57,13 @@ func splitNumber(s string) (float64, int, failure) {
 	for start < len(s) && s[start] == ' ' {
 		start++
 	}
+	if v, n, ok := fastNumber(s[start:]); ok {
+		i := start + n
+		for i < len(s) && s[i] == ' ' {
+			i++
+		}
+		return v, i, failure{}
+	}
 	n := scanNumber(s[start:])
 	if n == 0 {
 		return 0, 0, failure{start, ErrSyntax, "want a decimal number first"}
@@ -98,8 +105,34 @@ func trimRight(s string) string {
 	return s
 }
 
-// parseTyped parses "number unit" into the SI value of type t.
+// parseTyped parses "number unit" into the SI value of type t. The fast
+// path covers a plain decimal and a registered spelling that fits t; every
+// other input, including every error, takes the general path.
 func parseTyped(fn, s string, t *typeInfo) (float64, error) {
+	in := trimRight(s)
+	if num, n, ok := fastNumber(in); ok {
+		at := n
+		for at < len(in) && in[at] == ' ' {
+			at++
+		}
+		if i, found := spellings[in[at:]]; found {
+			u := &unitTable[i]
+			if u.dim == t.dim && u.ref&t.accept != 0 {
+				v := float64(num * u.factor)
+				if t.useOffset {
+					v += u.offset
+				}
+				if v-v == 0 && (!t.hasMin || v >= t.min) { // finite and in range
+					return v, nil
+				}
+			}
+		}
+	}
+	return parseTypedSlow(fn, s, t)
+}
+
+// parseTypedSlow is the general path of parseTyped, with full error reports.
+func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 	in := trimRight(s)
 	num, at, f := splitNumber(in)
 	if f.err != nil {
@@ -178,4 +211,86 @@ func dimName(d Dimension) string {
 		return "dimensionless"
 	}
 	return "no hydrosize type"
+}
+
+// pow10 holds the powers of ten that float64 represents exactly.
+var pow10 = [...]float64{1e0, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9, 1e10,
+	1e11, 1e12, 1e13, 1e14, 1e15, 1e16, 1e17, 1e18, 1e19, 1e20, 1e21, 1e22}
+
+// fastNumber reads the decimal number at the start of s (no leading spaces)
+// when its value is exactly m·10^e with m < 2⁵³ and |e| ≤ 22. Then one
+// correctly rounded multiply or divide gives the same float64 as
+// strconv.ParseFloat (Clinger's fast path). It returns the value, the length
+// read, and false when the number needs the general path (or is not there).
+func fastNumber(s string) (float64, int, bool) {
+	i, neg := 0, false
+	if i < len(s) && (s[i] == '+' || s[i] == '-') {
+		neg = s[i] == '-'
+		i++
+	}
+	var mant uint64
+	digits, frac, seenDot, anyDigit := 0, 0, false, false
+	for ; i < len(s); i++ {
+		c := s[i]
+		if c == '.' && !seenDot {
+			seenDot = true
+			continue
+		}
+		if c < '0' || c > '9' {
+			break
+		}
+		if digits >= 15 {
+			return 0, 0, false
+		}
+		mant = mant*10 + uint64(c-'0')
+		anyDigit = true
+		if mant > 0 {
+			digits++
+		}
+		if seenDot {
+			frac++
+		}
+	}
+	if !anyDigit {
+		return 0, 0, false // no digits at all: let the general path report it
+	}
+	exp := 0
+	if i < len(s) && (s[i] == 'e' || s[i] == 'E') {
+		j, eneg := i+1, false
+		if j < len(s) && (s[j] == '+' || s[j] == '-') {
+			eneg = s[j] == '-'
+			j++
+		}
+		start := j
+		for ; j < len(s) && s[j] >= '0' && s[j] <= '9'; j++ {
+			if exp = exp*10 + int(s[j]-'0'); exp > 400 {
+				return 0, 0, false
+			}
+		}
+		if j == start {
+			return 0, 0, false
+		}
+		if eneg {
+			exp = -exp
+		}
+		i = j
+	}
+	if i < len(s) && (s[i] == '_' || s[i] == 'x' || s[i] == 'X' || s[i] == '.') {
+		return 0, 0, false
+	}
+	e := exp - frac
+	f := float64(mant)
+	switch {
+	case e == 0:
+	case e > 0 && e <= 22:
+		f *= pow10[e]
+	case e < 0 && e >= -22:
+		f /= pow10[-e]
+	default:
+		return 0, 0, false
+	}
+	if neg {
+		f = -f
+	}
+	return f, i, true
 }

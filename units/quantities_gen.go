@@ -3127,7 +3127,7 @@ var unitTable = [...]unitDef{
 	{sym: "Hz", factor: 1, offset: 0, dim: dim(0, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"1/s", "s⁻¹", "s^-1"}},
 	{sym: "cpm", factor: 1.0 / minuteS, offset: 0, dim: dim(0, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"cycles/min"}},
 	{sym: "m/s²", factor: 1, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"m/s2", "m/s^2"}},
-	{sym: "g₀", factor: gravity, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"gn", "g0"}},
+	{sym: "g₀", factor: gravity, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"gn"}},
 	{sym: "ft/s²", factor: footM, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"ft/s2", "ft/s^2"}},
 	{sym: "s", factor: 1, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{"sec"}},
 	{sym: "ms", factor: 1e-3, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},

@@ -1,0 +1,184 @@
+package fluid
+
+import (
+	"errors"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// ErrNoPreset reports a class and grade for which Typical has no data.
+var ErrNoPreset = errors.New("no typical data for this class and grade")
+
+// family holds the typical figures of one ISO 6743-4 class. All values are
+// typical of the class as recalled from suppliers' literature in general
+// (from memory), not of any product: the supplier's data sheet governs.
+type family struct {
+	vi        float64
+	grades    []Grade
+	density   func(Grade) float64 // kg/m³ at 15 °C
+	pourPoint func(Grade) float64 // °C
+	expansion float64             // 1/K
+	bulk      BulkModel
+	thermal   func(sg float64) ThermalModel
+}
+
+var mineralBulk = BulkModel{K0: 1500 * units.Megapascal, M: 10, C: 0.0055, Gamma: 1.15}
+
+var families = map[Class]family{
+	HM: {vi: 100, grades: []Grade{VG15, VG22, VG32, VG46, VG68, VG100},
+		density: mineralDensity, pourPoint: func(g Grade) float64 { return -33 + 3*float64(gradeStep(g)) },
+		expansion: 6.5e-4, bulk: mineralBulk, thermal: cragoeThermal},
+	HV: {vi: 150, grades: []Grade{VG15, VG22, VG32, VG46, VG68, VG100},
+		density: func(g Grade) float64 { return mineralDensity(g) - 5 }, pourPoint: func(g Grade) float64 { return -45 + 3*float64(gradeStep(g)) },
+		expansion: 6.5e-4, bulk: mineralBulk, thermal: cragoeThermal},
+	HFC: {vi: 190, grades: []Grade{VG22, VG32, VG46, VG68},
+		density: func(Grade) float64 { return 1080 }, pourPoint: func(Grade) float64 { return -40 },
+		expansion: 6.5e-4, bulk: BulkModel{K0: 3000 * units.Megapascal, M: 6, C: 0.002, Gamma: 1.05},
+		thermal: func(float64) ThermalModel { return ThermalModel{C40: 3300, CSlope: 2, K40: 0.42, KSlope: 0.0005} }},
+	HFDU: {vi: 185, grades: []Grade{VG32, VG46, VG68},
+		density: func(Grade) float64 { return 920 }, pourPoint: func(Grade) float64 { return -30 },
+		expansion: 7.5e-4, bulk: esterBulk, thermal: esterThermal},
+	HEES: {vi: 180, grades: []Grade{VG32, VG46, VG68},
+		density: func(Grade) float64 { return 920 }, pourPoint: func(Grade) float64 { return -36 },
+		expansion: 7.5e-4, bulk: esterBulk, thermal: esterThermal},
+}
+
+var esterBulk = BulkModel{K0: 1700 * units.Megapascal, M: 10, C: 0.005, Gamma: 1.15}
+
+func esterThermal(float64) ThermalModel {
+	return ThermalModel{C40: 2000, CSlope: 3, K40: 0.15, KSlope: -0.0001}
+}
+
+// mineralDensity is a typical density at 15 °C of a mineral hydraulic oil.
+func mineralDensity(g Grade) float64 { return 860 + 5*float64(gradeStep(g)) }
+
+// gradeStep counts grades from VG 15 (0) upward.
+func gradeStep(g Grade) int {
+	for i, h := range []Grade{VG15, VG22, VG32, VG46, VG68, VG100} {
+		if g == h {
+			return i
+		}
+	}
+	return 0
+}
+
+// cragoeThermal is Cragoe's linear correlations (see CragoeSpecificHeat and
+// CragoeConductivity) written about 40 °C for specific gravity sg.
+func cragoeThermal(sg float64) ThermalModel {
+	t40, t41 := units.TemperatureFromCelsius(40), units.TemperatureFromCelsius(41)
+	c40, _ := CragoeSpecificHeat(sg, t40)
+	c41, _ := CragoeSpecificHeat(sg, t41)
+	k40, _ := CragoeConductivity(sg, t40)
+	k41, _ := CragoeConductivity(sg, t41)
+	return ThermalModel{C40: c40, CSlope: float64(c41 - c40), K40: k40, KSlope: float64(k41 - k40)}
+}
+
+// Typical returns a fluid of class c and grade g with typical properties:
+//
+//	class  VI   ρ₁₅ kg/m³   pour point  K₀ (40 °C)  grades
+//	HM     100  860–885     −33…−18 °C  1.5 GPa     VG 15–100
+//	HV     150  855–880     −45…−30 °C  1.5 GPa     VG 15–100
+//	HFC    190  1080        −40 °C      3.0 GPa     VG 22–68
+//	HFDU   185  920         −30 °C      1.7 GPa     VG 32–68
+//	HEES   180  920         −36 °C      1.7 GPa     VG 32–68
+//
+// with ν₄₀ at the grade midpoint and ν₁₀₀ from the VI (V100ForVI). Within
+// the mineral classes, density and pour point step evenly from the lightest
+// to the heaviest grade across the ranges shown: a simplification of ours,
+// not data for each grade. The values are typical of each class (from
+// memory), not of any product; the
+// supplier's data sheet governs, and FromDataSheet builds a fluid from it.
+// Mineral oils take specific heat and conductivity from Cragoe's
+// correlations; the others typical constants. Water-glycols (HFC) hold
+// 35–50 % water: keep them below about 50 °C, watch the water content, and
+// treat their D341 curve as a rough guide. An error matching ErrNoPreset
+// means no typical data for that class and grade.
+func Typical(c Class, g Grade) (Fluid, error) {
+	fam, ok := families[c]
+	if !ok || !hasGrade(fam.grades, g) {
+		return Fluid{}, &PresetError{Class: c, Grade: g}
+	}
+	v100, err := V100ForVI(g.Mid(), fam.vi)
+	if err != nil {
+		return Fluid{}, err
+	}
+	return build(c.String()+" "+g.String()+" (typical)", c, g.Mid(), v100,
+		units.Density(fam.density(g)), units.TemperatureFromCelsius(fam.pourPoint(g)))
+}
+
+func hasGrade(gs []Grade, g Grade) bool {
+	for _, h := range gs {
+		if h == g {
+			return true
+		}
+	}
+	return false
+}
+
+// PresetError reports a class and grade without typical data. It unwraps
+// to ErrNoPreset.
+type PresetError struct {
+	Class Class
+	Grade Grade
+}
+
+func (e *PresetError) Error() string {
+	return "fluid.Typical: " + e.Class.String() + " " + e.Grade.String() + ": " + ErrNoPreset.Error()
+}
+
+// Unwrap returns ErrNoPreset.
+func (e *PresetError) Unwrap() error { return ErrNoPreset }
+
+// DataSheet holds the figures a supplier prints for a hydraulic fluid.
+// Give V100, or leave it 0 and give VI (then V100 = V100ForVI(V40, VI)).
+// PourPoint may be 0 when not known.
+type DataSheet struct {
+	Name      string
+	Class     Class // for the properties a data sheet rarely gives (bulk modulus, heat)
+	V40, V100 units.KinematicViscosity
+	VI        float64 // used only when V100 is 0
+	Density15 units.Density
+	PourPoint units.Temperature
+}
+
+// FromDataSheet builds a Fluid from a data sheet: the D341 curve through
+// V40 at 40 °C and V100 at 100 °C, the density at 15 °C, and for the rest
+// (expansion, bulk modulus, heat) the typical values of the class, which
+// the caller may override.
+func FromDataSheet(d DataSheet) (Fluid, error) {
+	const fn = "fluid.FromDataSheet"
+	if _, ok := families[d.Class]; !ok {
+		return Fluid{}, validate.Fail(fn, "Class", float64(d.Class), "HM, HV, HFC, HFDU or HEES")
+	}
+	if err := validate.InRange(fn, "Density15", d.Density15, 500, 2000); err != nil {
+		return Fluid{}, err
+	}
+	if err := validate.NonNegative(fn, "PourPoint", d.PourPoint); err != nil {
+		return Fluid{}, err
+	}
+	v100 := d.V100
+	if v100 == 0 {
+		var err error
+		if v100, err = V100ForVI(d.V40, d.VI); err != nil {
+			return Fluid{}, err
+		}
+	}
+	return build(d.Name, d.Class, d.V40, v100, d.Density15, d.PourPoint)
+}
+
+func build(name string, c Class, v40, v100 units.KinematicViscosity, rho units.Density, pour units.Temperature) (Fluid, error) {
+	curve, err := CurveThrough(t40, v40, t100, v100)
+	if err != nil {
+		return Fluid{}, err
+	}
+	fam := families[c]
+	sg := float64(rho) / 999.0 // water at 60 °F: 999.0 kg/m³ (ρ₁₅ stands in for ρ at 60 °F)
+	if sg < 0.6 || sg > 1.1 {
+		sg = min(max(sg, 0.6), 1.1) // Cragoe's range; only mineral classes use sg
+	}
+	return Fluid{
+		Name: name, Class: c, Curve: curve, V40: v40, V100: v100, PourPoint: pour,
+		Density15: rho, Expansion: fam.expansion, Bulk: fam.bulk, Thermal: fam.thermal(sg),
+	}, nil
+}

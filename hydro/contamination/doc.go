@@ -1,0 +1,44 @@
+// Package contamination codes and controls solid particle contamination in
+// hydraulic fluid: ISO 4406 cleanliness codes from particle counts,
+// comparison with a target code, common-practice target codes from the most
+// sensitive component, filter beta ratios per ISO 16889, the steady-state
+// cleanliness a filter holds, and filter placement advice.
+//
+// # ISO 4406 codes
+//
+// A scale number stands for a range of cumulative particle counts per mL:
+// "more than" one bound "up to and including" the next, with the rounded
+// bounds of ISO 4406:2021, Table 1 (…, 640, 1300, 2500, 5000 …), so each
+// number is about a doubling of the count. An automatic counter calibrated
+// per ISO 11171 reports three numbers for ≥4/≥6/≥14 µm(c) (e.g. 18/16/13);
+// microscope counting (ISO 4407) reports two for ≥5/≥15 µm. A number from
+// fewer than 20 counted particles carries "≥" (14/12/≥7); "-" marks a size
+// not measured; ">28" a count above the table; "*" too many to count (the
+// last two recalled from practice, from memory). A count of exactly zero is
+// reported as scale number 0, the lowest row of the table.
+//
+// # Targets and filtration
+//
+// The target table is common practice of the trade, not a standard: the
+// most sensitive component sets a base code, made stricter for high
+// pressure, critical machines and severe duty. Component makers' own limits
+// take precedence; callers can replace the table or the result.
+//
+// Filter performance follows ISO 16889: β_x(c) = upstream count ≥x ÷
+// downstream count ≥x, efficiency E = (1 − 1/β)·100 %. The steady-state
+// concentration a full-flow filter holds comes from a standard population
+// (mass) balance of a well-mixed system (see SteadyState).
+//
+// # Cautions
+//
+// Hydraulic systems store energy: fluid under pressure, accumulators and
+// raised loads. Change elements and take samples only with the system
+// depressurised or through a proper sampling valve per ISO 4021, and keep
+// clear of pinhole leaks, which can inject fluid through the skin. Hot oil
+// burns. A filter in bypass passes unfiltered fluid. These results support,
+// and do not replace, ISO 4413, the component makers' data, local codes and
+// licensed practice.
+//
+// All functions are safe for concurrent use. ScaleNumber, CodeFromCounts,
+// CodeFromSample and ParseCode allocate nothing unless they fail.
+package contamination

@@ -1,0 +1,207 @@
+package contamination
+
+import (
+	"errors"
+	"math"
+	"testing"
+
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// iso4406Table1 is ISO 4406:2021, Table 1 as printed [S]: for each scale
+// number, more than the first figure, up to and including the second,
+// particles per mL. Typed in from /work/shared/CHECKS.md, apart from our
+// own upper slice, so the test does not read the table it checks.
+var iso4406Table1 = []struct {
+	n         int
+	above, to float64
+}{
+	{0, 0, 0.01}, {1, 0.01, 0.02}, {2, 0.02, 0.04}, {3, 0.04, 0.08},
+	{4, 0.08, 0.16}, {5, 0.16, 0.32}, {6, 0.32, 0.64}, {7, 0.64, 1.3},
+	{8, 1.3, 2.5}, {9, 2.5, 5}, {10, 5, 10}, {11, 10, 20}, {12, 20, 40},
+	{13, 40, 80}, {14, 80, 160}, {15, 160, 320}, {16, 320, 640},
+	{17, 640, 1300}, {18, 1300, 2500}, {19, 2500, 5000}, {20, 5000, 10000},
+	{21, 10000, 20000}, {22, 20000, 40000}, {23, 40000, 80000},
+	{24, 80000, 160000}, {25, 160000, 320000}, {26, 320000, 640000},
+	{27, 640000, 1300000}, {28, 1300000, 2500000},
+}
+
+// TestScaleNumberTableBounds checks every row boundary on both sides:
+// the upper bound itself belongs to the row ("up to and including"), a
+// count just above it to the next row, a count just below to the row.
+// ISO 4406:2021, Table 1 [S]. Table look-ups are exact.
+func TestScaleNumberTableBounds(t *testing.T) {
+	const rel = 1e-9 // "just above/below": far outside boundSlack (1e-12)
+	for _, r := range iso4406Table1 {
+		cases := []struct {
+			name string
+			x    float64
+			want int
+		}{
+			{"upper bound", r.to, r.n},
+			{"just below upper", r.to * (1 - rel), r.n},
+			{"just above upper", r.to * (1 + rel), r.n + 1},
+			{"just above lower", r.above*(1+rel) + 1e-300, r.n},
+			{"middle", (r.above + r.to) / 2, r.n},
+		}
+		for _, c := range cases {
+			got, err := ScaleNumber(c.x)
+			if err != nil || got != c.want {
+				t.Errorf("row %d %s: ScaleNumber(%g) = %d, %v; want %d", r.n, c.name, c.x, got, err, c.want)
+			}
+		}
+		above, to, err := ScaleRange(r.n)
+		if err != nil || above != r.above || to != r.to {
+			t.Errorf("ScaleRange(%d) = %g, %g, %v; want %g, %g", r.n, above, to, err, r.above, r.to)
+		}
+	}
+}
+
+func TestScaleNumberEdges(t *testing.T) {
+	cases := []struct {
+		name string
+		x    float64
+		want int
+	}{
+		// Zero lies below the lowest row; we report 0 (package rule).
+		{"zero", 0, 0},
+		{"smallest positive", math.SmallestNonzeroFloat64, 0},
+		// Above 2 500 000 per mL: reported ">28" [M], returned as AboveTable.
+		{"just above table", 2.5e6 * (1 + 1e-9), AboveTable},
+		{"far above table", 1e300, AboveTable},
+		{"largest float", math.MaxFloat64, AboveTable},
+		// Worked check, ISO 4406 [S]: 3000 / 500 / 7 per mL → 19/16/10.
+		{"worked 4 µm", 3000, 19},
+		{"worked 6 µm", 500, 16},
+		{"worked 14 µm", 7, 10},
+	}
+	for _, c := range cases {
+		got, err := ScaleNumber(c.x)
+		if err != nil || got != c.want {
+			t.Errorf("%s: ScaleNumber(%g) = %d, %v; want %d", c.name, c.x, got, err, c.want)
+		}
+	}
+}
+
+// TestScaleNumberAgreesWithLinearScan compares the binary search with a
+// plain reading of the table on a dense sweep of counts.
+func TestScaleNumberAgreesWithLinearScan(t *testing.T) {
+	for x := 1e-4; x < 1e7; x *= 1.0137 {
+		want := AboveTable
+		for _, r := range iso4406Table1 {
+			if x <= r.to {
+				want = r.n
+				break
+			}
+		}
+		if got, _ := ScaleNumber(x); got != want {
+			t.Fatalf("ScaleNumber(%g) = %d, linear scan gives %d", x, got, want)
+		}
+	}
+}
+
+func TestPerML(t *testing.T) {
+	cases := []struct {
+		name          string
+		count         float64
+		sample        units.Volume
+		perML, per100 float64
+	}{
+		// Worked check, ISO 4406 [S]: counts per 100 mL ÷ 100 = per mL.
+		{"worked 4 µm", 300000, 100 * units.Millilitre, 3000, 300000},
+		{"worked 14 µm", 700, 100 * units.Millilitre, 7, 700},
+		// 0.1 L is 100.00000000000001 mL in float64: still 25 per mL.
+		{"litre sample", 2500, 0.1 * units.Litre, 25, 2500},
+		{"10 mL", 55, 10 * units.Millilitre, 5.5, 550},
+		{"zero count", 0, 25 * units.Millilitre, 0, 0},
+	}
+	for _, c := range cases {
+		got, err := PerML(c.count, c.sample)
+		if err != nil || math.Abs(got-c.perML) > 4e-16*c.perML {
+			t.Errorf("%s: PerML = %g, %v; want %g", c.name, got, err, c.perML)
+		}
+		got, err = Per100mL(c.count, c.sample)
+		if err != nil || math.Abs(got-c.per100) > 4e-16*c.per100 {
+			t.Errorf("%s: Per100mL = %g, %v; want %g", c.name, got, err, c.per100)
+		}
+	}
+}
+
+// TestSampleBoundsSurviveUnitRounding: 250 000 particles in 0.1 L is
+// exactly 2 500 per mL, the top of row 18; unit rounding must not push it
+// into row 19.
+func TestSampleBoundsSurviveUnitRounding(t *testing.T) {
+	for _, vol := range []units.Volume{0.1 * units.Litre, 100 * units.Millilitre, 1e-4 * units.CubicMetre} {
+		for _, r := range iso4406Table1[10:] { // bounds ≥ 10 per mL: whole counts in 100 mL
+			count := r.to * 100
+			pm, err := PerML(count, vol)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if got, _ := ScaleNumber(pm); got != r.n {
+				t.Errorf("%g counted in %v: %g per mL → %d, want %d", count, vol, pm, got, r.n)
+			}
+		}
+	}
+}
+
+func TestScaleBadInput(t *testing.T) {
+	// Bad counts.
+	for _, x := range []float64{-1, -1e-300, math.NaN(), math.Inf(1), math.Inf(-1)} {
+		if _, err := ScaleNumber(x); !errors.Is(err, units.ErrRange) {
+			t.Errorf("ScaleNumber(%g): err = %v, want units.ErrRange", x, err)
+		}
+	}
+	// Bad scale numbers.
+	for _, n := range []int{-1, 29, 1000} {
+		if _, _, err := ScaleRange(n); !errors.Is(err, units.ErrRange) {
+			t.Errorf("ScaleRange(%d): err = %v, want units.ErrRange", n, err)
+		}
+	}
+	// Bad counts and volumes.
+	bad := []struct {
+		count float64
+		vol   units.Volume
+	}{
+		{-1, units.Millilitre},
+		{math.NaN(), units.Millilitre},
+		{math.Inf(1), units.Millilitre},
+		{1, 0},
+		{1, -units.Millilitre},
+		{1, units.Volume(math.NaN())},
+		{1, units.Volume(math.Inf(1))},
+		{1e300, 1e-300 * units.Millilitre}, // overflows
+	}
+	for _, b := range bad {
+		if _, err := PerML(b.count, b.vol); !errors.Is(err, units.ErrRange) {
+			t.Errorf("PerML(%g, %g): err = %v, want units.ErrRange", b.count, float64(b.vol), err)
+		}
+		if _, err := Per100mL(b.count, b.vol); !errors.Is(err, units.ErrRange) {
+			t.Errorf("Per100mL(%g, %g): err = %v, want units.ErrRange", b.count, float64(b.vol), err)
+		}
+	}
+}
+
+func TestScaleNumberAllocs(t *testing.T) {
+	var sink int
+	allocs := testing.AllocsPerRun(100, func() {
+		n, _ := ScaleNumber(1234.5)
+		sink += n
+	})
+	if allocs != 0 {
+		t.Errorf("ScaleNumber allocates %v times per call, want 0", allocs)
+	}
+	_ = sink
+}
+
+var benchCounts = []float64{0, 0.005, 0.7, 7, 55, 500, 3000, 45000, 9e5, 3e6}
+
+func BenchmarkScaleNumber(b *testing.B) {
+	b.ReportAllocs()
+	s := 0
+	for i := 0; b.Loop(); i++ {
+		n, _ := ScaleNumber(benchCounts[i%len(benchCounts)])
+		s += n
+	}
+	_ = s
+}

@@ -1,0 +1,263 @@
+package contamination
+
+import (
+	"errors"
+	"fmt"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// Component is a type of hydraulic component, for choosing a target code.
+type Component uint8
+
+// Component types, roughly from the most to the least sensitive to
+// particles.
+const (
+	ServoValve Component = iota
+	ProportionalValve
+	VariablePistonPump
+	FixedPistonPump
+	PistonMotor
+	VanePump
+	PressureFlowControlValve
+	GearPump
+	GearMotor
+	DirectionalValve
+	Cylinder
+	componentCount
+)
+
+var componentNames = [componentCount]string{
+	"servo valve", "proportional valve", "variable piston pump",
+	"fixed piston pump", "piston motor", "vane pump",
+	"pressure or flow control valve", "gear pump", "gear motor",
+	"directional valve", "cylinder",
+}
+
+// String returns the component type in words, e.g. "servo valve".
+func (c Component) String() string {
+	if c < componentCount {
+		return componentNames[c]
+	}
+	return fmt.Sprintf("Component(%d)", uint8(c))
+}
+
+// commonPracticeBase holds the base target codes, ≥4/≥6/≥14 µm(c), for
+// 140–210 bar, a machine of ordinary criticality and normal duty. Common
+// practice: our own table from the spread of trade guidance, not a
+// standard and not any maker's chart.
+var commonPracticeBase = [componentCount][3]int{
+	ServoValve:               {16, 14, 11},
+	ProportionalValve:        {17, 15, 12},
+	VariablePistonPump:       {17, 15, 13},
+	FixedPistonPump:          {18, 16, 14},
+	PistonMotor:              {18, 16, 14},
+	VanePump:                 {18, 16, 14},
+	PressureFlowControlValve: {19, 17, 14},
+	GearPump:                 {19, 17, 15},
+	GearMotor:                {20, 18, 15},
+	DirectionalValve:         {20, 18, 15},
+	Cylinder:                 {20, 18, 15},
+}
+
+// BaseTarget returns the common-practice base target code for component
+// type c at 140–210 bar, ordinary criticality and normal duty:
+//
+//	servo valve 16/14/11 · proportional valve 17/15/12 ·
+//	variable piston pump 17/15/13 · fixed piston pump, piston motor and
+//	vane pump 18/16/14 · pressure or flow control valve 19/17/14 ·
+//	gear pump 19/17/15 · gear motor, directional valve and cylinder 20/18/15
+//
+// Common practice, not a standard: the component maker's stated limit
+// takes precedence. An unknown c gives an error matching units.ErrRange.
+func BaseTarget(c Component) (Code, error) {
+	if c >= componentCount {
+		return Code{}, validate.Fail("contamination.BaseTarget", "c", float64(c), "a known Component")
+	}
+	b := commonPracticeBase[c]
+	return Code{Form: Counter, N: [3]Number{{Scale: b[0]}, {Scale: b[1]}, {Scale: b[2]}}}, nil
+}
+
+// PressureBand is a band of working pressure for choosing a target code.
+type PressureBand uint8
+
+const (
+	// BandLow: up to and including 140 bar; one class dirtier than the base
+	// is allowed.
+	BandLow PressureBand = iota
+	// BandMedium: above 140 bar up to and including 210 bar; the base code.
+	BandMedium
+	// BandHigh: above 210 bar; one class cleaner than the base.
+	BandHigh
+)
+
+// String returns the band with its limits, e.g. "over 210 bar".
+func (b PressureBand) String() string {
+	switch b {
+	case BandLow:
+		return "up to 140 bar"
+	case BandMedium:
+		return "over 140 bar up to 210 bar"
+	case BandHigh:
+		return "over 210 bar"
+	}
+	return fmt.Sprintf("PressureBand(%d)", uint8(b))
+}
+
+// steps returns the classes the band adds to the base code (common practice).
+func (b PressureBand) steps() int { return 1 - int(b) }
+
+// BandFor returns the pressure band of a highest working pressure p
+// (gauge): up to and including 140 bar low, up to and including 210 bar
+// medium, above that high (common practice). p must be finite and ≥ 0;
+// otherwise the error matches units.ErrRange.
+func BandFor(p units.Pressure) (PressureBand, error) {
+	if err := validate.NonNegative("contamination.BandFor", "p", p); err != nil {
+		return 0, err
+	}
+	switch {
+	case p <= 140*units.Bar:
+		return BandLow, nil
+	case p <= 210*units.Bar:
+		return BandMedium, nil
+	}
+	return BandHigh, nil
+}
+
+// ErrNoComponent reports a target request that names no component.
+var ErrNoComponent = errors.New("no component given")
+
+// TargetInput describes a circuit for RecommendTarget.
+type TargetInput struct {
+	// Components lists the component types on the circuit; the most
+	// sensitive sets the target. At least one is needed.
+	Components []Component
+	// Pressure is the highest working pressure (gauge).
+	Pressure units.Pressure
+	// Critical: downtime is costly or a failure is hazardous; one class
+	// cleaner (common practice).
+	Critical bool
+	// SevereDuty: shock loads, long duty cycles, frequent cold starts, or a
+	// dusty or wet site; one class cleaner (common practice).
+	SevereDuty bool
+	// Bases replaces the common-practice base code of the listed component
+	// types with the caller's (for example a maker's stated limit at
+	// 140–210 bar). Codes must be counter codes of plain numbers.
+	Bases map[Component]Code
+	// Override, when not nil, is the caller's target: Target.Code is set to
+	// it while Target.Table still reports what the table gives.
+	Override *Code
+}
+
+// Target is a recommended target code and how it was reached.
+type Target struct {
+	// Code is the target: Table, or the caller's override.
+	Code Code
+	// Table is the code from the base codes and adjustments.
+	Table Code
+	// Basis is the most sensitive component: the one whose base code has the
+	// smallest sum of numbers (the first such in Components).
+	Basis Component
+	// Base is the strictest base code, size by size, over Components.
+	Base Code
+	// Band is the pressure band of TargetInput.Pressure.
+	Band PressureBand
+	// Steps is the number of classes added to Base: +1 for the low band,
+	// −1 for the high band, −1 when critical, −1 for severe duty. Numbers
+	// are kept within 0…28.
+	Steps int
+	// Overridden tells that Code is the caller's override.
+	Overridden bool
+	// Source is "common practice" or, with an override or caller base
+	// codes, says so.
+	Source string
+}
+
+// RecommendTarget returns a target ISO 4406 code (≥4/≥6/≥14 µm(c)) for a
+// circuit: the strictest base code, size by size, of its components
+// (BaseTarget, or the caller's Bases), moved by Steps classes for the
+// pressure band, criticality and duty, each number kept within 0…28.
+//
+// This is common practice, not a standard. The component makers' limits
+// take precedence; a sample that meets the target is no warranty of life.
+//
+// Errors: no component (ErrNoComponent), an unknown component, a bad
+// pressure, or a bad base or override code (units.ErrRange).
+func RecommendTarget(in TargetInput) (Target, error) {
+	const fn = "contamination.RecommendTarget"
+	if len(in.Components) == 0 {
+		return Target{}, fmt.Errorf("%s: %w", fn, ErrNoComponent)
+	}
+	band, err := BandFor(in.Pressure)
+	if err != nil {
+		return Target{}, err
+	}
+	t := Target{Band: band, Steps: band.steps(), Source: "common practice"}
+	bestSum := -1
+	for k, c := range in.Components {
+		base, err := baseFor(fn, in.Bases, c)
+		if err != nil {
+			return Target{}, err
+		}
+		sum := base.N[0].Scale + base.N[1].Scale + base.N[2].Scale
+		if bestSum < 0 || sum < bestSum {
+			bestSum, t.Basis = sum, c
+		}
+		for i := range 3 {
+			if k == 0 || base.N[i].Scale < t.Base.N[i].Scale {
+				t.Base.N[i] = base.N[i]
+			}
+		}
+	}
+	if in.Critical {
+		t.Steps--
+	}
+	if in.SevereDuty {
+		t.Steps--
+	}
+	t.Table = t.Base
+	for i := range 3 {
+		t.Table.N[i].Scale = min(max(t.Base.N[i].Scale+t.Steps, 0), MaxScale)
+	}
+	t.Code = t.Table
+	if len(in.Bases) > 0 {
+		t.Source = "caller's base codes and common-practice adjustments"
+	}
+	if in.Override != nil {
+		if err := checkTarget(fn, "Override", *in.Override); err != nil {
+			return Target{}, err
+		}
+		t.Code, t.Overridden, t.Source = *in.Override, true, "caller's override"
+	}
+	return t, nil
+}
+
+// baseFor returns the caller's base code for c if given, else the table's.
+func baseFor(fn string, bases map[Component]Code, c Component) (Code, error) {
+	if b, ok := bases[c]; ok {
+		return b, checkTarget(fn, "Bases["+c.String()+"]", b)
+	}
+	return BaseTarget(c)
+}
+
+// checkTarget accepts a valid counter code of plain numbers.
+func checkTarget(fn, param string, c Code) error {
+	if err := c.Validate(); err != nil {
+		return err
+	}
+	if c.Form != Counter {
+		return codeError(fn, param, c, "a counter (three-number) code")
+	}
+	for i := range 3 {
+		if c.N[i].Mark != MarkNone {
+			return codeError(fn, param, c, "plain scale numbers (no -, ≥, >28 or *)")
+		}
+	}
+	return nil
+}
+
+// codeError reports a code that a function cannot take as param.
+func codeError(fn, param string, c Code, valid string) error {
+	return &units.RangeError{Func: fn, Param: param, Value: c.String(), Valid: valid}
+}
