@@ -41,7 +41,7 @@ func ExampleParsePressure() {
 	// 172.3689 <nil>
 	// true
 	// true
-	// units.ParsePressure: parsing "25 bra" at offset 3: unknown unit: no registered unit "bra"; did you mean "bara"?; want a unit of pressure such as bar, psi, Pa, kPa
+	// units.ParsePressure: parsing "25 bra" at offset 3: unknown unit: no registered unit "bra"; did you mean "bar", "bara"?; want a unit of pressure such as bar, psi, Pa, kPa
 }
 
 func ExampleParse() {

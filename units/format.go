@@ -46,8 +46,14 @@ func fromSI(v float64, u *unitDef) float64 {
 }
 
 // appendIn appends v as a number of unit u, a space and the unit symbol.
+// A temperature at or near absolute zero is never rounded below its scale's
+// zero (−459.67 °F prints as −459.67, not −459.7), so it reads back.
 func appendIn(b []byte, v float64, u *unitDef, digits int) []byte {
-	b = appendNumber(b, fromSI(v, u), digits)
+	x := fromSI(v, u)
+	if u.offset != 0 && v >= 0 && v < 1 {
+		digits = max(digits, 8)
+	}
+	b = appendNumber(b, x, digits)
 	b = append(b, ' ')
 	return append(b, u.sym...)
 }
@@ -131,10 +137,10 @@ func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
 			b = strconv.AppendFloat(b[:0], x, 'e', prec-1, 64)
 			y, err := strconv.ParseFloat(string(b), 64)
 			back := float64(y * u.factor)
-			if t.useOffset {
+			if t.useOffset && u.offset != 0 {
 				back += u.offset
 			}
-			if err == nil && back == v {
+			if err == nil && math.Float64bits(back) == math.Float64bits(v) { // keeps −0
 				b = strconv.AppendFloat(b[:0], y, 'g', -1, 64)
 				b = append(b, ' ')
 				return append(b, u.sym...), nil
@@ -142,7 +148,7 @@ func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
 		}
 	}
 	si := siUnit(t)
-	b = strconv.AppendFloat(b, v, 'g', -1, 64)
+	b = strconv.AppendFloat(b[:0], v, 'g', -1, 64)
 	b = append(b, ' ')
 	return append(b, si.sym...), nil
 }

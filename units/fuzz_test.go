@@ -95,7 +95,7 @@ func checkTypedValue(t *testing.T, c typedCase, info *typeInfo, s string, v floa
 	if info.hasMin && v < info.min {
 		t.Fatalf("Parse%s(%q) = %g, below %s", c.name, s, v, info.minText)
 	}
-	if !(marshalFallbackBroken && needsSIFallback(v, metricUnit(info), info)) {
+	{
 		text, err := c.marshal(v)
 		if err != nil {
 			t.Fatalf("Parse%s(%q) = %g: MarshalText: %v", c.name, s, v, err)

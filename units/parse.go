@@ -66,18 +66,18 @@ func splitNumber(s string) (float64, int, failure) {
 	}
 	n := scanNumber(s[start:])
 	if n == 0 {
-		return 0, 0, failure{start, ErrSyntax, "want a decimal number first"}
+		return 0, 0, failure{pos: start, err: ErrSyntax, detail: "want a decimal number first"}
 	}
 	v, err := strconv.ParseFloat(s[start:start+n], 64)
 	if err != nil {
 		if errors.Is(err, strconv.ErrRange) {
-			return 0, 0, failure{start, ErrRange, "number overflows float64"}
+			return 0, 0, failure{pos: start, err: ErrRange, detail: "number overflows float64"}
 		}
-		return 0, 0, failure{start, ErrSyntax, "want a decimal number first"}
+		return 0, 0, failure{pos: start, err: ErrSyntax, detail: "want a decimal number first"}
 	}
 	i := start + n
 	if i < len(s) && (s[i] == '_' || (s[i] == 'x' || s[i] == 'X') && s[start:i] == "0") {
-		return 0, 0, failure{i, ErrSyntax, "hexadecimal numbers and underscores are not accepted"}
+		return 0, 0, failure{pos: i, err: ErrSyntax, detail: "hexadecimal numbers and underscores are not accepted"}
 	}
 	for i < len(s) && s[i] == ' ' {
 		i++
@@ -91,6 +91,7 @@ type failure struct {
 	pos    int
 	err    error
 	detail string
+	word   string // the unknown unit name, with ErrUnknownUnit
 }
 
 func (f failure) at(fn, input string, offset int) error {
@@ -119,7 +120,7 @@ func parseTyped(fn, s string, t *typeInfo) (float64, error) {
 			u := &unitTable[i]
 			if u.dim == t.dim && u.ref&t.accept != 0 {
 				v := float64(num * u.factor)
-				if t.useOffset {
+				if t.useOffset && u.offset != 0 {
 					v += u.offset
 				}
 				if v-v == 0 && (!t.hasMin || v >= t.min) { // finite and in range
@@ -144,6 +145,9 @@ func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 	}
 	r, f := resolveUnit(in[at:])
 	if f.err != nil {
+		if f.err == ErrUnknownUnit && f.word == in[at:] {
+			f.detail = unknownDetail(f.word, t) // the whole unit: suggest units of t
+		}
 		if f.err == ErrUnknownUnit || f.err == ErrSyntax {
 			f.detail += "; want a unit of " + t.kind + " such as " + t.examples
 		}
@@ -160,14 +164,14 @@ func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 // dimension, reference and range.
 func toTyped(num float64, r resolved, t *typeInfo) (float64, failure) {
 	if r.dim != t.dim {
-		return 0, failure{0, ErrDimension, "unit has dimension " + r.dim.String() + " (" + dimName(r.dim) +
+		return 0, failure{err: ErrDimension, detail: "unit has dimension " + r.dim.String() + " (" + dimName(r.dim) +
 			"), want " + t.dim.String() + " (" + t.kind + ")"}
 	}
 	if r.ref&t.accept == 0 {
-		return 0, failure{0, ErrReference, refDetail(r.ref, t)}
+		return 0, failure{err: ErrReference, detail: refDetail(r.ref, t)}
 	}
 	v := float64(num * r.factor)
-	if t.useOffset {
+	if t.useOffset && r.offset != 0 { // adding 0 would turn −0 into +0
 		v += r.offset
 	}
 	return checkValue(v, t)
@@ -175,10 +179,10 @@ func toTyped(num float64, r resolved, t *typeInfo) (float64, failure) {
 
 func checkValue(v float64, t *typeInfo) (float64, failure) {
 	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return 0, failure{0, ErrRange, "value is not finite"}
+		return 0, failure{err: ErrRange, detail: "value is not finite"}
 	}
 	if t.hasMin && v < t.min {
-		return 0, failure{0, ErrRange, "want " + t.kind + " " + t.minText}
+		return 0, failure{err: ErrRange, detail: "want " + t.kind + " " + t.minText}
 	}
 	return v, failure{}
 }

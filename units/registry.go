@@ -90,10 +90,10 @@ func resolveUnit(u string) (resolved, failure) {
 		err = p.fail(ErrSyntax, "unexpected "+quoteRune(p.s, p.i))
 	}
 	if err != nil {
-		return resolved{}, failure{p.errPos, err, p.detail}
+		return resolved{}, failure{pos: p.errPos, err: err, detail: p.detail, word: p.word}
 	}
 	if f == 0 || math.IsInf(f, 0) || math.IsNaN(f) {
-		return resolved{}, failure{0, ErrRange, "unit factor is not a finite non-zero number"}
+		return resolved{}, failure{err: ErrRange, detail: "unit factor is not a finite non-zero number"}
 	}
 	return resolved{factor: f, dim: dm, ref: refNone}, failure{}
 }
@@ -111,6 +111,7 @@ type exprParser struct {
 	i      int
 	errPos int
 	detail string
+	word   string // an unknown name, when the parse failed on one
 }
 
 func (p *exprParser) fail(err error, detail string) error {
@@ -235,6 +236,9 @@ func (p *exprParser) exponent() (int, bool, error) {
 		if !ok {
 			return 0, false, p.fail(ErrSyntax, "want an integer exponent after ^")
 		}
+		if n > maxExp {
+			return 0, false, p.fail(ErrRange, "exponent too large")
+		}
 		if neg {
 			n = -n
 		}
@@ -242,6 +246,9 @@ func (p *exprParser) exponent() (int, bool, error) {
 	}
 	if c := p.s[p.i]; c >= '0' && c <= '9' {
 		n, _ := p.digits()
+		if n > maxExp {
+			return 0, false, p.fail(ErrRange, "exponent too large")
+		}
 		return n, true, nil
 	}
 	neg := false
@@ -335,7 +342,8 @@ func (p *exprParser) name() (float64, Dimension, error) {
 	k, ok := spellings[word]
 	if !ok {
 		p.i = start
-		return 0, Dimension{}, p.fail(ErrUnknownUnit, unknownDetail(word))
+		p.word = word
+		return 0, Dimension{}, p.fail(ErrUnknownUnit, unknownDetail(word, nil))
 	}
 	return unitTable[k].factor, unitTable[k].dim, nil
 }
@@ -385,25 +393,40 @@ func quoteRune(s string, i int) string {
 	return "'" + string(r) + "'"
 }
 
-// unknownDetail names the nearest registered spellings to word.
-func unknownDetail(word string) string {
-	near := nearestSpellings(word, 3)
+// unknownDetail names the nearest registered spellings to word; with a
+// type, only spellings of that type's dimension.
+func unknownDetail(word string, t *typeInfo) string {
+	near := nearestSpellings(word, t, 3)
 	if len(near) == 0 {
-		return "no registered unit " + `"` + word + `"`
+		return `no registered unit "` + word + `"`
 	}
 	return `no registered unit "` + word + `"; did you mean ` + strings.Join(near, ", ") + "?"
 }
 
+// maxSuggest is the longest unknown name for which suggestions are sought;
+// it keeps the error path cheap on long or hostile input.
+const maxSuggest = 24
+
 // nearestSpellings returns up to n registered spellings closest to word by
 // edit distance (case differences count half), best first.
-func nearestSpellings(word string, n int) []string {
+func nearestSpellings(word string, t *typeInfo, n int) []string {
 	type cand struct {
 		s string
 		d int
 	}
+	runes := utf8.RuneCountInString(word)
+	if runes > maxSuggest {
+		return nil
+	}
 	var cs []cand
-	limit := 2 + utf8.RuneCountInString(word)/3
-	for s := range spellings {
+	limit := 2 + runes/3 // in half-edits
+	for s, i := range spellings {
+		if t != nil && unitTable[i].dim != t.dim {
+			continue
+		}
+		if diff := utf8.RuneCountInString(s) - runes; 2*diff > limit || -2*diff > limit {
+			continue
+		}
 		if d := editDistance(word, s); d <= limit {
 			cs = append(cs, cand{s, d})
 		}
@@ -421,28 +444,37 @@ func nearestSpellings(word string, n int) []string {
 	return out
 }
 
-// editDistance is the Levenshtein distance between a and b in runes, in
-// units of half an edit: a change of letter case costs 1, any other edit 2.
+// editDistance is the optimal-string-alignment distance between a and b in
+// runes (Levenshtein plus adjacent transpositions), in units of half an
+// edit: a change of letter case costs 1, any other edit 2.
 func editDistance(a, b string) int {
 	ra, rb := []rune(a), []rune(b)
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
+	pp, prev, cur := make([]int, len(rb)+1), make([]int, len(rb)+1), make([]int, len(rb)+1)
 	for j := range prev {
 		prev[j] = 2 * j
 	}
 	for i := 1; i <= len(ra); i++ {
 		cur[0] = 2 * i
 		for j := 1; j <= len(rb); j++ {
-			sub := 2
-			switch {
-			case ra[i-1] == rb[j-1]:
-				sub = 0
-			case strings.EqualFold(string(ra[i-1]), string(rb[j-1])):
-				sub = 1
+			cur[j] = min(prev[j]+2, cur[j-1]+2, prev[j-1]+subCost(ra[i-1], rb[j-1]))
+			if i > 1 && j > 1 && sameFold(ra[i-1], rb[j-2]) && sameFold(ra[i-2], rb[j-1]) {
+				cost := 2 + subCost(ra[i-1], rb[j-2]) + subCost(ra[i-2], rb[j-1])
+				cur[j] = min(cur[j], pp[j-2]+cost)
 			}
-			cur[j] = min(prev[j]+2, cur[j-1]+2, prev[j-1]+sub)
 		}
-		prev, cur = cur, prev
+		pp, prev, cur = prev, cur, pp
 	}
 	return prev[len(rb)]
 }
+
+func subCost(x, y rune) int {
+	switch {
+	case x == y:
+		return 0
+	case sameFold(x, y):
+		return 1
+	}
+	return 2
+}
+
+func sameFold(x, y rune) bool { return x == y || strings.EqualFold(string(x), string(y)) }
