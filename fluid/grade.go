@@ -108,7 +108,7 @@ func (g Grade) String() string {
 // a valid grade.
 func (g Grade) MarshalText() ([]byte, error) {
 	if !g.Valid() {
-		return nil, &ParseError{Func: "Grade.MarshalText", Input: strconv.Itoa(int(g)), Err: ErrNoGrade}
+		return nil, &units.ParseError{Func: "fluid.Grade.MarshalText", Input: strconv.Itoa(int(g)), Err: ErrNoGrade}
 	}
 	return []byte(g.String()), nil
 }
@@ -180,25 +180,6 @@ func (g Grade) next() Grade {
 	}
 	return 0
 }
-
-// ParseError records a failed parse of a grade, in the pattern of
-// strconv.NumError: it quotes the input and the byte offset of the problem,
-// and unwraps to units.ErrSyntax (malformed text) or ErrNoGrade (a
-// well-formed number that is not an ISO 3448 grade).
-type ParseError struct {
-	Func  string // e.g. "ParseGrade"
-	Input string // the text given
-	Pos   int    // byte offset into Input where the problem starts
-	Err   error  // units.ErrSyntax or ErrNoGrade
-}
-
-func (e *ParseError) Error() string {
-	return "fluid." + e.Func + ": parsing " + strconv.Quote(e.Input) + " at offset " +
-		strconv.Itoa(e.Pos) + ": " + e.Err.Error()
-}
-
-// Unwrap returns the sentinel error.
-func (e *ParseError) Unwrap() error { return e.Err }
 
 // ParseGrade reads an ISO 3448 grade. The grammar, letters in any case,
 // surrounding spaces ignored:
@@ -274,5 +255,5 @@ func (p *gradeParser) word(w string) bool {
 }
 
 func (p *gradeParser) fail(fn string, err error) error {
-	return &ParseError{Func: fn, Input: p.s, Pos: p.i, Err: err}
+	return &units.ParseError{Func: "fluid." + fn, Input: p.s, Pos: p.i, Err: err}
 }

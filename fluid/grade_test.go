@@ -118,7 +118,7 @@ func TestParseGrade(t *testing.T) {
 	}
 	for _, c := range bad {
 		_, err := ParseGrade(c.in)
-		var pe *ParseError
+		var pe *units.ParseError
 		if !errors.As(err, &pe) || !errors.Is(err, c.err) || pe.Pos != c.pos || pe.Input != c.in {
 			t.Errorf("ParseGrade(%q) err = %#v, want %v at %d", c.in, err, c.err, c.pos)
 			continue
@@ -163,7 +163,7 @@ func FuzzParseGrade(f *testing.F) {
 	f.Fuzz(func(t *testing.T, s string) {
 		g, err := ParseGrade(s)
 		if err != nil {
-			var pe *ParseError
+			var pe *units.ParseError
 			if !errors.As(err, &pe) || pe.Pos < 0 || pe.Pos > len(s) {
 				t.Fatalf("ParseGrade(%q): bad error %#v", s, err)
 			}

@@ -1,7 +1,6 @@
 package contamination
 
 import (
-	"errors"
 	"fmt"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
@@ -11,7 +10,15 @@ import (
 // ErrOrder reports cumulative counts or scale numbers that grow with particle
 // size: a count at ≥6 µm(c) includes every particle at ≥14 µm(c), so c4 ≥ c6
 // ≥ c14 must hold. Errors that match ErrOrder also match units.ErrRange.
-var ErrOrder = errors.New("cumulative counts grow with particle size")
+var ErrOrder error = &rangeSentinel{"cumulative counts grow with particle size"}
+
+// rangeSentinel is a sentinel error that also matches units.ErrRange.
+type rangeSentinel struct{ msg string }
+
+func (e *rangeSentinel) Error() string { return e.msg }
+
+// Is reports whether target is units.ErrRange.
+func (e *rangeSentinel) Is(target error) bool { return target == units.ErrRange }
 
 // FewCounted is the raw count below which ISO 4406 marks a scale number with
 // "≥": fewer than 20 particles counted in that size range (ISO 4406:2021).

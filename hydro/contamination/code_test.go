@@ -256,9 +256,9 @@ func TestParseCodeBadInput(t *testing.T) {
 	}
 	for _, c := range cases {
 		_, err := ParseCode(c.in)
-		var pe *ParseError
+		var pe *units.ParseError
 		if !errors.As(err, &pe) || !errors.Is(err, c.err) || pe.Pos != c.pos || pe.Input != c.in {
-			t.Errorf("ParseCode(%q): err = %v; want *ParseError at %d matching %v", c.in, err, c.pos, c.err)
+			t.Errorf("ParseCode(%q): err = %v; want *units.ParseError at %d matching %v", c.in, err, c.pos, c.err)
 			continue
 		}
 		if !strings.Contains(err.Error(), `"`) || !strings.HasPrefix(err.Error(), "contamination.ParseCode: ") {

@@ -12,14 +12,14 @@ var fuzzSeeds = []string{
 	"16/13", " 18 / 16 /13 ", "13/16/18", "29/1/1", "", "/", "≥", ">", "18/16/\xff",
 }
 
-// checkParsed holds for any input: an error is a *ParseError matching a
+// checkParsed holds for any input: an error is a *units.ParseError matching a
 // documented sentinel; a code passes Validate and reads back from String and
 // ASCII.
 func checkParsed(t *testing.T, s string, c Code, err error) {
 	if err != nil {
-		var pe *ParseError
+		var pe *units.ParseError
 		if !errors.As(err, &pe) || pe.Pos < 0 || pe.Pos > len(s) {
-			t.Fatalf("%q: error %v is not a *ParseError within the input", s, err)
+			t.Fatalf("%q: error %v is not a *units.ParseError within the input", s, err)
 		}
 		if !errors.Is(err, units.ErrSyntax) && !errors.Is(err, units.ErrRange) {
 			t.Fatalf("%q: error %v matches no sentinel", s, err)

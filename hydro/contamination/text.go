@@ -8,45 +8,6 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// ParseError records a failed parse of a code, in the pattern of
-// strconv.NumError: it quotes the input and the byte offset where the
-// problem starts, and unwraps to units.ErrSyntax (malformed text), or to
-// units.ErrRange (a scale number above 28) or ErrOrder (numbers that grow
-// with particle size).
-type ParseError struct {
-	Func   string // "ParseCode" or "Code.UnmarshalText"
-	Input  string // the text given
-	Pos    int    // byte offset into Input where the problem starts
-	Err    error  // units.ErrSyntax, units.ErrRange or ErrOrder
-	Detail string // what was expected
-}
-
-func (e *ParseError) Error() string {
-	var b strings.Builder
-	b.WriteString("contamination.")
-	b.WriteString(e.Func)
-	b.WriteString(": parsing ")
-	b.WriteString(strconv.Quote(e.Input))
-	b.WriteString(" at offset ")
-	b.WriteString(strconv.Itoa(e.Pos))
-	b.WriteString(": ")
-	b.WriteString(e.Err.Error())
-	if e.Detail != "" {
-		b.WriteString(": ")
-		b.WriteString(e.Detail)
-	}
-	return b.String()
-}
-
-// Unwrap returns the sentinel error. An ErrOrder parse error also matches
-// units.ErrRange.
-func (e *ParseError) Unwrap() []error {
-	if e.Err == ErrOrder {
-		return []error{ErrOrder, units.ErrRange}
-	}
-	return []error{e.Err}
-}
-
 // ParseCode reads an ISO 4406 code. Grammar:
 //
 //	code   = number "/" number [ "/" number ]
@@ -61,7 +22,8 @@ func (e *ParseError) Unwrap() []error {
 // with particle size ("*" ranks above ">28", which ranks above 28).
 //
 // Examples: "18/16/13", "-/16/13", "14/12/≥7", "14/12/>=7", ">28/26/20",
-// "16/13". Errors are *ParseError. ParseCode does not allocate unless it
+// "16/13". Errors are *units.ParseError values that quote the input and
+// offset and match units.ErrSyntax, units.ErrRange or ErrOrder. ParseCode does not allocate unless it
 // fails.
 func ParseCode(s string) (Code, error) {
 	return parseCode("ParseCode", s)
@@ -73,13 +35,13 @@ func parseCode(fn, s string) (Code, error) {
 	n, i := 0, 0
 	for {
 		if n == 3 {
-			return Code{}, &ParseError{Func: fn, Input: s, Pos: i, Err: units.ErrSyntax, Detail: "at most three numbers"}
+			return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: i, Err: units.ErrSyntax, Detail: "at most three numbers"}
 		}
 		i = skipSpace(s, i)
 		starts[n] = i
 		num, j, perr := parseNumber(s, i)
 		if perr != nil {
-			perr.Func, perr.Input = fn, s
+			perr.Func, perr.Input = "contamination."+fn, s
 			return Code{}, perr
 		}
 		c.N[n] = num
@@ -89,21 +51,21 @@ func parseCode(fn, s string) (Code, error) {
 			break
 		}
 		if s[i] != '/' {
-			return Code{}, &ParseError{Func: fn, Input: s, Pos: i, Err: units.ErrSyntax, Detail: `want "/" between numbers`}
+			return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: i, Err: units.ErrSyntax, Detail: `want "/" between numbers`}
 		}
 		i++
 	}
 	if n < 2 {
-		return Code{}, &ParseError{Func: fn, Input: s, Pos: len(s), Err: units.ErrSyntax, Detail: "want two or three numbers separated by /"}
+		return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: len(s), Err: units.ErrSyntax, Detail: "want two or three numbers separated by /"}
 	}
 	if n == 2 {
 		c.Form = Microscope
 	}
 	if c.N[0].Mark == MarkNotMeasured && c.N[1].Mark == MarkNotMeasured && (n == 2 || c.N[2].Mark == MarkNotMeasured) {
-		return Code{}, &ParseError{Func: fn, Input: s, Pos: 0, Err: units.ErrSyntax, Detail: "no size measured"}
+		return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: 0, Err: units.ErrSyntax, Detail: "no size measured"}
 	}
 	if small, large, ok := c.ordered(); !ok {
-		return Code{}, &ParseError{Func: fn, Input: s, Pos: starts[large], Err: ErrOrder,
+		return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: starts[large], Err: ErrOrder,
 			Detail: "the number at " + c.Form.SizeLabel(large) + " is above the number at " + c.Form.SizeLabel(small)}
 	}
 	return c, nil
@@ -118,9 +80,9 @@ func skipSpace(s string, i int) int {
 
 // parseNumber reads one number of a code starting at s[i]; it returns the
 // number and the offset after it. Its errors lack Func and Input.
-func parseNumber(s string, i int) (Number, int, *ParseError) {
-	syntax := func(pos int, detail string) (Number, int, *ParseError) {
-		return Number{}, pos, &ParseError{Pos: pos, Err: units.ErrSyntax, Detail: detail}
+func parseNumber(s string, i int) (Number, int, *units.ParseError) {
+	syntax := func(pos int, detail string) (Number, int, *units.ParseError) {
+		return Number{}, pos, &units.ParseError{Pos: pos, Err: units.ErrSyntax, Detail: detail}
 	}
 	if i == len(s) {
 		return syntax(i, "want a number, -, * or >28")
@@ -144,7 +106,7 @@ func parseNumber(s string, i int) (Number, int, *ParseError) {
 }
 
 // parseDigits reads one or two decimal digits, value 0…28, at s[i].
-func parseDigits(s string, i int, m Mark) (Number, int, *ParseError) {
+func parseDigits(s string, i int, m Mark) (Number, int, *units.ParseError) {
 	j, v := i, 0
 	for j < len(s) && isDigit(s[j]) && j-i < 3 {
 		v = v*10 + int(s[j]-'0')
@@ -156,11 +118,11 @@ func parseDigits(s string, i int, m Mark) (Number, int, *ParseError) {
 		if r, _ := utf8.DecodeRuneInString(s[i:]); i < len(s) && r == utf8.RuneError {
 			detail = "invalid UTF-8"
 		}
-		return Number{}, i, &ParseError{Pos: i, Err: units.ErrSyntax, Detail: detail}
+		return Number{}, i, &units.ParseError{Pos: i, Err: units.ErrSyntax, Detail: detail}
 	case j-i > 2:
-		return Number{}, i, &ParseError{Pos: i, Err: units.ErrSyntax, Detail: "a scale number has one or two digits"}
+		return Number{}, i, &units.ParseError{Pos: i, Err: units.ErrSyntax, Detail: "a scale number has one or two digits"}
 	case v > MaxScale:
-		return Number{}, i, &ParseError{Pos: i, Err: units.ErrRange, Detail: "scale numbers run from 0 to 28 (>28 above the table)"}
+		return Number{}, i, &units.ParseError{Pos: i, Err: units.ErrRange, Detail: "scale numbers run from 0 to 28 (>28 above the table)"}
 	}
 	return Number{Scale: v, Mark: m}, j, nil
 }
