@@ -4,6 +4,7 @@ import (
 	"math"
 	"sort"
 	"strings"
+	"unicode"
 	"unicode/utf8"
 )
 
@@ -419,6 +420,8 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 		return nil
 	}
 	var cs []cand
+	var d distance
+	ra := []rune(word)
 	limit := 2 + runes/3 // in half-edits
 	for s, i := range spellings {
 		if t != nil && unitTable[i].dim != t.dim {
@@ -427,8 +430,8 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 		if diff := utf8.RuneCountInString(s) - runes; 2*diff > limit || -2*diff > limit {
 			continue
 		}
-		if d := editDistance(word, s); d <= limit {
-			cs = append(cs, cand{s, d})
+		if dist := d.between(ra, s); dist <= limit {
+			cs = append(cs, cand{s, dist})
 		}
 	}
 	sort.Slice(cs, func(i, j int) bool {
@@ -448,8 +451,23 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 // runes (Levenshtein plus adjacent transpositions), in units of half an
 // edit: a change of letter case costs 1, any other edit 2.
 func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	pp, prev, cur := make([]int, len(rb)+1), make([]int, len(rb)+1), make([]int, len(rb)+1)
+	var d distance
+	return d.between([]rune(a), b)
+}
+
+// distance holds the buffers of editDistance, reused across calls.
+type distance struct {
+	rb            []rune
+	pp, prev, cur []int
+}
+
+func (d *distance) between(ra []rune, b string) int {
+	d.rb = append(d.rb[:0], []rune(b)...)
+	rb, n := d.rb, len(d.rb)+1
+	if cap(d.pp) < n {
+		d.pp, d.prev, d.cur = make([]int, n), make([]int, n), make([]int, n)
+	}
+	pp, prev, cur := d.pp[:n], d.prev[:n], d.cur[:n]
 	for j := range prev {
 		prev[j] = 2 * j
 	}
@@ -477,4 +495,6 @@ func subCost(x, y rune) int {
 	return 2
 }
 
-func sameFold(x, y rune) bool { return x == y || strings.EqualFold(string(x), string(y)) }
+func sameFold(x, y rune) bool {
+	return x == y || unicode.SimpleFold(x) == y || unicode.SimpleFold(y) == x
+}
