@@ -23,7 +23,7 @@ type family struct {
 	thermal   func(sg float64) ThermalModel
 }
 
-var mineralBulk = BulkModel{K0: 1500 * units.Megapascal, M: 10, C: 0.0055, Gamma: 1.15}
+var mineralBulk = BulkModel{K0: 1.5 * units.Gigapascal, M: 10, C: 0.0055, Gamma: 1.15}
 
 var families = map[Class]family{
 	HM: {vi: 100, grades: []Grade{VG15, VG22, VG32, VG46, VG68, VG100},
@@ -34,7 +34,7 @@ var families = map[Class]family{
 		expansion: 6.5e-4, bulk: mineralBulk, thermal: cragoeThermal},
 	HFC: {vi: 190, grades: []Grade{VG22, VG32, VG46, VG68},
 		density: func(Grade) float64 { return 1080 }, pourPoint: func(Grade) float64 { return -40 },
-		expansion: 6.5e-4, bulk: BulkModel{K0: 3000 * units.Megapascal, M: 6, C: 0.002, Gamma: 1.05},
+		expansion: 6.5e-4, bulk: BulkModel{K0: 3 * units.Gigapascal, M: 6, C: 0.002, Gamma: 1.05},
 		thermal: func(float64) ThermalModel { return ThermalModel{C40: 3300, CSlope: 2, K40: 0.42, KSlope: 0.0005} }},
 	HFDU: {vi: 185, grades: []Grade{VG32, VG46, VG68},
 		density: func(Grade) float64 { return 920 }, pourPoint: func(Grade) float64 { return -30 },
@@ -44,7 +44,7 @@ var families = map[Class]family{
 		expansion: 7.5e-4, bulk: esterBulk, thermal: esterThermal},
 }
 
-var esterBulk = BulkModel{K0: 1700 * units.Megapascal, M: 10, C: 0.005, Gamma: 1.15}
+var esterBulk = BulkModel{K0: 1.7 * units.Gigapascal, M: 10, C: 0.005, Gamma: 1.15}
 
 func esterThermal(float64) ThermalModel {
 	return ThermalModel{C40: 2000, CSlope: 3, K40: 0.15, KSlope: -0.0001}

@@ -97,7 +97,7 @@
 //   - Volume: m³ m3 m^3 cu m; L l litre liter dm³ dm3; mL ml; cm³ cm3 cm^3 cc ccm; in³ in3 in^3 cu in cuin cid; gal US gal USgal usgal gal(US); UK gal UKgal imp gal gal(UK)
 //   - Mass: kg; g; t tonne; lbm lb
 //   - Force: N; kN; lbf; kgf kp
-//   - Pressure: Pa; kPa; MPa N/mm² N/mm2; bar barg bar(g) bar g; mbar; psi psig psi(g) lbf/in² lbf/in2; ksi; kgf/cm² kgf/cm2 at; inHg in Hg "Hg
+//   - Pressure: Pa; kPa; MPa N/mm² N/mm2; GPa; bar barg bar(g) bar g; mbar; psi psig psi(g) lbf/in² lbf/in2; ksi; kgf/cm² kgf/cm2 at; inHg in Hg "Hg
 //   - AbsolutePressure: Pa(a) Pa abs; kPa(a) kPaa kPa abs; MPa(a) MPa abs; bara bar(a) bar a bar abs; psia psi(a) psi abs; atm
 //   - Flow: m³/s m3/s m^3/s; L/min l/min lpm LPM; L/s l/s; m³/h m3/h m^3/h; gpm GPM US gpm gal/min; in³/s in3/s in^3/s
 //   - Velocity: m/s; mm/s; ft/s fps; in/s ips; ft/min fpm

@@ -103,6 +103,7 @@ var quantities = []quantity{
 			{"Pascal", "1", "is the SI unit of pressure.", "Pascals", "Pa", nil, "", "", false},
 			{"Kilopascal", "1e3", "is 10³ Pa.", "Kilopascals", "kPa", nil, "", "", false},
 			{"Megapascal", "1e6", "is 10⁶ Pa (one N/mm²).", "Megapascals", "MPa", []string{"N/mm²", "N/mm2"}, "", "", false},
+			{"Gigapascal", "1e9", "is 10⁹ Pa, the usual unit of bulk and elastic moduli.", "Gigapascals", "GPa", nil, "", "", false},
 			{"Bar", "barPa", "is 10⁵ Pa exactly (NIST SP 811).", "Bar", "bar", []string{"barg", "bar(g)", "bar g"}, "", "refGauge", false},
 			{"Millibar", "1e-3 * barPa", "is 100 Pa.", "Millibar", "mbar", nil, "", "", false},
 			{"PSI", "psiPa", "is one pound-force per square inch, ≈ 6894.757 Pa (exact ratio, NIST SP 811).", "PSI", "psi", []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}, "", "refGauge", false},

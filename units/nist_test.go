@@ -89,6 +89,7 @@ var nistTable = []nistRow{
 	{sym: "Pa", def: "1", c: float64(Pascal)},
 	{sym: "kPa", def: "1000", c: float64(Kilopascal)},
 	{sym: "MPa", def: "1000000", c: float64(Megapascal)},
+	{sym: "GPa", def: "1000000000", c: float64(Gigapascal)},
 	{sym: "bar", def: "100000", c: float64(Bar)},
 	{sym: "mbar", def: "100", c: float64(Millibar)},
 	{sym: "psi", def: "0.45359237*9.80665/0.0254/0.0254", c: float64(PSI), printed: 6.894757e3},
@@ -366,7 +367,7 @@ func TestNISTAliases(t *testing.T) {
 // a quotient of two correctly rounded factors, so it may differ by the
 // rounding of that division and of its inputs: at most 2 ulp.
 var issueUnits = []struct{ spelling, def string }{
-	{"Pa", "1"}, {"kPa", "1000"}, {"MPa", "1000000"}, {"bar", "100000"}, {"mbar", "100"},
+	{"Pa", "1"}, {"kPa", "1000"}, {"MPa", "1000000"}, {"GPa", "1000000000"}, {"bar", "100000"}, {"mbar", "100"},
 	{"psi", "0.45359237*9.80665/0.0254/0.0254"}, {"ksi", "1000*0.45359237*9.80665/0.0254/0.0254"},
 	{"kgf/cm²", "98066.5"}, {"inHg", "13595.1*9.80665*0.0254"}, {"atm", "101325"},
 	{"mm", "0.001"}, {"cm", "0.01"}, {"m", "1"}, {"µm", "0.000001"}, {"in", "0.0254"}, {"ft", "0.3048"},

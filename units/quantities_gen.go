@@ -588,6 +588,8 @@ const (
 	Kilopascal Pressure = 1e3
 	// Megapascal is 10⁶ Pa (one N/mm²).
 	Megapascal Pressure = 1e6
+	// Gigapascal is 10⁹ Pa, the usual unit of bulk and elastic moduli.
+	Gigapascal Pressure = 1e9
 	// Bar is 10⁵ Pa exactly (NIST SP 811).
 	Bar Pressure = barPa
 	// Millibar is 100 Pa.
@@ -610,6 +612,9 @@ func (q Pressure) Kilopascals() float64 { return float64(q / Kilopascal) }
 
 // Megapascals returns q as a number of MPa.
 func (q Pressure) Megapascals() float64 { return float64(q / Megapascal) }
+
+// Gigapascals returns q as a number of GPa.
+func (q Pressure) Gigapascals() float64 { return float64(q / Gigapascal) }
 
 // Bar returns q as a number of bar.
 func (q Pressure) Bar() float64 { return float64(q / Bar) }
@@ -2994,26 +2999,26 @@ const (
 	metricVolume                  = 12
 	metricMass                    = 18
 	metricForce                   = 23
-	metricPressure                = 29
-	metricAbsolutePressure        = 38
-	metricFlow                    = 42
-	metricVelocity                = 47
-	metricDisplacement            = 53
-	metricRotationalSpeed         = 56
-	metricTorque                  = 58
-	metricPower                   = 63
-	metricEnergy                  = 68
-	metricTemperature             = 74
-	metricTemperatureDifference   = 76
-	metricKinematicViscosity      = 83
-	metricDynamicViscosity        = 87
-	metricDensity                 = 90
-	metricSpecificHeatCapacity    = 96
-	metricHeatTransferCoefficient = 98
-	metricThermalConductivity     = 100
-	metricStiffness               = 104
-	metricFrequency               = 106
-	metricAcceleration            = 108
+	metricPressure                = 30
+	metricAbsolutePressure        = 39
+	metricFlow                    = 43
+	metricVelocity                = 48
+	metricDisplacement            = 54
+	metricRotationalSpeed         = 57
+	metricTorque                  = 59
+	metricPower                   = 64
+	metricEnergy                  = 69
+	metricTemperature             = 75
+	metricTemperatureDifference   = 77
+	metricKinematicViscosity      = 84
+	metricDynamicViscosity        = 88
+	metricDensity                 = 91
+	metricSpecificHeatCapacity    = 97
+	metricHeatTransferCoefficient = 99
+	metricThermalConductivity     = 101
+	metricStiffness               = 105
+	metricFrequency               = 107
+	metricAcceleration            = 109
 )
 
 // unitTable lists every unit: canonical symbol, factor to SI, offset, dimension, reference.
@@ -3047,6 +3052,7 @@ var unitTable = [...]unitDef{
 	{sym: "Pa", factor: 1, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "kPa", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "MPa", factor: 1e6, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"N/mm²", "N/mm2"}},
+	{sym: "GPa", factor: 1e9, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "bar", factor: barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"barg", "bar(g)", "bar g"}},
 	{sym: "mbar", factor: 1e-3 * barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "psi", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}},
