@@ -108,7 +108,10 @@ func (m BulkModel) Modulus(kind BulkKind, t units.Temperature, p units.Pressure)
 	if kind >= IsentropicTangent {
 		k *= m.Gamma
 	}
-	return units.Pressure(k), validate.Result(fn, "K", k)
+	if err := validate.Result(fn, "K", k); err != nil {
+		return 0, err
+	}
+	return units.Pressure(k), nil
 }
 
 // secant returns p/(1 − V/V₀) with V/V₀ = exp(−ln(1 + M·p/K₀)/M), written
@@ -220,5 +223,8 @@ func TubeBulkModulus(di, do units.Length, e units.Pressure, nu float64) (units.P
 	}
 	ri2, ro2 := float64(di*di)/4, float64(do*do)/4
 	b := float64(e) / (2 * ((ro2+ri2)/(ro2-ri2) + nu))
-	return units.Pressure(b), validate.Result(fn, "B", b)
+	if err := validate.Result(fn, "B", b); err != nil {
+		return 0, err
+	}
+	return units.Pressure(b), nil
 }

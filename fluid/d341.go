@@ -73,7 +73,11 @@ func CurveThrough(t1 units.Temperature, v1 units.KinematicViscosity, t2 units.Te
 	if !(b > 0) {
 		return Curve{}, validate.Fail(fn, "v2", v2, "a viscosity that falls as temperature rises (v2 < v1 when t2 > t1)")
 	}
-	return newCurve(y1+b*x1, b), nil
+	c := newCurve(y1+b*x1, b)
+	if !c.rangeFinite() {
+		return Curve{}, validate.Fail(fn, "t2", t2, "points whose curve crosses 0.21–2·10⁷ mm²/s at finite temperatures above 0 K")
+	}
+	return c, nil
 }
 
 // NewCurve returns the D341 curve with constants a and b (B > 0), for
@@ -87,7 +91,7 @@ func NewCurve(a, b float64) (Curve, error) {
 		return Curve{}, err
 	}
 	c := newCurve(a, b)
-	if !(c.hi > c.lo && c.lo > 0) || math.IsInf(float64(c.hi), 0) {
+	if !c.rangeFinite() {
 		return Curve{}, validate.Fail(fn, "a", a, "constants whose curve crosses 0.21–2·10⁷ mm²/s above 0 K")
 	}
 	return c, nil
@@ -98,6 +102,12 @@ func newCurve(a, b float64) Curve {
 	c.lo = c.temperatureAt(MaxViscosity.SquareMillimetresPerSecond())
 	c.hi = c.temperatureAt(MinViscosity.SquareMillimetresPerSecond())
 	return c
+}
+
+// rangeFinite reports whether the curve's valid range is a finite,
+// non-empty span above 0 K.
+func (c Curve) rangeFinite() bool {
+	return c.hi > c.lo && c.lo > 0 && !math.IsInf(float64(c.hi), 0)
 }
 
 // A returns the constant A of log log Z = A − B·log T (T in K, ν in mm²/s).

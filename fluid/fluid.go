@@ -110,7 +110,11 @@ func (f Fluid) Density(t units.Temperature, p units.Pressure) (units.Density, er
 	if err := checkPropertyInputs(fn, t, p); err != nil {
 		return 0, err
 	}
-	return f.density(t, p), nil
+	rho := f.density(t, p)
+	if err := validate.Result(fn, "density", rho); err != nil {
+		return 0, err
+	}
+	return rho, nil
 }
 
 func (f Fluid) checkDensity(fn string) error {
@@ -141,7 +145,11 @@ func (f Fluid) DynamicViscosity(t units.Temperature, p units.Pressure) (units.Dy
 	if err != nil {
 		return 0, err
 	}
-	return units.DynamicViscosity(float64(nu) * float64(rho)), nil
+	mu := units.DynamicViscosity(float64(nu) * float64(rho))
+	if err := validate.Result("fluid.Fluid.DynamicViscosity", "μ", mu); err != nil {
+		return 0, err
+	}
+	return mu, nil
 }
 
 // SpecificHeat returns the specific heat capacity at temperature t from

@@ -127,7 +127,8 @@ func (g *Grade) UnmarshalText(text []byte) error {
 // viscosity at 40 °C. ISO 3448's ±10 % bands leave gaps between grades
 // (35.2 to 41.4 mm²/s between VG 32 and VG 46, for example); a viscosity in
 // a gap, or outside 1.98–1650 mm²/s, gives an error matching ErrNoGrade that
-// names the neighbouring grades. Bad input matches units.ErrRange.
+// names the neighbouring grades. The limits belong to their grade (to
+// round-off). Bad input matches units.ErrRange.
 func GradeOf(v40 units.KinematicViscosity) (Grade, error) {
 	const fn = "fluid.GradeOf"
 	if err := validate.Positive(fn, "v40", v40); err != nil {
@@ -137,15 +138,22 @@ func GradeOf(v40 units.KinematicViscosity) (Grade, error) {
 	var below *gradeRow
 	for i := range iso3448 {
 		r := &iso3448[i]
-		if v >= r.min && v <= r.max {
+		lo, hi := r.min*(1-limitSlack), r.max*(1+limitSlack)
+		if v >= lo && v <= hi {
 			return r.g, nil
 		}
-		if v > r.max {
+		if v > hi {
 			below = r
 		}
 	}
 	return 0, &GradeError{V40: v40, below: below}
 }
+
+// limitSlack widens each grade's limits by a relative 10⁻¹², far below the
+// three digits ISO 3448 prints, so that a limit written in another unit
+// (50.6e-6 m²/s is 50.60000000000001 mm²/s in float64) still counts as the
+// limit, which ISO 3448 includes in the grade.
+const limitSlack = 1e-12
 
 // GradeError reports a 40 °C viscosity that lies in no ISO 3448 grade. It
 // unwraps to ErrNoGrade.

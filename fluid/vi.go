@@ -95,7 +95,8 @@ func ReferenceViscosities(v100 units.KinematicViscosity) (l, h units.KinematicVi
 }
 
 // RoundVI rounds a viscosity index as ASTM D2270 reports it: to the nearest
-// whole number, halves to the even neighbour.
+// whole number, halves to the even neighbour. Like math.RoundToEven, it
+// returns NaN and ±Inf unchanged; ViscosityIndex never returns them.
 func RoundVI(vi float64) float64 { return math.RoundToEven(vi) }
 
 // V100ForVI returns the 100 °C viscosity that gives an oil of 40 °C
