@@ -31,8 +31,11 @@ func SayboltSeconds(v units.KinematicViscosity) (float64, error) {
 	return sus(v.SquareMillimetresPerSecond()), nil
 }
 
+// sus is the D2161 SUS of ν in mm²/s. The branch test allows a relative
+// 10⁻¹² so that 500 mm²/s given in m²/s (500.00000000000006 mm²/s in
+// float64) takes the equation, as the standard says for ν ≤ 500.
 func sus(nu float64) float64 {
-	if nu > susLinearFrom {
+	if nu > susLinearFrom*(1+1e-12) {
 		return 4.632 * nu
 	}
 	return 4.6324*nu + (1+0.03264*nu)/((3930.2+262.7*nu+23.97*nu*nu+1.646*nu*nu*nu)*1e-5)

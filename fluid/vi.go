@@ -102,7 +102,11 @@ func RoundVI(vi float64) float64 { return math.RoundToEven(vi) }
 // V100ForVI returns the 100 °C viscosity that gives an oil of 40 °C
 // viscosity v40 the viscosity index vi (the inverse of ViscosityIndex in its
 // second argument). It solves ViscosityIndex(v40, Y) = vi for Y by bisection
-// on log Y to round-off; VI rises with Y at fixed v40, so the root is unique.
+// on log Y to round-off; VI rises with Y at fixed v40, so the root is
+// unique, except that Table 1 and the quadratics meet at Y = 70 mm²/s with a
+// step of about 0.03 % in L and H: there VI drops by about 0.02 just above
+// 70 mm²/s, and a VI reached at Y = 70 is reached again about 0.01 mm²/s
+// higher (the result may be either).
 // v40 must exceed 2 mm²/s, and vi must lie between the VI at Y = 2 mm²/s and
 // the VI as Y approaches v40 (the error gives that span).
 func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosity, error) {
