@@ -45,7 +45,9 @@ func (k BulkKind) String() string {
 }
 
 // BulkModel describes a liquid's bulk modulus. The isothermal tangent
-// modulus is taken linear in gauge pressure p and exponential in temperature:
+// modulus is taken linear in gauge pressure p and exponential in temperature
+// (a usual engineering model, common practice; the coefficients are the
+// caller's or the presets' typical values):
 //
 //	K_T(t, p) = K₀·exp(−C·(t − 40 °C)) + M·p
 //
@@ -149,8 +151,8 @@ type EffectiveBulk struct {
 }
 
 // At returns the effective bulk modulus at absolute pressure p by the
-// series-compliance form (as in Merritt, Hydraulic Control Systems, 1967,
-// section 2.3, from memory):
+// series-compliance form (as in Merritt, Hydraulic Control Systems, Wiley,
+// 1967, chapter on fluid properties, from memory):
 //
 //	1/Bₑ = 1/B_liquid + (V_a/V_t)/(n·p) + 1/B_container
 //
@@ -198,15 +200,21 @@ func airShare(x0, n, p float64) float64 {
 
 // TubeBulkModulus returns the container modulus V/(dV/dp) of a thick-walled
 // tube of inner and outer diameters di and do, Young's modulus e and
-// Poisson's ratio nu, closed ends not restraining the bore:
+// Poisson's ratio nu, with no axial stress in the wall (open ends, or end
+// thrust carried by the structure) and the length held fixed:
 //
 //	B_c = E / (2·((r_o² + r_i²)/(r_o² − r_i²) + ν))
 //
 // from Lamé's thick-cylinder solution for the radial growth of the bore
 // (Δr_i/r_i = (p/E)·((r_o² + r_i²)/(r_o² − r_i²) + ν)) and ΔV/V = 2Δr_i/r_i
 // at fixed length (Timoshenko, Strength of Materials, Part II, from memory).
-// For thin walls it tends to E·s/d_i (s the wall). Steel tube: E ≈ 206 GPa,
-// ν ≈ 0.3. Hoses are far softer: use the hose maker's volumetric expansion.
+// For thin walls it tends to E·s/d_i (s the wall). A closed-ended tube
+// carries an axial stress that reduces the bracket by ν·r_i²/(r_o² − r_i²)
+// (same Lamé solution): this form is then softer by up to about ν/2 (15 %
+// for thin steel walls, 5 % at r_o = 2r_i), which errs on the safe side for
+// stiffness.
+// Steel tube: E ≈ 206 GPa, ν ≈ 0.3 (typical, from memory). Hoses are far
+// softer: use the hose maker's volumetric expansion.
 func TubeBulkModulus(di, do units.Length, e units.Pressure, nu float64) (units.Pressure, error) {
 	const fn = "fluid.TubeBulkModulus"
 	if err := validate.Positive(fn, "di", di); err != nil {

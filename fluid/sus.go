@@ -18,7 +18,7 @@ const (
 
 // SayboltSeconds returns the Saybolt Universal viscosity at 100 °F (37.8 °C),
 // in Saybolt Universal Seconds (SUS), of kinematic viscosity v, per
-// ASTM D2161 (section 5, equation (1)), ν in mm²/s:
+// ASTM D2161 (the equation as CHECKS.md gives it), ν in mm²/s:
 //
 //	SUS = 4.6324ν + (1 + 0.03264ν)/((3930.2 + 262.7ν + 23.97ν² + 1.646ν³)·10⁻⁵)
 //

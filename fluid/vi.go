@@ -13,7 +13,7 @@ const minVIY = 2 * units.SquareMillimetrePerSecond
 
 // ViscosityIndex returns the viscosity index of an oil with kinematic
 // viscosity v40 at 40 °C (U) and v100 at 100 °C (Y), per ASTM D2270
-// (ASTM D2270-10(2016), sections 7.1 and 7.2), unrounded:
+// (ASTM D2270-10(2016); VI 0–100 and VI ≥ 100), unrounded:
 //
 //	U > H:  VI = (L − U)/(L − H)·100                          (VI ≤ 100)
 //	U ≤ H:  N = (log H − log U)/log Y,  VI = (10^N − 1)/0.00715 + 100

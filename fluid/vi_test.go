@@ -38,7 +38,8 @@ func TestViscosityIndexExamples(t *testing.T) {
 }
 
 // The VI of the reference oils is 0 (U = L) and 100 (U = H) by definition
-// of L and H (ASTM D2270, section 3), for table and quadratic Y alike.
+// of L and H (ASTM D2270 [S]: L and H are the 40 °C viscosities of the
+// VI 0 and VI 100 reference oils), for table and quadratic Y alike.
 func TestViscosityIndexReferenceOils(t *testing.T) {
 	for _, y := range []float64{2, 2.05, 8.86, 19.95, 45.25, 70, 70.5, 150} {
 		l, h, err := ReferenceViscosities(mm2s(y))
@@ -88,7 +89,7 @@ func TestD2270TableMatchesCSV(t *testing.T) {
 	}
 }
 
-// Interpolation is linear between rows (ASTM D2270, 7.1): halfway between
+// Interpolation is linear between rows (ASTM D2270 [S], CHECKS.md): halfway between
 // 8.8 and 8.9 mm²/s lies halfway between their L and H.
 func TestReferenceViscositiesInterpolate(t *testing.T) {
 	l0, h0, _ := ReferenceViscosities(mm2s(8.8))
