@@ -225,7 +225,69 @@ func BenchmarkCurveAt(b *testing.B) {
 
 func BenchmarkCurveAtThin(b *testing.B) {
 	c, _ := CurveThrough(celsius(40), mm2s(10), celsius(100), mm2s(2.6))
-	t := celsius(150) // ≈ 1.2 mm²/s: Newton refinement runs
+	t := celsius(150) // ≈ 1.5 mm²/s: Newton refinement runs, first step calls math.Exp
+	b.ReportAllocs()
+	for b.Loop() {
+		v, _ := c.At(t)
+		sinkV += v
+	}
+}
+
+// expFrom (exp(x) from a known exp(x − d)) matches math.Exp to 4e-16
+// relative (Taylor truncation below 2.7e-16 plus rounding), plus
+// 2.3e-16·|x| for the rounding of x − d in the test's own input, on both
+// sides of its guard, and falls back to math.Exp for large or NaN d.
+func TestExpFrom(t *testing.T) {
+	for _, x := range []float64{-1.6, -3.5, -9, -20} {
+		for _, d := range []float64{0, 1e-9, -1e-5, 1e-3, -1.5e-3, maxTaylorStep, -maxTaylorStep, 3e-3, -0.05, 2} {
+			got, want := expFrom(math.Exp(x-d), d, x), math.Exp(x)
+			if !near(got, want, 4e-16+2.3e-16*math.Abs(x)) {
+				t.Errorf("expFrom(exp(%g − %g)) = %.17g, want %.17g", x, d, got, want)
+			}
+		}
+		if got := expFrom(0, math.NaN(), x); got != math.Exp(x) {
+			t.Errorf("expFrom with NaN d = %g, want math.Exp", got)
+		}
+	}
+}
+
+// The low-viscosity inverse (D341 explicit start, Newton steps reusing the
+// previous exponential) is exact to round-off over its whole span: dense
+// sweep of 0.21–7.5 mm²/s, 1e-14 relative (one ulp of Z ≈ 1.06 is already
+// 1e-15 of ν at 0.21 mm²/s, since dZ/dν ≈ 0.6 there), and the thin end of a curve
+// round-trips At → TemperatureFor → At to 1e-13.
+func TestNuFromZDense(t *testing.T) {
+	for nu := 0.21; nu < 7.5; nu *= 1.0003 {
+		if got := nuFromZ(zOf(nu)); !near(got, nu, 1e-14) {
+			t.Fatalf("nuFromZ(Z(%.17g)) = %.17g", nu, got)
+		}
+	}
+	c, err := CurveThrough(celsius(40), mm2s(10), celsius(100), mm2s(2.6))
+	if err != nil {
+		t.Fatal(err)
+	}
+	hot, _ := c.TemperatureFor(mm2s(7.5))
+	_, hi := c.Range()
+	for k := 0; k <= 1000; k++ {
+		tt := hot + (hi-hot)*units.Temperature(k)/1000
+		v, err := c.At(tt)
+		if err != nil {
+			t.Fatal(err)
+		}
+		back, err := c.TemperatureFor(v)
+		if err != nil {
+			t.Fatal(err)
+		}
+		v2, _ := c.At(back)
+		if !near(float64(v2), float64(v), 1e-13) || !near(float64(back), float64(tt), 1e-13) {
+			t.Errorf("T %v → ν %v → T %v → ν %v", tt, v, back, v2)
+		}
+	}
+}
+
+func BenchmarkCurveAtVeryThin(b *testing.B) {
+	c, _ := CurveThrough(celsius(40), mm2s(10), celsius(100), mm2s(2.6))
+	t, _ := c.TemperatureFor(mm2s(0.8)) // both Newton steps reuse an exponential
 	b.ReportAllocs()
 	for b.Loop() {
 		v, _ := c.At(t)

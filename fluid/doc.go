@@ -6,7 +6,7 @@
 // effective bulk modulus with entrained air and container compliance).
 //
 // A Curve is the D341 line through two measured viscosities; Curve.At is
-// the hot path (no allocation; a few exponentials, about three times
+// the hot path (no allocation; a few exponentials, two to three times
 // slower below 7 mm²/s where D341's low-viscosity term needs Newton
 // refinement), fit for a service that reads an oil temperature from a PLC
 // thousands of times a second. A Fluid
