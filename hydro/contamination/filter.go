@@ -126,8 +126,7 @@ func (r Rating) String() string {
 // > 0, beta finite and ≥ 1 (units.ErrRange).
 func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error) {
 	const fn = "contamination.SteadyState"
-	qml, err := checkBalance(fn, perMinute, q)
-	if err != nil {
+	if err := checkBalance(fn, perMinute, q); err != nil {
 		return 0, err
 	}
 	if err := checkBeta(fn, beta); err != nil {
@@ -137,7 +136,7 @@ func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error)
 	if capture == 0 {
 		return 0, fmt.Errorf("%s: beta = 1 catches nothing: %w", fn, ErrUnreachable)
 	}
-	c := perMinute / (qml * capture)
+	c := mulDiv(perMinute, millilitrePerMinute, 1, float64(q), capture, 1)
 	return c, validate.Result(fn, "concentration", c)
 }
 
@@ -151,17 +150,16 @@ func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error)
 // (units.ErrRange).
 func RequiredBeta(perMinute float64, q units.Flow, perML float64) (float64, error) {
 	const fn = "contamination.RequiredBeta"
-	qml, err := checkBalance(fn, perMinute, q)
-	if err != nil {
+	if err := checkBalance(fn, perMinute, q); err != nil {
 		return 0, err
 	}
 	if err := validate.Positive(fn, "perML", perML); err != nil {
 		return 0, err
 	}
-	share := perMinute / (qml * perML) // fraction that must be caught
+	share := mulDiv(perMinute, millilitrePerMinute, 1, float64(q), perML, 1) // fraction that must be caught
 	if !(share < 1) {
 		return 0, fmt.Errorf("%s: ingress %g /min needs at least %g mL/min through a perfect filter to hold %g /mL, have %g mL/min: %w",
-			fn, perMinute, perMinute/perML, perML, qml, ErrUnreachable)
+			fn, perMinute, perMinute/perML, perML, q.LitresPerMinute()*1000, ErrUnreachable)
 	}
 	b := 1 / (1 - share)
 	return b, validate.Result(fn, "beta", b)
@@ -202,17 +200,29 @@ func TimeConstant(v units.Volume, q units.Flow, beta float64) (time.Duration, er
 	return time.Duration(s * float64(time.Second)), nil
 }
 
-// checkBalance checks an ingress rate and a flow and returns the flow in
-// mL/min.
-func checkBalance(fn string, perMinute float64, q units.Flow) (float64, error) {
+// checkBalance checks an ingress rate and a flow.
+func checkBalance(fn string, perMinute float64, q units.Flow) error {
 	if err := validate.NonNegative(fn, "perMinute", perMinute); err != nil {
-		return 0, err
+		return err
 	}
-	if err := validate.Positive(fn, "q", q); err != nil {
-		return 0, err
-	}
-	qml := q.LitresPerMinute() * 1000
-	return qml, validate.Result(fn, "q in mL/min", qml)
+	return validate.Positive(fn, "q", q)
+}
+
+// millilitrePerMinute is 1 mL/min in m³/s.
+const millilitrePerMinute = float64(units.LitrePerMinute) / 1000
+
+// mulDiv returns a·b·c ÷ (d·e·f) for finite a, b, c ≥ 0 and d, e, f > 0
+// without spurious overflow or underflow in the intermediate products: the
+// mantissas and the binary exponents are combined separately, so the result
+// is +Inf or 0 only when the true result is beyond float64's range.
+func mulDiv(a, b, c, d, e, f float64) float64 {
+	ma, ea := math.Frexp(a)
+	mb, eb := math.Frexp(b)
+	mc, ec := math.Frexp(c)
+	md, ed := math.Frexp(d)
+	me, ee := math.Frexp(e)
+	mf, ef := math.Frexp(f)
+	return math.Ldexp(ma*mb*mc/(md*me*mf), ea+eb+ec-ed-ee-ef)
 }
 
 // ElementPoint is one clean-element pressure drop read from a filter data
@@ -240,7 +250,7 @@ func CleanDrop(at ElementPoint, q units.Flow, nu units.KinematicViscosity) (unit
 	if err := validate.Positive(fn, "nu", nu); err != nil {
 		return 0, err
 	}
-	dp := at.Drop * units.Pressure(float64(q)/float64(at.Flow)*(float64(nu)/float64(at.Viscosity)))
+	dp := units.Pressure(mulDiv(float64(at.Drop), float64(q), float64(nu), float64(at.Flow), float64(at.Viscosity), 1))
 	return dp, validate.Result(fn, "drop", dp)
 }
 
@@ -289,7 +299,11 @@ func CheckBypass(at ElementPoint, q units.Flow, nu units.KinematicViscosity, byp
 	if err != nil {
 		return BypassCheck{}, err
 	}
-	r := BypassCheck{Drop: dp, Bypass: bypass, Share: float64(dp / bypass)}
+	share := float64(dp / bypass)
+	if err := validate.Result(fn, "drop ÷ bypass", share); err != nil {
+		return BypassCheck{}, err
+	}
+	r := BypassCheck{Drop: dp, Bypass: bypass, Share: share}
 	r.Opens = dp >= bypass
 	r.Tight = r.Share > CleanShareLimit
 	switch {
