@@ -102,26 +102,12 @@ func (r Rating) String() string {
 	return string(b)
 }
 
-// Population balance, used by SteadyState, RequiredBeta and TimeConstant.
-// A well-mixed system of fluid volume V holds N particles of size ≥x,
-// concentration C = N/V. Particles enter at R per minute (ingress and wear,
-// all sizes ≥x); a full-flow filter passes flow Q and catches the fraction
-// 1 − 1/β of the particles reaching it:
-//
-//	dN/dt = R − Q·C·(1 − 1/β)
-//
-// Steady state: C = R / (Q·(1 − 1/β)). A step from C₀ settles as
-// C(t) = C + (C₀ − C)·exp(−t/τ), τ = V / (Q·(1 − 1/β)).
-// This is the standard population (mass) balance of a stirred tank with a
-// separator. It ignores settling in the tank, particles generated inside the
-// filter, the change of β as the element loads, and imperfect mixing:
-// treat results as estimates and confirm with samples.
-
 // SteadyState returns the steady concentration, particles ≥x per mL, that
 // a full-flow filter of beta ratio beta (at size x) holds for an ingress of
 // perMinute particles ≥x per minute and flow q through the filter:
-// C = R / (Q·(1 − 1/β)), Q in mL/min (standard population balance; see the
-// comment above). A beta of exactly 1 catches nothing and gives an error
+// C = R / (Q·(1 − 1/β)), R in particles per minute, Q in mL/min, C per mL
+// (the population balance of the package documentation, an estimate to be
+// confirmed with samples). A beta of exactly 1 catches nothing and gives an error
 // matching ErrUnreachable. perMinute must be finite and ≥ 0, q finite and
 // > 0, beta finite and ≥ 1 (units.ErrRange).
 func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error) {
@@ -143,8 +129,9 @@ func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error)
 // RequiredBeta returns the least beta ratio (at size x) that holds a
 // concentration of perML particles ≥x per mL for an ingress of perMinute
 // particles ≥x per minute and flow q through a full-flow filter:
-// β = 1 / (1 − R/(Q·C)), the steady state of the population balance solved
-// for β. When R ≥ Q·C no filter can hold the target (ErrUnreachable): more
+// β = 1 / (1 − R/(Q·C)), R per minute, Q in mL/min, C per mL: the steady
+// state of the population balance (package documentation) solved for β.
+// Zero ingress gives β = 1. When R ≥ Q·C no filter can hold the target (ErrUnreachable): more
 // flow through the filter, less ingress or an additional (off-line) filter
 // is needed. perMinute must be finite and ≥ 0, q and perML finite and > 0
 // (units.ErrRange).
@@ -177,8 +164,9 @@ func BetaForTarget(perMinute float64, q units.Flow, n int) (float64, error) {
 	return RequiredBeta(perMinute, q, upper[n])
 }
 
-// TimeConstant returns τ = V / (Q·(1 − 1/β)), the time in which the
-// population balance closes about 63 % of the gap between the present and the
+// TimeConstant returns τ = V / (Q·(1 − 1/β)), V in m³ and Q in m³/s giving
+// seconds, the time in which the population balance (package documentation)
+// closes about 63 % of the gap between the present and the
 // steady concentration (about 95 % in 3τ). v is the system's fluid volume.
 // v and q must be finite and > 0, beta finite and > 1 (units.ErrRange);
 // results beyond time.Duration's range are refused.
@@ -286,10 +274,14 @@ type BypassCheck struct {
 }
 
 // CheckBypass scales a clean-element drop (CleanDrop) to flow q and
-// viscosity nu and compares it with the bypass valve setting. Check it at the
-// coldest start-up viscosity as well as at working temperature: a cold
-// start can open the bypass of a clean element. Inputs must be finite and
-// > 0 (units.ErrRange).
+// viscosity nu and compares it with the bypass valve setting: Share =
+// Δp ÷ bypass, Opens when Share ≥ 1, Tight above CleanShareLimit (common
+// practice). Check it at the coldest start-up viscosity as well as at
+// working temperature: a cold start can open the bypass of a clean element,
+// and an element in bypass passes unfiltered fluid. The result carries
+// cautions to show (clogging indicator, relieve pressure before opening a
+// housing, hot oil). Inputs must be finite and > 0, and the share finite
+// (units.ErrRange).
 func CheckBypass(at ElementPoint, q units.Flow, nu units.KinematicViscosity, bypass units.Pressure) (BypassCheck, error) {
 	const fn = "contamination.CheckBypass"
 	if err := validate.Positive(fn, "bypass", bypass); err != nil {
