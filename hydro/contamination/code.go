@@ -75,14 +75,15 @@ type Mark uint8
 const (
 	// MarkNone: a plain scale number, e.g. "16".
 	MarkNone Mark = iota
-	// MarkNotMeasured: the size was not measured, written "-" (e.g. -/16/13).
+	// MarkNotMeasured: the size was not measured, written "-" (e.g.
+	// -/16/13). Recalled from ISO 4406 practice (from memory).
 	MarkNotMeasured
 	// MarkFewCounted: fewer than 20 particles were counted in the size
 	// range, written "≥" before the number (e.g. 14/12/≥7); the true number
 	// may be higher. ISO 4406:2021.
 	MarkFewCounted
 	// MarkAbove: more than 2 500 000 particles per mL, above the table,
-	// written ">28".
+	// written ">28". Recalled from ISO 4406 practice (from memory).
 	MarkAbove
 	// MarkTooMany: too many particles to count (for example a microscope
 	// membrane covered), written "*". Recalled from ISO 4406 practice
@@ -143,7 +144,11 @@ func numberFor(perML float64, few bool) Number {
 // cumulative counts per mL at ≥4/≥6/≥14 µm(c) (Counter form), or two numbers
 // for ≥5/≥15 µm (Microscope form; N[2] is unused and zero).
 //
-// The zero Code is the counter code 0/0/0. Build codes with CodeFromCounts,
+// The zero Code is the counter code 0/0/0 (what CodeFromCounts(0, 0, 0)
+// returns): a valid and very clean code that String and MarshalText write as
+// "0/0/0". It does not mean "no code": a Code field left unset travels in
+// JSON as "0/0/0" and, as a sample, meets every target. Use *Code (null in
+// JSON) for a code that may be missing. Build codes with CodeFromCounts,
 // CodeFromSample, MakeCode or ParseCode; a Code put together by hand should be
 // checked with Validate.
 type Code struct {
@@ -284,6 +289,10 @@ func checkCounts(fn, nA, nB, nC string, a, b, c float64) error {
 // volume: each count is divided by the volume in mL and coded as in
 // CodeFromCounts, and a number whose raw count is below 20 is marked "≥"
 // (MarkFewCounted; ISO 4406:2021) unless it is above the table.
+//
+// Take samples per ISO 4021 through a sampling valve, never by cracking a
+// pressurised fitting: a pinhole jet can inject oil through the skin, and
+// hot oil burns.
 //
 // Raw counts are float64 so that averaged counts of several runs can be
 // given. They must be finite and ≥ 0 and must not grow with size; sample must

@@ -12,10 +12,16 @@
 // number is about a doubling of the count. An automatic counter calibrated
 // per ISO 11171 reports three numbers for ≥4/≥6/≥14 µm(c) (e.g. 18/16/13);
 // microscope counting (ISO 4407) reports two for ≥5/≥15 µm. A number from
-// fewer than 20 counted particles carries "≥" (14/12/≥7); "-" marks a size
-// not measured; ">28" a count above the table; "*" too many to count (the
-// last two recalled from practice, from memory). A count of exactly zero is
-// reported as scale number 0, the lowest row of the table.
+// fewer than 20 counted particles carries "≥" (14/12/≥7). "-" marks a size
+// not measured, ">28" a count above the table and "*" too many to count:
+// these three marks are recalled from practice (from memory), not confirmed
+// in the text of the standard. A count of exactly zero is reported as scale
+// number 0, the lowest row of the table (our choice: the row is "more than
+// 0", so the standard leaves zero open).
+//
+// The zero Code is the counter code 0/0/0, a real and very clean code; it
+// marshals to "0/0/0" and is not a marker for "no code". Use *Code (null in
+// JSON) for a code that may be missing.
 //
 // # Targets and filtration
 //
@@ -25,9 +31,27 @@
 // take precedence; callers can replace the table or the result.
 //
 // Filter performance follows ISO 16889: β_x(c) = upstream count ≥x ÷
-// downstream count ≥x, efficiency E = (1 − 1/β)·100 %. The steady-state
-// concentration a full-flow filter holds comes from a standard population
-// (mass) balance of a well-mixed system (see SteadyState).
+// downstream count ≥x, efficiency E = (1 − 1/β)·100 %.
+//
+// # Population balance
+//
+// SteadyState, RequiredBeta, BetaForTarget and TimeConstant use the particle
+// balance of a well-mixed system of fluid volume V holding N particles of
+// size ≥x, concentration C = N/V. Particles enter at R per minute (ingress
+// and wear, all ≥x); a full-flow filter passes flow Q and catches the
+// fraction 1 − 1/β of the particles that reach it (the definition of β,
+// ISO 16889):
+//
+//	dN/dt = R − Q·C·(1 − 1/β)
+//
+// Steady state: C = R / (Q·(1 − 1/β)); with R in particles per minute and Q
+// in mL/min, C is in particles per mL. A step from C₀ settles as
+// C(t) = C + (C₀ − C)·exp(−t/τ), τ = V / (Q·(1 − 1/β)). This is the
+// textbook mass balance of a stirred tank with a separator, written out here
+// from the definition of β; no published source is cited for it. It ignores
+// settling in the tank, particles made inside the filter, the change of β as
+// the element loads, flow surges and imperfect mixing: treat the results as
+// estimates and confirm them with samples.
 //
 // # Cautions
 //

@@ -102,32 +102,17 @@ func (r Rating) String() string {
 	return string(b)
 }
 
-// Population balance, used by SteadyState, RequiredBeta and TimeConstant.
-// A well-mixed system of fluid volume V holds N particles of size ≥x,
-// concentration C = N/V. Particles enter at R per minute (ingress and wear,
-// all sizes ≥x); a full-flow filter passes flow Q and catches the fraction
-// 1 − 1/β of the particles reaching it:
-//
-//	dN/dt = R − Q·C·(1 − 1/β)
-//
-// Steady state: C = R / (Q·(1 − 1/β)). A step from C₀ settles as
-// C(t) = C + (C₀ − C)·exp(−t/τ), τ = V / (Q·(1 − 1/β)).
-// This is the standard population (mass) balance of a stirred tank with a
-// separator. It ignores settling in the tank, particles generated inside the
-// filter, the change of β as the element loads, and imperfect mixing:
-// treat results as estimates and confirm with samples.
-
 // SteadyState returns the steady concentration, particles ≥x per mL, that
 // a full-flow filter of beta ratio beta (at size x) holds for an ingress of
 // perMinute particles ≥x per minute and flow q through the filter:
-// C = R / (Q·(1 − 1/β)), Q in mL/min (standard population balance; see the
-// comment above). A beta of exactly 1 catches nothing and gives an error
+// C = R / (Q·(1 − 1/β)), R in particles per minute, Q in mL/min, C per mL
+// (the population balance of the package documentation, an estimate to be
+// confirmed with samples). A beta of exactly 1 catches nothing and gives an error
 // matching ErrUnreachable. perMinute must be finite and ≥ 0, q finite and
 // > 0, beta finite and ≥ 1 (units.ErrRange).
 func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error) {
 	const fn = "contamination.SteadyState"
-	qml, err := checkBalance(fn, perMinute, q)
-	if err != nil {
+	if err := checkBalance(fn, perMinute, q); err != nil {
 		return 0, err
 	}
 	if err := checkBeta(fn, beta); err != nil {
@@ -137,31 +122,31 @@ func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error)
 	if capture == 0 {
 		return 0, fmt.Errorf("%s: beta = 1 catches nothing: %w", fn, ErrUnreachable)
 	}
-	c := perMinute / (qml * capture)
+	c := mulDiv(perMinute, millilitrePerMinute, 1, float64(q), capture, 1)
 	return c, validate.Result(fn, "concentration", c)
 }
 
 // RequiredBeta returns the least beta ratio (at size x) that holds a
 // concentration of perML particles ≥x per mL for an ingress of perMinute
 // particles ≥x per minute and flow q through a full-flow filter:
-// β = 1 / (1 − R/(Q·C)), the steady state of the population balance solved
-// for β. When R ≥ Q·C no filter can hold the target (ErrUnreachable): more
+// β = 1 / (1 − R/(Q·C)), R per minute, Q in mL/min, C per mL: the steady
+// state of the population balance (package documentation) solved for β.
+// Zero ingress gives β = 1. When R ≥ Q·C no filter can hold the target (ErrUnreachable): more
 // flow through the filter, less ingress or an additional (off-line) filter
 // is needed. perMinute must be finite and ≥ 0, q and perML finite and > 0
 // (units.ErrRange).
 func RequiredBeta(perMinute float64, q units.Flow, perML float64) (float64, error) {
 	const fn = "contamination.RequiredBeta"
-	qml, err := checkBalance(fn, perMinute, q)
-	if err != nil {
+	if err := checkBalance(fn, perMinute, q); err != nil {
 		return 0, err
 	}
 	if err := validate.Positive(fn, "perML", perML); err != nil {
 		return 0, err
 	}
-	share := perMinute / (qml * perML) // fraction that must be caught
+	share := mulDiv(perMinute, millilitrePerMinute, 1, float64(q), perML, 1) // fraction that must be caught
 	if !(share < 1) {
 		return 0, fmt.Errorf("%s: ingress %g /min needs at least %g mL/min through a perfect filter to hold %g /mL, have %g mL/min: %w",
-			fn, perMinute, perMinute/perML, perML, qml, ErrUnreachable)
+			fn, perMinute, perMinute/perML, perML, q.LitresPerMinute()*1000, ErrUnreachable)
 	}
 	b := 1 / (1 - share)
 	return b, validate.Result(fn, "beta", b)
@@ -179,8 +164,9 @@ func BetaForTarget(perMinute float64, q units.Flow, n int) (float64, error) {
 	return RequiredBeta(perMinute, q, upper[n])
 }
 
-// TimeConstant returns τ = V / (Q·(1 − 1/β)), the time in which the
-// population balance closes about 63 % of the gap between the present and the
+// TimeConstant returns τ = V / (Q·(1 − 1/β)), V in m³ and Q in m³/s giving
+// seconds, the time in which the population balance (package documentation)
+// closes about 63 % of the gap between the present and the
 // steady concentration (about 95 % in 3τ). v is the system's fluid volume.
 // v and q must be finite and > 0, beta finite and > 1 (units.ErrRange);
 // results beyond time.Duration's range are refused.
@@ -202,17 +188,29 @@ func TimeConstant(v units.Volume, q units.Flow, beta float64) (time.Duration, er
 	return time.Duration(s * float64(time.Second)), nil
 }
 
-// checkBalance checks an ingress rate and a flow and returns the flow in
-// mL/min.
-func checkBalance(fn string, perMinute float64, q units.Flow) (float64, error) {
+// checkBalance checks an ingress rate and a flow.
+func checkBalance(fn string, perMinute float64, q units.Flow) error {
 	if err := validate.NonNegative(fn, "perMinute", perMinute); err != nil {
-		return 0, err
+		return err
 	}
-	if err := validate.Positive(fn, "q", q); err != nil {
-		return 0, err
-	}
-	qml := q.LitresPerMinute() * 1000
-	return qml, validate.Result(fn, "q in mL/min", qml)
+	return validate.Positive(fn, "q", q)
+}
+
+// millilitrePerMinute is 1 mL/min in m³/s.
+const millilitrePerMinute = float64(units.LitrePerMinute) / 1000
+
+// mulDiv returns a·b·c ÷ (d·e·f) for finite a, b, c ≥ 0 and d, e, f > 0
+// without spurious overflow or underflow in the intermediate products: the
+// mantissas and the binary exponents are combined separately, so the result
+// is +Inf or 0 only when the true result is beyond float64's range.
+func mulDiv(a, b, c, d, e, f float64) float64 {
+	ma, ea := math.Frexp(a)
+	mb, eb := math.Frexp(b)
+	mc, ec := math.Frexp(c)
+	md, ed := math.Frexp(d)
+	me, ee := math.Frexp(e)
+	mf, ef := math.Frexp(f)
+	return math.Ldexp(ma*mb*mc/(md*me*mf), ea+eb+ec-ed-ee-ef)
 }
 
 // ElementPoint is one clean-element pressure drop read from a filter data
@@ -240,7 +238,7 @@ func CleanDrop(at ElementPoint, q units.Flow, nu units.KinematicViscosity) (unit
 	if err := validate.Positive(fn, "nu", nu); err != nil {
 		return 0, err
 	}
-	dp := at.Drop * units.Pressure(float64(q)/float64(at.Flow)*(float64(nu)/float64(at.Viscosity)))
+	dp := units.Pressure(mulDiv(float64(at.Drop), float64(q), float64(nu), float64(at.Flow), float64(at.Viscosity), 1))
 	return dp, validate.Result(fn, "drop", dp)
 }
 
@@ -276,10 +274,14 @@ type BypassCheck struct {
 }
 
 // CheckBypass scales a clean-element drop (CleanDrop) to flow q and
-// viscosity nu and compares it with the bypass valve setting. Check it at the
-// coldest start-up viscosity as well as at working temperature: a cold
-// start can open the bypass of a clean element. Inputs must be finite and
-// > 0 (units.ErrRange).
+// viscosity nu and compares it with the bypass valve setting: Share =
+// Δp ÷ bypass, Opens when Share ≥ 1, Tight above CleanShareLimit (common
+// practice). Check it at the coldest start-up viscosity as well as at
+// working temperature: a cold start can open the bypass of a clean element,
+// and an element in bypass passes unfiltered fluid. The result carries
+// cautions to show (clogging indicator, relieve pressure before opening a
+// housing, hot oil). Inputs must be finite and > 0, and the share finite
+// (units.ErrRange).
 func CheckBypass(at ElementPoint, q units.Flow, nu units.KinematicViscosity, bypass units.Pressure) (BypassCheck, error) {
 	const fn = "contamination.CheckBypass"
 	if err := validate.Positive(fn, "bypass", bypass); err != nil {
@@ -289,7 +291,11 @@ func CheckBypass(at ElementPoint, q units.Flow, nu units.KinematicViscosity, byp
 	if err != nil {
 		return BypassCheck{}, err
 	}
-	r := BypassCheck{Drop: dp, Bypass: bypass, Share: float64(dp / bypass)}
+	share := float64(dp / bypass)
+	if err := validate.Result(fn, "drop ÷ bypass", share); err != nil {
+		return BypassCheck{}, err
+	}
+	r := BypassCheck{Drop: dp, Bypass: bypass, Share: share}
 	r.Opens = dp >= bypass
 	r.Tight = r.Share > CleanShareLimit
 	switch {

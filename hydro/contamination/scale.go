@@ -38,8 +38,9 @@ const boundSlack = 1e-12
 //
 // A count of exactly zero lies below the table's lowest row (more than 0 up
 // to 0.01 per mL); it is reported as scale number 0, the lowest the table
-// has, so a clean reading never produces an error. Counts above 2 500 000
-// per mL return AboveTable (reported as ">28").
+// has, so a clean reading never produces an error (our choice, not the
+// standard's). Counts above 2 500 000
+// per mL return AboveTable (reported as ">28", from memory; see MarkAbove).
 //
 // perML must be finite and ≥ 0; otherwise the error matches units.ErrRange.
 // ScaleNumber does not allocate.

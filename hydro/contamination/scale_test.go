@@ -205,3 +205,50 @@ func BenchmarkScaleNumber(b *testing.B) {
 	}
 	_ = s
 }
+
+// TestSampleBoundsInEveryVolume codes raw counts that sit exactly on each
+// bound of ISO 4406:2021, Table 1 [S] once divided by the sample volume,
+// with the volume given in mL, L and m³ (conversions by the units package):
+// the count on the bound codes to the row ("up to and including"), a count
+// 10⁻⁹ above it to the next row (">28" past the top). 130 000 in 100 mL is
+// 1300 per mL, number 17; 130 001 is 18. Exact look-ups.
+func TestSampleBoundsInEveryVolume(t *testing.T) {
+	vols := []struct {
+		ml  float64
+		vol units.Volume
+	}{
+		{1, units.Millilitre}, {10, 10 * units.Millilitre}, {25, 25 * units.Millilitre},
+		{100, 100 * units.Millilitre}, {100, 0.1 * units.Litre}, {100, 1e-4 * units.CubicMetre},
+		{1000, units.Litre}, {1000, 1e-3 * units.CubicMetre}, {0.3, 0.3 * units.Millilitre},
+	}
+	for _, v := range vols {
+		for _, r := range iso4406Table1 {
+			on := r.to * v.ml
+			wantUp := Number{Scale: r.n + 1}
+			if r.n == MaxScale {
+				wantUp = Number{Scale: MaxScale, Mark: MarkAbove}
+			}
+			for _, c := range []struct {
+				count float64
+				want  Number
+			}{{on, Number{Scale: r.n}}, {on * (1 + 1e-9), wantUp}} {
+				got, err := CodeFromSample(c.count, c.count, c.count, v.vol)
+				if err != nil {
+					t.Fatal(err)
+				}
+				n := got.N[2]
+				if n.Mark == MarkFewCounted {
+					n.Mark = MarkNone
+				}
+				if n != c.want {
+					t.Errorf("%g counted in %v (%g per mL): %v, want %v", c.count, v.vol, c.count/v.ml, n, c.want)
+				}
+			}
+		}
+	}
+	// The same with the count per 100 mL that laboratories report:
+	// 130 000 per 100 mL → 1300 per mL → 17.
+	if c, err := CodeFromCounts(130000.0/100, 130000.0/100, 130000.0/100); err != nil || c.N[0].Scale != 17 {
+		t.Errorf("130 000 per 100 mL: %v, %v; want 17", c, err)
+	}
+}

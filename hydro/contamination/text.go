@@ -191,8 +191,9 @@ func (n Number) String() string {
 }
 
 // MarshalText writes the code as String does (encoding.TextMarshaler), so
-// codes travel in JSON as strings such as "18/16/13". It fails when c does
-// not pass Validate.
+// codes travel in JSON as strings such as "18/16/13"; the zero Code writes
+// "0/0/0". It fails, and so does json.Marshal, when c does not pass
+// Validate.
 func (c Code) MarshalText() ([]byte, error) {
 	return c.AppendText(nil)
 }
