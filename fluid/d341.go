@@ -2,6 +2,7 @@ package fluid
 
 import (
 	"math"
+	"sync"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
@@ -180,7 +181,81 @@ func zOf(nu float64) float64 { return nu + 0.7 + math.Exp(-1.47-1.84*nu-0.51*nu*
 
 func loglogZ(nu float64) float64 { return math.Log10(math.Log10(zOf(nu))) }
 
-// nuFromZ inverts zOf: the D341-20 explicit inverse, then two Newton steps
+// nuFromZ inverts zOf, the ASTM D341 relation Z = ν + 0.7 + exp(−1.47 −
+// 1.84ν − 0.51ν²). Above ν ≈ 7 mm²/s the exponential is below 10⁻¹⁷ of ν
+// and ν = Z − 0.7. Below, it evaluates a piecewise Chebyshev interpolant of
+// the correction Z − 0.7 − ν, fitted once on first use to nuFromZNewton (the
+// exact inverse) and accurate to round-off (TestNuFromZDense); this takes
+// one polynomial instead of three dependent exponentials.
+func nuFromZ(z float64) float64 {
+	w := z - 0.7
+	if w > 7 {
+		return w
+	}
+	fit := thinFit()
+	if w < fit.lo {
+		return nuFromZNewton(z) // only below the viscosities At accepts
+	}
+	return w - fit.at(w)
+}
+
+// Piecewise Chebyshev fit of the low-viscosity correction c(w) = w − ν(w),
+// w = Z − 0.7, over the w of 0.21–7 mm²/s. c is an entire function that
+// falls from about 0.15 to 10⁻¹⁷; 64 pieces of degree 10 reproduce the
+// exact inverse to about 2·10⁻¹⁵ of ν, a few ulp (TestNuFromZDense). The
+// lowest piece, nearest the complex singularities of the inverse, sets the
+// size: 16 pieces of degree 12 left 2·10⁻¹² there.
+const (
+	thinPieces = 64
+	thinDegree = 10
+)
+
+type chebFit struct {
+	lo, inv float64 // w at the low end; pieces per unit of w
+	c       [thinPieces][thinDegree + 1]float64
+}
+
+// thinFit is computed on first use (about 0.2 ms) and never written again.
+var thinFit = sync.OnceValue(fitThin)
+
+func fitThin() *chebFit {
+	const n = thinDegree + 1
+	lo := minNu + math.Exp(-1.47-1.84*minNu-0.51*minNu*minNu)
+	width := (7 - lo) / thinPieces
+	f := &chebFit{lo: lo, inv: 1 / width}
+	var vals [n]float64
+	for k := range thinPieces {
+		mid := lo + (float64(k)+0.5)*width
+		for j := range n {
+			w := mid + width/2*math.Cos(math.Pi*(float64(j)+0.5)/n)
+			vals[j] = w - nuFromZNewton(w+0.7)
+		}
+		for m := range n {
+			sum := 0.0
+			for j := range n {
+				sum += vals[j] * math.Cos(math.Pi*float64(m)*(float64(j)+0.5)/n)
+			}
+			f.c[k][m] = 2 * sum / n
+		}
+		f.c[k][0] /= 2
+	}
+	return f
+}
+
+// at evaluates the fit at w (lo ≤ w ≤ 7) by Clenshaw's recurrence.
+func (f *chebFit) at(w float64) float64 {
+	u := (w - f.lo) * f.inv
+	k := min(int(u), thinPieces-1)
+	t := 2*(u-float64(k)) - 1
+	c := &f.c[k]
+	var b1, b2 float64
+	for m := thinDegree; m >= 1; m-- {
+		b1, b2 = 2*t*b1-b2+c[m], b1
+	}
+	return t*b1 - b2 + c[0]
+}
+
+// nuFromZNewton inverts zOf: the D341-20 explicit inverse, then two Newton steps
 // where the exponential term matters. zOf is strictly increasing
 // (dZ/dν ≥ 0.57 for ν ≥ 0), so Newton converges from the close start.
 //
@@ -190,7 +265,7 @@ func loglogZ(nu float64) float64 { return math.Log10(math.Log10(zOf(nu))) }
 // differs only slightly from the previous exponential's (the explicit
 // form's, then the first step's), so expFrom reuses that value instead of
 // calling math.Exp again: one exponential instead of three for thin oils.
-func nuFromZ(z float64) float64 {
+func nuFromZNewton(z float64) float64 {
 	w := z - 0.7
 	if w > 7 {
 		return w // exp term below 1e-17 of ν: nothing to refine

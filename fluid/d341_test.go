@@ -294,3 +294,25 @@ func BenchmarkCurveAtVeryThin(b *testing.B) {
 		sinkV += v
 	}
 }
+
+// The thin-oil fit is built on first use; concurrent first calls must agree
+// (run with -race in CI).
+func TestCurveAtConcurrentFirstUse(t *testing.T) {
+	c, err := CurveThrough(celsius(40), mm2s(10), celsius(100), mm2s(2.6))
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := nuFromZNewton(zOf(3))
+	done := make(chan float64, 8)
+	for range 8 {
+		go func() { done <- nuFromZ(zOf(3)) }()
+	}
+	for range 8 {
+		if got := <-done; !near(got, want, 1e-14) {
+			t.Errorf("nuFromZ(Z(3)) = %.17g, want %.17g", got, want)
+		}
+	}
+	if _, err := c.At(celsius(120)); err != nil {
+		t.Error(err)
+	}
+}
