@@ -28,20 +28,26 @@ const FewCounted = 20
 type Form uint8
 
 const (
+	// NoForm is the zero Form: no code at all (the zero Code).
+	NoForm Form = iota
 	// Counter is the three-number code of an automatic particle counter
 	// calibrated per ISO 11171: cumulative counts at ≥4, ≥6 and ≥14 µm(c).
-	Counter Form = iota
+	Counter
 	// Microscope is the two-number code of microscope counting (ISO 4407):
 	// cumulative counts at ≥5 and ≥15 µm.
 	Microscope
 )
 
-// Len returns how many numbers a code of form f has: 3 or 2.
+// Len returns how many numbers a code of form f has: 3 (Counter), 2
+// (Microscope) or 0 (NoForm or an unknown form).
 func (f Form) Len() int {
-	if f == Microscope {
+	switch f {
+	case Counter:
+		return 3
+	case Microscope:
 		return 2
 	}
-	return 3
+	return 0
 }
 
 var sizeLabels = [2][3]string{
@@ -52,15 +58,17 @@ var sizeLabels = [2][3]string{
 // SizeLabel names the size that number i of a code of form f counts, e.g.
 // "≥14 µm(c)"; it returns "" when i is out of range.
 func (f Form) SizeLabel(i int) string {
-	if f > Microscope || i < 0 || i >= f.Len() {
+	if i < 0 || i >= f.Len() {
 		return ""
 	}
-	return sizeLabels[f][i]
+	return sizeLabels[f-Counter][i]
 }
 
-// String returns "counter" or "microscope".
+// String returns "counter", "microscope" or "no code".
 func (f Form) String() string {
 	switch f {
+	case NoForm:
+		return "no code"
 	case Counter:
 		return "counter"
 	case Microscope:
@@ -144,11 +152,11 @@ func numberFor(perML float64, few bool) Number {
 // cumulative counts per mL at ≥4/≥6/≥14 µm(c) (Counter form), or two numbers
 // for ≥5/≥15 µm (Microscope form; N[2] is unused and zero).
 //
-// The zero Code is the counter code 0/0/0 (what CodeFromCounts(0, 0, 0)
-// returns): a valid and very clean code that String and MarshalText write as
-// "0/0/0". It does not mean "no code": a Code field left unset travels in
-// JSON as "0/0/0" and, as a sample, meets every target. Use *Code (null in
-// JSON) for a code that may be missing. Build codes with CodeFromCounts,
+// The zero Code (form NoForm) is no code at all: a sample field left unset.
+// It fails Validate, so Compare refuses it and an unset sample can never
+// pass a target; String writes "", MarshalText writes "" (so it travels in
+// JSON as ""), and UnmarshalText reads "" back as the zero Code. IsZero
+// reports it. The clean code 0/0/0 is CodeFromCounts(0, 0, 0). Build codes with CodeFromCounts,
 // CodeFromSample, MakeCode or ParseCode; a Code put together by hand should be
 // checked with Validate.
 type Code struct {
@@ -156,8 +164,11 @@ type Code struct {
 	N    [3]Number
 }
 
-// Len returns the number of numbers in c: 3 or 2.
+// Len returns the number of numbers in c: 3, 2, or 0 for the zero Code.
 func (c Code) Len() int { return c.Form.Len() }
+
+// IsZero reports whether c is the zero Code, which stands for no code.
+func (c Code) IsZero() bool { return c == Code{} }
 
 // Validate checks that c is well formed: a known form, numbers in normal
 // form, N[2] zero in the microscope form, at least one size measured, and
@@ -165,8 +176,8 @@ func (c Code) Len() int { return c.Form.Len() }
 // units.ErrRange (and ErrOrder for the last rule).
 func (c Code) Validate() error {
 	const fn = "contamination.Code.Validate"
-	if c.Form > Microscope {
-		return validate.Fail(fn, "Form", float64(c.Form), "Counter or Microscope")
+	if c.Form != Counter && c.Form != Microscope {
+		return validate.Fail(fn, "Form", float64(c.Form), "Counter or Microscope (the zero Code is no code)")
 	}
 	if c.Form == Microscope && c.N[2] != (Number{}) {
 		return validate.Fail(fn, "N[2]", float64(c.N[2].Scale), "zero in the microscope form")

@@ -354,7 +354,7 @@ func TestCodeLabels(t *testing.T) {
 }
 
 func TestCodeAllocs(t *testing.T) {
-	var sink Code
+	sink, _ := ParseCode("19/16/10")
 	checks := map[string]func(){
 		"CodeFromCounts": func() { sink, _ = CodeFromCounts(3000, 500, 7) },
 		"CodeFromSample": func() { sink, _ = CodeFromSample(300000, 50000, 19, 100*units.Millilitre) },

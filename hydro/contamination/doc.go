@@ -19,9 +19,9 @@
 // number 0, the lowest row of the table (our choice: the row is "more than
 // 0", so the standard leaves zero open).
 //
-// The zero Code is the counter code 0/0/0, a real and very clean code; it
-// marshals to "0/0/0" and is not a marker for "no code". Use *Code (null in
-// JSON) for a code that may be missing.
+// The zero Code is no code: a sample field left unset. It fails Validate and
+// Compare, so it can never pass a target, and travels in JSON as "". The
+// clean code 0/0/0 is what CodeFromCounts(0, 0, 0) returns.
 //
 // # Targets and filtration
 //

@@ -54,6 +54,14 @@ func FuzzCodeUnmarshalText(f *testing.F) {
 	f.Fuzz(func(t *testing.T, b []byte) {
 		var c Code
 		err := c.UnmarshalText(b)
+		if len(b) == 0 {
+			// "" is the zero Code (no code), and it marshals back to "".
+			text, merr := c.MarshalText()
+			if err != nil || !c.IsZero() || merr != nil || len(text) != 0 {
+				t.Fatalf(`UnmarshalText("") = %#v, %v; MarshalText = %q, %v`, c, err, text, merr)
+			}
+			return
+		}
 		checkParsed(t, string(b), c, err)
 		if err == nil {
 			text, merr := c.MarshalText()

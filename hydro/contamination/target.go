@@ -193,7 +193,7 @@ func RecommendTarget(in TargetInput) (Target, error) {
 	if err != nil {
 		return Target{}, err
 	}
-	t := Target{Band: band, Steps: band.steps(), Source: "common practice"}
+	t := Target{Band: band, Steps: band.steps(), Source: "common practice", Base: Code{Form: Counter}}
 	bestSum := -1
 	for k, c := range in.Components {
 		base, err := baseFor(fn, in.Bases, c)

@@ -58,6 +58,7 @@ func parseCode(fn, s string) (Code, error) {
 	if n < 2 {
 		return Code{}, &units.ParseError{Func: "contamination." + fn, Input: s, Pos: len(s), Err: units.ErrSyntax, Detail: "want two or three numbers separated by /"}
 	}
+	c.Form = Counter
 	if n == 2 {
 		c.Form = Microscope
 	}
@@ -191,16 +192,24 @@ func (n Number) String() string {
 }
 
 // MarshalText writes the code as String does (encoding.TextMarshaler), so
-// codes travel in JSON as strings such as "18/16/13"; the zero Code writes
-// "0/0/0". It fails, and so does json.Marshal, when c does not pass
-// Validate.
+// codes travel in JSON as strings such as "18/16/13"; the zero Code (no
+// code) writes "". It fails, and so does json.Marshal, when a non-zero c
+// does not pass Validate.
 func (c Code) MarshalText() ([]byte, error) {
+	if c.IsZero() {
+		return []byte{}, nil
+	}
 	return c.AppendText(nil)
 }
 
 // UnmarshalText reads a code in any form ParseCode accepts
-// (encoding.TextUnmarshaler). On error c is left unchanged.
+// (encoding.TextUnmarshaler), and "" as the zero Code (no code). On error c
+// is left unchanged.
 func (c *Code) UnmarshalText(text []byte) error {
+	if len(text) == 0 {
+		*c = Code{}
+		return nil
+	}
 	v, err := parseCode("Code.UnmarshalText", string(text))
 	if err != nil {
 		return err

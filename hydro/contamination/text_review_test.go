@@ -68,29 +68,40 @@ func TestEveryCodeRoundTrips(t *testing.T) {
 	}
 }
 
-// TestZeroCode pins what the zero Code is: the valid counter code 0/0/0, the
-// code of zero counts, written "0/0/0" in text and JSON. A missing code
-// travels as a nil *Code, null in JSON.
+// TestZeroCode pins what the zero Code is: no code (a sample field left
+// unset). It fails Validate and Compare, so it cannot pass a target, and it
+// travels in JSON as "". The clean code 0/0/0 is a different, valid code.
 func TestZeroCode(t *testing.T) {
 	var z Code
-	if err := z.Validate(); err != nil {
-		t.Fatalf("zero Code invalid: %v", err)
+	if !z.IsZero() || z.Form != NoForm || z.Len() != 0 {
+		t.Fatalf("zero Code: IsZero %v, Form %v, Len %d", z.IsZero(), z.Form, z.Len())
 	}
-	if c, err := CodeFromCounts(0, 0, 0); err != nil || c != z {
-		t.Errorf("CodeFromCounts(0, 0, 0) = %#v, %v; want the zero Code", c, err)
+	if err := z.Validate(); !errors.Is(err, units.ErrRange) {
+		t.Errorf("zero Code Validate: err = %v, want units.ErrRange", err)
 	}
-	if s := z.String(); s != "0/0/0" {
-		t.Errorf("zero Code String() = %q, want 0/0/0", s)
+	clean, err := CodeFromCounts(0, 0, 0)
+	if err != nil || clean.IsZero() || clean.String() != "0/0/0" {
+		t.Errorf("CodeFromCounts(0, 0, 0) = %#v (%v), %v; want the valid code 0/0/0", clean, clean, err)
+	}
+	target, _ := ParseCode("16/14/11")
+	if _, err := Compare(z, target); err == nil {
+		t.Error("Compare accepted the zero Code as a sample: an unset sample would pass")
+	}
+	if s := z.String(); s != "" {
+		t.Errorf("zero Code String() = %q, want \"\"", s)
 	}
 	type report struct {
 		Sample Code  `json:"sample"`
 		Target *Code `json:"target"`
 	}
 	data, err := json.Marshal(report{})
-	if want := `{"sample":"0/0/0","target":null}`; err != nil || string(data) != want {
+	if want := `{"sample":"","target":null}`; err != nil || string(data) != want {
 		t.Errorf("json.Marshal(report{}) = %s, %v; want %s", data, err, want)
 	}
 	var r report
+	if err := json.Unmarshal([]byte(`{"sample":"","target":null}`), &r); err != nil || !r.Sample.IsZero() || r.Target != nil {
+		t.Errorf("json.Unmarshal of an empty sample = %+v, %v; want the zero Code", r, err)
+	}
 	if err := json.Unmarshal([]byte(`{"sample":"18/16/13","target":null}`), &r); err != nil || r.Target != nil || r.Sample.String() != "18/16/13" {
 		t.Errorf("json.Unmarshal = %+v, %v", r, err)
 	}
