@@ -48,14 +48,42 @@ func fromSI(v float64, u *unitDef) float64 {
 // appendIn appends v as a number of unit u, a space and the unit symbol.
 // A temperature at or near absolute zero is never rounded below its scale's
 // zero (−459.67 °F prints as −459.67, not −459.7), so it reads back.
+//
+// A finite value too large to write in u (1e306 Pa·s is +Inf in mPa·s) is
+// written in the coherent SI unit instead, so String never prints +Inf for a
+// finite quantity.
 func appendIn(b []byte, v float64, u *unitDef, digits int) []byte {
 	x := fromSI(v, u)
+	if math.IsInf(x, 0) && !math.IsInf(v, 0) {
+		u = coherentFor(u)
+		x = fromSI(v, u)
+	}
 	if u.offset != 0 && v >= 0 && v < 1 {
 		digits = max(digits, 8)
 	}
 	b = appendNumber(b, x, digits)
 	b = append(b, ' ')
 	return append(b, u.sym...)
+}
+
+// coherentFor returns the registered unit with u's dimension and reference
+// whose factor is 1 and offset 0 (Pa for bar, Pa·s for mPa·s), or u itself
+// when there is none.
+func coherentFor(u *unitDef) *unitDef {
+	best := u
+	for i := range unitTable {
+		c := &unitTable[i]
+		if c.dim != u.dim || c.factor != 1 || c.offset != 0 || c.noReg {
+			continue
+		}
+		if c.ref&u.ref != 0 {
+			return c
+		}
+		if best == u {
+			best = c
+		}
+	}
+	return best
 }
 
 // goString formats v as "v * base", the shortest decimal that reads back.
@@ -87,6 +115,10 @@ func formatQuantity(f fmt.State, verb rune, v float64, u *unitDef, typeName, bas
 			}
 		}
 		x := fromSI(v, u)
+		if math.IsInf(x, 0) && !math.IsInf(v, 0) {
+			u = coherentFor(u)
+			x = fromSI(v, u)
+		}
 		b = buf[:0]
 		if f.Flag('+') && x >= 0 {
 			b = append(b, '+')

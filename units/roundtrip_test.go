@@ -545,3 +545,26 @@ func TestQuantityConversionErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestStringHugeValues checks that a finite value too large for the trade
+// unit (1e306 Pa·s is +Inf in mPa·s) prints in the coherent SI unit and reads
+// back, for every type and both signs. Found by FuzzParseDynamicViscosity.
+func TestStringHugeValues(t *testing.T) {
+	for _, c := range typedCases {
+		info := typeByName(c.name)
+		for _, v := range []float64{1e306, -1e306, 1e300} {
+			if info.hasMin && v < info.min {
+				continue
+			}
+			str := c.str(v)
+			back, err := c.parse(str)
+			if err != nil {
+				t.Errorf("%s(%g).String() = %q: does not parse: %v", c.name, v, str, err)
+				continue
+			}
+			if math.Abs(back-v) > 5e-4*math.Abs(v) {
+				t.Errorf("%s(%g).String() = %q reads back as %g", c.name, v, str, back)
+			}
+		}
+	}
+}
