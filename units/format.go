@@ -47,18 +47,16 @@ func fromSI(v float64, u *unitDef) float64 {
 
 // appendIn appends v as a number of unit u, a space and the unit symbol.
 // A temperature at or near absolute zero is never rounded below its scale's
-// zero (−459.67 °F prints as −459.67, not −459.7), so it reads back.
-//
-// A finite value too large to write in u (1e306 Pa·s is +Inf in mPa·s) is
-// written in the coherent SI unit instead, so String never prints +Inf for a
-// finite quantity.
+// zero (−459.67 °F prints as −459.67, not −459.7), so it reads back. A value
+// that u cannot show faithfully is written in the coherent SI unit instead
+// (see display), so String never prints ±Inf, or 0 for a value that is not
+// zero, and what it prints reads back.
 func appendIn(b []byte, v float64, u *unitDef, digits int) []byte {
-	x := fromSI(v, u)
-	if math.IsInf(x, 0) && !math.IsInf(v, 0) {
-		u = coherentFor(u)
-		x = fromSI(v, u)
-	}
-	if u.offset != 0 && v >= 0 && v < 1 {
+	x, u, all := display(v, u)
+	switch {
+	case all:
+		digits = 17
+	case u.offset != 0 && v >= 0 && v < 1:
 		digits = max(digits, 8)
 	}
 	b = appendNumber(b, x, digits)
@@ -66,10 +64,42 @@ func appendIn(b []byte, v float64, u *unitDef, digits int) []byte {
 	return append(b, u.sym...)
 }
 
+// nearMax is half the largest float64. A number of at most this magnitude,
+// rounded to one or more significant digits, is still finite.
+const nearMax = math.MaxFloat64 / 2
+
+// display returns v as a number x of the unit to print it in: u, or the
+// coherent SI unit of u's dimension when u cannot show v faithfully:
+//   - x would overflow, or come within rounding of the float64 limit
+//     (1e306 Pa·s is +Inf in mPa·s);
+//   - x would underflow to zero or to a subnormal number that has lost
+//     precision (5e-324 N is 0 kN; 1e-318 Pa is a subnormal number of bar);
+//   - v itself is within rounding of the float64 limit; then all reports
+//     that x must be written with every digit it needs (17) to read back.
+//
+// Temperature scales (°C, °F) are kept: their offset keeps x well away from
+// both limits.
+func display(v float64, u *unitDef) (x float64, unit *unitDef, all bool) {
+	x = fromSI(v, u)
+	all = math.Abs(v) > nearMax
+	lost := u.offset == 0 && v != 0 && math.Abs(x) < minNormal && math.Abs(x) < math.Abs(v)
+	if all || math.Abs(x) > nearMax || lost {
+		u = coherentFor(u)
+		x = fromSI(v, u)
+	}
+	return x, u, all
+}
+
+// minNormal is the smallest positive normal float64, 2⁻¹⁰²².
+const minNormal = 0x1p-1022
+
 // coherentFor returns the registered unit with u's dimension and reference
 // whose factor is 1 and offset 0 (Pa for bar, Pa·s for mPa·s), or u itself
 // when there is none.
 func coherentFor(u *unitDef) *unitDef {
+	if u.factor == 1 && u.offset == 0 {
+		return u
+	}
 	best := u
 	for i := range unitTable {
 		c := &unitTable[i]
@@ -114,23 +144,41 @@ func formatQuantity(f fmt.State, verb rune, v float64, u *unitDef, typeName, bas
 				prec = 6
 			}
 		}
-		x := fromSI(v, u)
-		if math.IsInf(x, 0) && !math.IsInf(v, 0) {
-			u = coherentFor(u)
-			x = fromSI(v, u)
+		x, du, all := display(v, u)
+		if all {
+			prec = -1 // every digit, so that it reads back finite
 		}
-		b = buf[:0]
-		if f.Flag('+') && x >= 0 {
-			b = append(b, '+')
+		b = appendVerb(buf[:0], x, du, byte(verb), prec, f.Flag('+'))
+		if du.offset != 0 && belowZero(b, du) {
+			// Rounded below its scale's zero (%.0e of 0 K is -3e+02 °C):
+			// write kelvins, which rounding keeps at or above zero.
+			b = appendVerb(buf[:0], v, coherentFor(du), byte(verb), prec, f.Flag('+'))
 		}
-		b = strconv.AppendFloat(b, x, byte(verb), prec, 64)
-		b = append(b, ' ')
-		b = append(b, u.sym...)
 	default:
 		fmt.Fprintf(f, "%%!%c(units.%s=%s)", verb, typeName, appendIn(buf[:0], v, u, 4))
 		return
 	}
 	pad(f, b)
+}
+
+// appendVerb appends x formatted by strconv with the verb and precision,
+// a space and the symbol of u. plus asks for a sign on a number without one
+// (the + flag); −0 keeps its minus.
+func appendVerb(b []byte, x float64, u *unitDef, verb byte, prec int, plus bool) []byte {
+	if plus && !math.Signbit(x) {
+		b = append(b, '+')
+	}
+	b = strconv.AppendFloat(b, x, verb, prec, 64)
+	b = append(b, ' ')
+	return append(b, u.sym...)
+}
+
+// belowZero reports whether the number at the start of b, read as a number
+// of the temperature scale u, lies below absolute zero.
+func belowZero(b []byte, u *unitDef) bool {
+	n := scanNumber(string(b))
+	y, err := strconv.ParseFloat(string(b[:n]), 64)
+	return err == nil && float64(y*u.factor)+u.offset < 0
 }
 
 // pad writes b to f, padded with spaces to the width, if any.

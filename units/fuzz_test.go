@@ -105,11 +105,16 @@ func checkTypedValue(t *testing.T, c typedCase, info *typeInfo, s string, v floa
 			t.Fatalf("Parse%s(%q) = %.17g → %q → %.17g, %v", c.name, s, v, text, back, err)
 		}
 	}
-	// String must read back, except within 4 digits of the largest float64,
-	// where rounding may go past it.
+	// String, and Format under every verb, must read back, even within
+	// rounding of the largest float64.
 	str := c.str(v)
-	if _, err := c.parse(str); err != nil && !(errors.Is(err, ErrRange) && math.Abs(v) > 0.999*math.MaxFloat64) {
+	if _, err := c.parse(str); err != nil {
 		t.Fatalf("Parse%s(%q) = %.17g, whose String %q does not parse: %v", c.name, s, v, str, err)
+	}
+	for _, verb := range formatVerbs {
+		if out := c.sprintf(verb, v); readsBack(c, v, out) != nil {
+			t.Fatalf("Parse%s(%q) = %.17g, whose %s form %q does not read back: %v", c.name, s, v, verb, out, readsBack(c, v, out))
+		}
 	}
 }
 

@@ -4,6 +4,7 @@ import (
 	"encoding"
 	"encoding/json"
 	"errors"
+	"fmt"
 	"math"
 	"math/rand/v2"
 	"reflect"
@@ -39,6 +40,7 @@ type typedCase struct {
 	marshal   func(v float64) ([]byte, error)
 	unmarshal func(text []byte) (float64, error)
 	str       func(v float64) string
+	sprintf   func(format string, v float64) string
 }
 
 func typed[T quantity, P textQuantity[T]](name string, parse func(string) (T, error)) typedCase {
@@ -52,7 +54,8 @@ func typed[T quantity, P textQuantity[T]](name string, parse func(string) (T, er
 			err := P(&v).UnmarshalText(text)
 			return float64(v), err
 		},
-		str: func(v float64) string { return T(v).String() },
+		str:     func(v float64) string { return T(v).String() },
+		sprintf: func(format string, v float64) string { return fmt.Sprintf(format, T(v)) },
 	}
 }
 
