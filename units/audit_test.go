@@ -1,6 +1,7 @@
 package units
 
 import (
+	"errors"
 	"fmt"
 	"math"
 	"strings"
@@ -124,6 +125,91 @@ func TestFormatTemperatureNearAbsoluteZero(t *testing.T) {
 			if math.Abs(float64(back-v)) > 30 { // %.0e of 273.15 K in °C
 				t.Errorf("Temperature(%g K) %s = %q reads back as %g K", float64(v), verb, s, float64(back))
 			}
+		}
+	}
+}
+
+// TestConvertBelowAbsoluteZero: Convert(-300, "°C", "K") returned -26.85
+// and Convert(-2, "bara", "psia") a negative absolute pressure, where the
+// typed parsers reject both. A temperature below absolute zero or an
+// absolute pressure below vacuum, on either side, is ErrRange.
+func TestConvertBelowAbsoluteZero(t *testing.T) {
+	for _, c := range []struct {
+		v        float64
+		from, to string
+	}{
+		{-300, "°C", "K"},
+		{-500, "°F", "°C"},
+		{-1, "K", "°R"},
+		{-2, "bara", "psia"},
+		{-1, "atm", "Pa"},
+		{-1e6, "Pa", "bara"},
+		{-300, "°C", "ΔK"},
+	} {
+		got, err := Convert(c.v, c.from, c.to)
+		if !errors.Is(err, ErrRange) || got != 0 {
+			t.Errorf("Convert(%g, %q, %q) = %g, %v; want ErrRange", c.v, c.from, c.to, got, err)
+		}
+	}
+	for _, s := range []string{"-300 °C", "-1 K", "-460 °F", "-1 bara", "-14.8 psia", "-1 atm"} {
+		q, err := Parse(s)
+		if !errors.Is(err, ErrRange) || q.Value() != 0 {
+			t.Errorf("Parse(%q) = %v, %v; want ErrRange", s, q, err)
+		}
+	}
+	// In range: absolute zero itself, a vacuum gauge reading, and intervals.
+	for _, c := range []struct {
+		v        float64
+		from, to string
+		want     float64
+	}{
+		{-273.15, "°C", "K", 0},
+		{-459.67, "°F", "K", 0},
+		{-0.5, "bar", "psi", -0.5 * float64(Bar) / float64(PSI)},
+		{-5, "ΔK", "Δ°F", -9},
+		{-5, "Pa", "Pa", -5},
+	} {
+		got, err := Convert(c.v, c.from, c.to)
+		if err != nil || math.Abs(got-c.want) > 1e-12*math.Max(1, math.Abs(c.want)) {
+			t.Errorf("Convert(%g, %q, %q) = %.17g, %v; want %.17g", c.v, c.from, c.to, got, err, c.want)
+		}
+	}
+}
+
+// TestConvertDifferenceToPoint: Convert(5, "ΔK", "°C") returned 5, reading
+// °C as an interval although a lone °C is a point on its scale and
+// Parse("5 ΔK").Temperature() fails. A temperature difference converted to
+// a temperature spelling is ErrReference, as for the typed values; a point
+// may still be read as an interval (as ParseTemperatureDifference does).
+func TestConvertDifferenceToPoint(t *testing.T) {
+	for _, c := range []struct {
+		from, to string
+	}{
+		{"ΔK", "°C"}, {"Δ°F", "°F"}, {"delta degC", "K"}, {"ΔK", "°R"},
+	} {
+		got, err := Convert(5, c.from, c.to)
+		if !errors.Is(err, ErrReference) || got != 0 {
+			t.Errorf("Convert(5, %q, %q) = %g, %v; want ErrReference", c.from, c.to, got, err)
+		}
+	}
+	q, _ := Parse("5 ΔK")
+	if got, err := q.In("°F"); !errors.Is(err, ErrReference) {
+		t.Errorf("Parse(5 ΔK).In(°F) = %g, %v; want ErrReference", got, err)
+	}
+	// Point to interval, interval to interval, point to point still work.
+	for _, c := range []struct {
+		v        float64
+		from, to string
+		want     float64
+	}{
+		{20, "°C", "ΔK", 20},
+		{10, "Δ°C", "Δ°F", 18},
+		{20, "°C", "°F", 68},
+		{1, "K/s", "°F/min", 108},
+	} {
+		got, err := Convert(c.v, c.from, c.to)
+		if err != nil || math.Abs(got-c.want) > 1e-12*c.want {
+			t.Errorf("Convert(%g, %q, %q) = %.17g, %v; want %g", c.v, c.from, c.to, got, err, c.want)
 		}
 	}
 }

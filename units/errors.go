@@ -76,12 +76,12 @@ func (e *RangeError) Error() string {
 func (e *RangeError) Unwrap() error { return ErrRange }
 
 // ConversionError reports a dynamic Quantity or unit expression converted to
-// an incompatible type or unit. It names both sides and unwraps to ErrDimension
-// or ErrReference.
+// an incompatible type or unit, or to a number that overflows it. It names
+// both sides and unwraps to ErrDimension, ErrReference or ErrRange.
 type ConversionError struct {
 	From string // what was there: a dimension or a unit expression
 	To   string // what was wanted
-	Err  error  // ErrDimension or ErrReference
+	Err  error  // ErrDimension, ErrReference or ErrRange
 }
 
 func (e *ConversionError) Error() string {

@@ -149,7 +149,7 @@ func formatQuantity(f fmt.State, verb rune, v float64, u *unitDef, typeName, bas
 			prec = -1 // every digit, so that it reads back finite
 		}
 		b = appendVerb(buf[:0], x, du, byte(verb), prec, f.Flag('+'))
-		if du.offset != 0 && belowZero(b, du) {
+		if du.offset != 0 && scaleBelowZero(b, du) {
 			// Rounded below its scale's zero (%.0e of 0 K is -3e+02 °C):
 			// write kelvins, which rounding keeps at or above zero.
 			b = appendVerb(buf[:0], v, coherentFor(du), byte(verb), prec, f.Flag('+'))
@@ -173,9 +173,9 @@ func appendVerb(b []byte, x float64, u *unitDef, verb byte, prec int, plus bool)
 	return append(b, u.sym...)
 }
 
-// belowZero reports whether the number at the start of b, read as a number
+// scaleBelowZero reports whether the number at the start of b, read as a number
 // of the temperature scale u, lies below absolute zero.
-func belowZero(b []byte, u *unitDef) bool {
+func scaleBelowZero(b []byte, u *unitDef) bool {
 	n := scanNumber(string(b))
 	y, err := strconv.ParseFloat(string(b[:n]), 64)
 	return err == nil && float64(y*u.factor)+u.offset < 0

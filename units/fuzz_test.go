@@ -241,6 +241,9 @@ func FuzzConvert(f *testing.F) {
 	f.Add(3.0, "BTU/(h·ft²·°F)", "W/(m²·K)")
 	f.Add(math.Inf(1), "bar", "psi")
 	f.Add(1.0, "1", "(in/m)^-24")
+	f.Add(-300.0, "°C", "K")
+	f.Add(-1e6, "Pa", "bara")
+	f.Add(5.0, "ΔK", "°C")
 	f.Fuzz(func(t *testing.T, v float64, from, to string) {
 		got, err := Convert(v, from, to)
 		if err != nil {

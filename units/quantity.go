@@ -56,7 +56,25 @@ func Parse(s string) (Quantity, error) {
 	if math.IsInf(q.value, 0) || math.IsNaN(q.value) {
 		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: 0, Err: ErrRange, Detail: "value is not finite"}
 	}
+	if t := belowZero(q.value, r.ref); t != nil {
+		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: at, Err: ErrRange, Detail: "want " + t.kind + " " + t.minText}
+	}
 	return q, nil
+}
+
+// belowZero returns the type whose lower bound the SI value v breaks when v
+// is a temperature point below absolute zero or an absolute pressure below
+// vacuum, and nil otherwise. Gauge pressures and differences may be negative.
+func belowZero(v float64, ref reference) *typeInfo {
+	switch {
+	case v >= 0:
+		return nil
+	case ref&refPoint != 0:
+		return &typeTemperature
+	case ref&refAbsolute != 0:
+		return &typeAbsolutePressure
+	}
+	return nil
 }
 
 // Value returns q's value in coherent SI units (the unit of its dimension
@@ -77,34 +95,59 @@ func (q Quantity) String() string {
 }
 
 // In returns q as a number of the unit expression unit, such as "gpm" or
-// "kW/(m²·K)". Temperature points convert between scales with their offsets.
+// "kW/(m²·K)". Temperature points convert between scales with their offsets;
+// a temperature point converts to a difference spelling (ΔK) as the interval
+// above its scale's zero, but a difference does not convert to a point
+// spelling (°C, K): that is ErrReference. A result that would be a
+// temperature below absolute zero or an absolute pressure below vacuum is
+// ErrRange.
 func (q Quantity) In(unit string) (float64, error) {
+	v, bound, err := q.in("Quantity.In", unit)
+	if bound != nil {
+		return 0, &RangeError{Func: "units.Quantity.In", Param: "q", Value: q.String(), Valid: bound.kind + " " + bound.minText}
+	}
+	return v, err
+}
+
+// in converts q to unit for In and Convert (fn). When q is a temperature
+// below absolute zero or an absolute pressure below vacuum, or would be read
+// as one in unit, it returns the type whose bound is broken, for the caller's
+// RangeError.
+func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 	r, f := resolveUnit(trimRight(unit))
 	if f.err != nil {
-		return 0, &ParseError{Func: "Quantity.In", Input: unit, Pos: f.pos, Err: f.err, Detail: f.detail}
+		return 0, nil, &ParseError{Func: fn, Input: unit, Pos: f.pos, Err: f.err, Detail: f.detail}
 	}
 	if r.dim != q.dim {
-		return 0, &ConversionError{From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
+		return 0, nil, &ConversionError{From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
+	}
+	if t := belowZero(q.value, q.ref|r.ref); t != nil {
+		return 0, t, nil
 	}
 	v := q.value
 	switch {
 	case q.ref == refPoint && r.ref == refPoint:
 		v = (v - r.offset) / r.factor
 	case q.ref|r.ref == refGauge|refAbsolute:
-		return 0, &ConversionError{From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
+		return 0, nil, &ConversionError{From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
+	case q.ref == refNone && r.ref == refPoint:
+		return 0, nil, &ConversionError{From: "temperature difference", To: "temperature " + unit, Err: ErrReference}
 	default:
 		v = (v - q.offset) / r.factor
 	}
 	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return 0, &ConversionError{From: q.String(), To: unit, Err: ErrRange}
+		return 0, nil, &ConversionError{From: q.String(), To: unit, Err: ErrRange}
 	}
-	return v, nil
+	return v, nil, nil
 }
 
 // Convert converts value from one unit expression to another, such as
 // Convert(1, "gpm", "L/min") or Convert(20, "°C", "°F"). Lone temperature
-// spellings are points on their scales (with offsets); gauge and absolute
-// pressure spellings do not mix (ErrReference): cross with an explicit ambient.
+// spellings are points on their scales (with offsets); a difference (ΔK,
+// Δ°F) converts to another difference, not to a point (ErrReference). Gauge
+// and absolute pressure spellings do not mix (ErrReference): cross with an
+// explicit ambient. A temperature below absolute zero or an absolute
+// pressure below vacuum, given or asked for, is ErrRange.
 func Convert(value float64, from, to string) (float64, error) {
 	if math.IsInf(value, 0) || math.IsNaN(value) {
 		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64), Valid: "finite"}
@@ -118,7 +161,12 @@ func Convert(value float64, from, to string) (float64, error) {
 		q.value += r.offset
 		q.offset = r.offset
 	}
-	return q.In(to)
+	v, bound, err := q.in("Convert", to)
+	if bound != nil {
+		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from,
+			Valid: bound.kind + " " + bound.minText}
+	}
+	return v, err
 }
 
 func refName(r reference) string {
