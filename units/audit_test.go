@@ -6,6 +6,7 @@ import (
 	"math"
 	"strings"
 	"testing"
+	"time"
 )
 
 // Regression tests from the acceptance audit of issue 2. Each names the
@@ -213,3 +214,33 @@ func TestConvertDifferenceToPoint(t *testing.T) {
 		}
 	}
 }
+
+// TestQuotientsNeverInfinite: the quotients checked only their divisors, so
+// a finite dividend over a tiny positive divisor returned +Inf with no error
+// (1e300 N over 1e-10 m²), and a NaN dividend returned NaN, although the
+// physics doc promises no result is ever ±Inf or NaN.
+func TestQuotientsNeverInfinite(t *testing.T) {
+	for _, c := range []struct {
+		name string
+		v    float64
+		err  error
+	}{
+		{"Force.PerArea", float64(first(Force(1e300).PerArea(1e-10))), second(Force(1e300).PerArea(1e-10))},
+		{"Force.PerArea NaN", float64(first(Force(math.NaN()).PerArea(1))), second(Force(math.NaN()).PerArea(1))},
+		{"Flow.PerArea", float64(first(Flow(-1e300).PerArea(1e-10))), second(Flow(-1e300).PerArea(1e-10))},
+		{"Flow.PerSpeed", float64(first(Flow(1e300).PerSpeed(1e-10))), second(Flow(1e300).PerSpeed(1e-10))},
+		{"Power.PerSpeed", float64(first(Power(1e308).PerSpeed(1e-3))), second(Power(1e308).PerSpeed(1e-3))},
+		{"Power.PerSpeed Inf", float64(first(Power(math.Inf(1)).PerSpeed(1))), second(Power(math.Inf(1)).PerSpeed(1))},
+		{"Volume.PerDuration", float64(first(Volume(1e308).PerDuration(time.Nanosecond))), second(Volume(1e308).PerDuration(time.Nanosecond))},
+	} {
+		if !errors.Is(c.err, ErrRange) || c.v != 0 {
+			t.Errorf("%s = %g, %v; want 0 and ErrRange", c.name, c.v, c.err)
+		}
+	}
+	// Large but finite quotients still work.
+	if p, err := Force(1e300).PerArea(1e-5); err != nil || p != 1e305 {
+		t.Errorf("Force(1e300).PerArea(1e-5) = %v, %v; want 1e305 Pa", float64(p), err)
+	}
+}
+
+func first[T any](v T, _ error) T { return v }

@@ -5,9 +5,11 @@ import (
 	"time"
 )
 
-// Physics across quantity types. Products are plain methods; quotients
-// return an error when the divisor is zero, negative where that is
-// meaningless, or not finite, so that no result is ever ±Inf or NaN.
+// Physics across quantity types. Products are plain methods, as plain as
+// float64 multiplication (finite inputs beyond about 1e154 can overflow);
+// quotients return an error when the divisor is zero, negative where that is
+// meaningless, or not finite, and when the quotient itself is not finite, so
+// that no quotient is ever ±Inf or NaN.
 
 // CircleArea returns the area of a circle of diameter d: A = π·d²/4 (a bore
 // or rod section).
@@ -17,12 +19,12 @@ func CircleArea(d Length) Area { return Area(math.Pi / 4 * float64(d) * float64(
 func (p Pressure) TimesArea(a Area) Force { return Force(float64(p) * float64(a)) }
 
 // PerArea returns the pressure that force f needs on area a: p = F/A.
-// It fails with ErrRange unless a is finite and > 0.
+// It fails with ErrRange unless a is finite and > 0 and the quotient finite.
 func (f Force) PerArea(a Area) (Pressure, error) {
 	if err := positive("units.Force.PerArea", "a", a); err != nil {
 		return 0, err
 	}
-	return Pressure(float64(f) / float64(a)), nil
+	return quotient[Pressure]("units.Force.PerArea", float64(f)/float64(a), f, a)
 }
 
 // TimesLength returns the volume swept by area a over length l: V = A·l.
@@ -32,24 +34,28 @@ func (a Area) TimesLength(l Length) Volume { return Volume(float64(a) * float64(
 func (v Velocity) TimesArea(a Area) Flow { return Flow(float64(v) * float64(a)) }
 
 // PerArea returns the mean velocity of flow q through area a: v = Q/A.
-// It fails with ErrRange unless a is finite and > 0.
+// It fails with ErrRange unless a is finite and > 0 and the quotient finite.
 func (q Flow) PerArea(a Area) (Velocity, error) {
 	if err := positive("units.Flow.PerArea", "a", a); err != nil {
 		return 0, err
 	}
-	return Velocity(float64(q) / float64(a)), nil
+	return quotient[Velocity]("units.Flow.PerArea", float64(q)/float64(a), q, a)
 }
 
 // TimesDuration returns the volume that flow q delivers in d: V = Q·t.
 func (q Flow) TimesDuration(d time.Duration) Volume { return Volume(float64(q) * d.Seconds()) }
 
 // PerDuration returns the mean flow that moves volume v in d: Q = V/t.
-// It fails with ErrRange unless d > 0.
+// It fails with ErrRange unless d > 0 and the quotient is finite.
 func (v Volume) PerDuration(d time.Duration) (Flow, error) {
 	if d <= 0 {
 		return 0, &RangeError{Func: "units.Volume.PerDuration", Param: "d", Value: d.String(), Valid: "> 0"}
 	}
-	return Flow(float64(v) / d.Seconds()), nil
+	x := float64(v) / d.Seconds()
+	if x-x != 0 { // a NaN or infinite v, or an overflow
+		return 0, &RangeError{Func: "units.Volume.PerDuration", Param: "result", Value: v.String() + " / " + d.String(), Valid: "finite"}
+	}
+	return Flow(x), nil
 }
 
 // TimesSpeed returns the geometric flow of displacement d at speed n:
@@ -57,12 +63,13 @@ func (v Volume) PerDuration(d time.Duration) (Flow, error) {
 func (d Displacement) TimesSpeed(n RotationalSpeed) Flow { return Flow(float64(d) * float64(n)) }
 
 // PerSpeed returns the displacement that delivers flow q at speed n:
-// D = Q/n. It fails with ErrRange unless n is finite and > 0.
+// D = Q/n. It fails with ErrRange unless n is finite and > 0
+// and the quotient finite.
 func (q Flow) PerSpeed(n RotationalSpeed) (Displacement, error) {
 	if err := positive("units.Flow.PerSpeed", "n", n); err != nil {
 		return 0, err
 	}
-	return Displacement(float64(q) / float64(n)), nil
+	return quotient[Displacement]("units.Flow.PerSpeed", float64(q)/float64(n), q, n)
 }
 
 // TimesPressure returns the ideal torque of displacement d at pressure
@@ -83,12 +90,13 @@ func (t Torque) TimesSpeed(n RotationalSpeed) Power {
 }
 
 // PerSpeed returns the torque that carries power p at speed n:
-// T = P/(2π·n). It fails with ErrRange unless n is finite and > 0.
+// T = P/(2π·n). It fails with ErrRange unless n is finite and > 0
+// and the quotient finite.
 func (p Power) PerSpeed(n RotationalSpeed) (Torque, error) {
 	if err := positive("units.Power.PerSpeed", "n", n); err != nil {
 		return 0, err
 	}
-	return Torque(float64(p) / (revRad * float64(n))), nil
+	return quotient[Torque]("units.Power.PerSpeed", float64(p)/(revRad*float64(n)), p, n)
 }
 
 // TimesDuration returns the energy of power p over d: E = P·t.
@@ -103,6 +111,19 @@ func (v KinematicViscosity) TimesDensity(rho Density) DynamicViscosity {
 // TimesAcceleration returns the force that gives mass m acceleration a:
 // F = m·a (weight when a is StandardGravity).
 func (m Mass) TimesAcceleration(a Acceleration) Force { return Force(float64(m) * float64(a)) }
+
+// quotient returns x, the quotient of num and den, as an R; or ErrRange
+// when it is not finite: a NaN or infinite dividend, or a finite one over a
+// divisor so small that the quotient overflows.
+func quotient[R, N, D interface {
+	~float64
+	String() string
+}](fn string, x float64, num N, den D) (R, error) {
+	if x-x != 0 {
+		return 0, &RangeError{Func: fn, Param: "result", Value: num.String() + " / " + den.String(), Valid: "finite"}
+	}
+	return R(x), nil
+}
 
 // positive checks that a divisor is finite and > 0.
 func positive[T interface {
