@@ -244,3 +244,25 @@ func TestQuotientsNeverInfinite(t *testing.T) {
 }
 
 func first[T any](v T, _ error) T { return v }
+
+// TestParseTemperatureIntervalInExpression: found by FuzzParse once Parse
+// began to reject points below absolute zero. "-1C0 C" is C⁰·C, an
+// expression, so its temperature is an interval and may be negative; the
+// lone spelling "-1 K" is a point below absolute zero; and the SI text of
+// the interval, with its dimension in parentheses, reads back.
+func TestParseTemperatureIntervalInExpression(t *testing.T) {
+	q, err := Parse("-1C0 C")
+	if err != nil || q.Value() != -1 || q.Dimension() != typeTemperature.dim {
+		t.Fatalf("Parse(-1C0 C) = %v, %v; want the interval -1 K", q, err)
+	}
+	if d, err := q.TemperatureDifference(); err != nil || d != -1 {
+		t.Errorf("Parse(-1C0 C).TemperatureDifference() = %v, %v; want -1 K", d, err)
+	}
+	if _, err := Parse("-1 K"); !errors.Is(err, ErrRange) {
+		t.Errorf("Parse(-1 K): %v; want ErrRange (below absolute zero)", err)
+	}
+	back, err := Parse("-1 (K)")
+	if err != nil || back != q {
+		t.Errorf("Parse(-1 (K)) = %v, %v; want %v", back, err, q)
+	}
+}

@@ -200,7 +200,7 @@ func FuzzUnmarshalTextKinematicViscosity(f *testing.F) {
 }
 
 // FuzzParse fuzzes the dynamic parser: a success is finite, and writing its
-// SI value and dimension ("5.5e+06 kg·m^-1·s^-2") reads back to the same
+// SI value and dimension ("5.5e+06 (kg·m^-1·s^-2)") reads back to the same
 // value and dimension.
 func FuzzParse(f *testing.F) {
 	for _, s := range commonSeeds {
@@ -219,7 +219,10 @@ func FuzzParse(f *testing.F) {
 		if math.IsNaN(v) || math.IsInf(v, 0) {
 			t.Fatalf("Parse(%q) = %g with no error", s, v)
 		}
-		si := strconv.FormatFloat(v, 'g', -1, 64) + " " + q.Dimension().String()
+		// The dimension in parentheses is an expression, never a lone
+		// spelling: "-1 (K)" is an interval, where "-1 K" would be a
+		// temperature below absolute zero.
+		si := strconv.FormatFloat(v, 'g', -1, 64) + " (" + q.Dimension().String() + ")"
 		back, err := Parse(si)
 		if err != nil || back.Value() != v || back.Dimension() != q.Dimension() {
 			t.Fatalf("Parse(%q) = %v; %q reads back as %v, %v", s, q, si, back, err)
