@@ -1,0 +1,70 @@
+package contamination
+
+import (
+	"errors"
+	"strings"
+	"testing"
+
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// Regressions from the acceptance audit of the package. Each test failed
+// before its fix.
+
+// TestOrderErrorsNameNumbers: an ordering error names the parameters and
+// the numbers that grow with size, not only the sizes.
+func TestOrderErrorsNameNumbers(t *testing.T) {
+	_, errMake := MakeCode(13, 16, 18)
+	_, errMicro := MakeMicroscopeCode(10, 11)
+	cases := []struct {
+		name string
+		err  error
+		want []string
+	}{
+		{"MakeCode", errMake, []string{"contamination.MakeCode", "n4 = 13", "n6 = 16", "want n4 ≥ n6"}},
+		{"MakeMicroscopeCode", errMicro, []string{"n5 = 10", "n15 = 11", "want n5 ≥ n15"}},
+		{"Validate", counter(num(10), num(12), num(1)).Validate(), []string{"contamination.Code.Validate", "N[0] = 10", "N[1] = 12"}},
+		{"Validate marks", counter(num(28), above28, num(1)).Validate(), []string{"N[0] = 28", "N[1] = >28"}},
+		{"Validate across -", counter(num(10), notMeasured, num(12)).Validate(), []string{"N[0] = 10", "N[2] = 12"}},
+	}
+	for _, c := range cases {
+		if !errors.Is(c.err, ErrOrder) || !errors.Is(c.err, units.ErrRange) {
+			t.Errorf("%s: err = %v, want ErrOrder and units.ErrRange", c.name, c.err)
+			continue
+		}
+		for _, w := range c.want {
+			if !strings.Contains(c.err.Error(), w) {
+				t.Errorf("%s: %q does not contain %q", c.name, c.err, w)
+			}
+		}
+	}
+}
+
+// TestBadNumberErrorsShowMark: a number refused for its mark is shown with
+// its mark, not as a bare scale that looks valid.
+func TestBadNumberErrorsShowMark(t *testing.T) {
+	for _, c := range []Code{
+		micro(num(10), num(2)).with(2, Number{Mark: MarkAbove}),
+		counter(Number{Scale: 3, Mark: MarkNotMeasured}, num(1), num(1)),
+	} {
+		err := c.Validate()
+		if !errors.Is(err, units.ErrRange) || !strings.Contains(err.Error(), "Mark:") {
+			t.Errorf("%#v.Validate() = %v; want an error that shows the mark", c, err)
+		}
+	}
+}
+
+func (c Code) with(i int, n Number) Code { c.N[i] = n; return c }
+
+// TestZeroCodeRangeError: the zero Code has no numbers; the error says so
+// TestZeroCodeRangeError: the zero Code has no numbers; the error says so
+// instead of asking for an index "from 0 to -1".
+func TestZeroCodeRangeError(t *testing.T) {
+	_, _, err := Code{}.Range(0)
+	if !errors.Is(err, units.ErrRange) || strings.Contains(err.Error(), "-1") || !strings.Contains(err.Error(), "zero Code") {
+		t.Errorf("Code{}.Range(0): err = %v; want an error naming the zero Code", err)
+	}
+}
+
+// TestUnknownComponentWithBase: RecommendTarget documents an error for an
+// unknown component; a caller base code for it must not let it through.
