@@ -68,3 +68,14 @@ func TestZeroCodeRangeError(t *testing.T) {
 
 // TestUnknownComponentWithBase: RecommendTarget documents an error for an
 // unknown component; a caller base code for it must not let it through.
+// unknown component; a caller base code for it must not let it through.
+func TestUnknownComponentWithBase(t *testing.T) {
+	base := counter(num(18), num(16), num(13))
+	in := TargetInput{Components: []Component{componentCount + 3}, Pressure: 100 * units.Bar,
+		Bases: map[Component]Code{componentCount + 3: base}}
+	if tg, err := RecommendTarget(in); !errors.Is(err, units.ErrRange) {
+		t.Errorf("unknown component with a base: %+v, %v; want units.ErrRange", tg, err)
+	}
+}
+
+// TestNegativeZeroCount: a count of −0 is a count of zero; the count per mL

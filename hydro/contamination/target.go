@@ -235,6 +235,9 @@ func RecommendTarget(in TargetInput) (Target, error) {
 
 // baseFor returns the caller's base code for c if given, else the table's.
 func baseFor(fn string, bases map[Component]Code, c Component) (Code, error) {
+	if c >= componentCount {
+		return Code{}, validate.Fail(fn, "Components", float64(c), "known Component values")
+	}
 	if b, ok := bases[c]; ok {
 		return b, checkTarget(fn, "Bases["+c.String()+"]", b)
 	}
