@@ -2,6 +2,7 @@ package contamination
 
 import (
 	"errors"
+	"math"
 	"strings"
 	"testing"
 
@@ -57,7 +58,6 @@ func TestBadNumberErrorsShowMark(t *testing.T) {
 func (c Code) with(i int, n Number) Code { c.N[i] = n; return c }
 
 // TestZeroCodeRangeError: the zero Code has no numbers; the error says so
-// TestZeroCodeRangeError: the zero Code has no numbers; the error says so
 // instead of asking for an index "from 0 to -1".
 func TestZeroCodeRangeError(t *testing.T) {
 	_, _, err := Code{}.Range(0)
@@ -67,7 +67,6 @@ func TestZeroCodeRangeError(t *testing.T) {
 }
 
 // TestUnknownComponentWithBase: RecommendTarget documents an error for an
-// unknown component; a caller base code for it must not let it through.
 // unknown component; a caller base code for it must not let it through.
 func TestUnknownComponentWithBase(t *testing.T) {
 	base := counter(num(18), num(16), num(13))
@@ -79,3 +78,28 @@ func TestUnknownComponentWithBase(t *testing.T) {
 }
 
 // TestNegativeZeroCount: a count of −0 is a count of zero; the count per mL
+// is +0, not "-0".
+func TestNegativeZeroCount(t *testing.T) {
+	negZero := math.Copysign(0, -1)
+	for name, f := range map[string]func(float64, units.Volume) (float64, error){"PerML": PerML, "Per100mL": Per100mL} {
+		if v, err := f(negZero, units.Millilitre); err != nil || v != 0 || math.Signbit(v) {
+			t.Errorf("%s(-0, 1 mL) = %g, %v; want +0", name, v, err)
+		}
+	}
+}
+
+// TestParseCodeReplacementChar: U+FFFD written correctly is valid UTF-8; it
+// is refused as "want a scale number", and only broken bytes as invalid
+// UTF-8.
+func TestParseCodeReplacementChar(t *testing.T) {
+	for _, c := range []struct{ in, detail string }{
+		{"18/16/\uFFFD", "want a scale number"},
+		{"18/16/\xff", "invalid UTF-8"},
+	} {
+		_, err := ParseCode(c.in)
+		var pe *units.ParseError
+		if !errors.As(err, &pe) || pe.Detail != c.detail || !errors.Is(err, units.ErrSyntax) {
+			t.Errorf("ParseCode(%q): err = %v; want detail %q", c.in, err, c.detail)
+		}
+	}
+}
