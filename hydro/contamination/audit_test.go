@@ -103,3 +103,13 @@ func TestParseCodeReplacementChar(t *testing.T) {
 		}
 	}
 }
+
+// TestTargetNeedsPressure: an unset (zero) working pressure fell in the low
+// band and gave a target one class dirtier; like the zero Code, an unset
+// field must not loosen a target.
+func TestTargetNeedsPressure(t *testing.T) {
+	in := TargetInput{Components: []Component{ServoValve}}
+	if tg, err := RecommendTarget(in); !errors.Is(err, units.ErrRange) || !strings.Contains(err.Error(), "Pressure") {
+		t.Errorf("RecommendTarget without a pressure = %v, %v; want an error naming Pressure", tg.Code, err)
+	}
+}
