@@ -113,3 +113,19 @@ func TestTargetNeedsPressure(t *testing.T) {
 		t.Errorf("RecommendTarget without a pressure = %v, %v; want an error naming Pressure", tg.Code, err)
 	}
 }
+
+// TestCountOrderErrorsGiveRange: an ordering error on counts says what is
+// wanted, as the errors on codes do.
+func TestCountOrderErrorsGiveRange(t *testing.T) {
+	_, e1 := CodeFromCounts(10, 20, 1)
+	_, e2 := CodeFromSample(10, 5, 6, units.Millilitre)
+	_, e3 := MicroscopeCodeFromCounts(1, 2)
+	for _, c := range []struct {
+		err  error
+		want string
+	}{{e1, "c4 = 10 < c6 = 20; want c4 ≥ c6"}, {e2, "n6 = 5 < n14 = 6; want n6 ≥ n14"}, {e3, "c5 = 1 < c15 = 2; want c5 ≥ c15"}} {
+		if !errors.Is(c.err, ErrOrder) || !strings.Contains(c.err.Error(), c.want) {
+			t.Errorf("err = %v; want ErrOrder and %q", c.err, c.want)
+		}
+	}
+}

@@ -295,10 +295,10 @@ func checkCounts(fn, nA, nB, nC string, a, b, c float64) error {
 		return err
 	}
 	if a < b {
-		return fmt.Errorf("%s: %s = %g < %s = %g: %w (%w)", fn, nA, a, nB, b, ErrOrder, units.ErrRange)
+		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nA, a, nB, b, nA, nB, ErrOrder, units.ErrRange)
 	}
 	if b < c {
-		return fmt.Errorf("%s: %s = %g < %s = %g: %w (%w)", fn, nB, b, nC, c, ErrOrder, units.ErrRange)
+		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nB, b, nC, c, nB, nC, ErrOrder, units.ErrRange)
 	}
 	return nil
 }
