@@ -29,6 +29,37 @@ func TestAuditViscosityIndexHugeV40(t *testing.T) {
 	}
 }
 
+// BulkModel.Modulus returned a negative tangent modulus (−4.97 bar) with a
+// nil error where the linear model K₀(t) + M·p passes through zero: a hot
+// fluid with a steep temperature coefficient (C = 0.05/K, 200 °C) under
+// suction (−1 bar gauge). The secant form and Fluid.Density returned NaN
+// there, caught only as "inputs too extreme". All three now refuse p with
+// the model's lower bound.
+func TestAuditBulkModelBelowZeroModulus(t *testing.T) {
+	m := BulkModel{K0: 1.5 * units.Gigapascal, M: 10, C: 0.05, Gamma: 1.15}
+	hot := celsius(200)
+	for _, kind := range []BulkKind{IsothermalTangent, IsothermalSecant, IsentropicTangent, IsentropicSecant} {
+		k, err := m.Modulus(kind, hot, -1*units.Bar)
+		wantRangeError(t, err, "p")
+		if k != 0 {
+			t.Errorf("%v: K = %v with an error, want 0", kind, k)
+		}
+	}
+	f, _ := Typical(HM, VG46)
+	f.Bulk = m
+	rho, err := f.Density(hot, -1*units.Bar)
+	wantRangeError(t, err, "p")
+	if rho != 0 {
+		t.Errorf("ρ = %v with an error, want 0", rho)
+	}
+	// Just inside the model's bound the modulus is positive.
+	limit := -float64(m.K0) * math.Exp(-m.C*160) / m.M
+	k, err := m.Modulus(IsothermalTangent, hot, units.Pressure(0.99*limit))
+	if err != nil || !(k > 0) {
+		t.Errorf("inside the bound: K = %v, %v", k, err)
+	}
+}
+
 // V100ForVI at v40 just above 2 mm²/s reported an inverted valid range
 // ("from 6601.67 to 6601.43") and refused every VI: there the VI is not
 // increasing in Y (it is in the thousands, far beyond real oils). The span
@@ -48,5 +79,29 @@ func TestAuditV100ForVINearLowestY(t *testing.T) {
 	wantRangeError(t, err, "vi")
 	if !strings.Contains(err.Error(), "from 6601.4") {
 		t.Errorf("span not low to high: %v", err)
+	}
+}
+
+// TubeBulkModulus failed on diameters whose squares under- or overflow
+// (with an error naming the result, not an input), though B_c depends only
+// on the diameter ratio. It now uses the ratio: a wall far thicker than
+// the bore tends to the shear modulus E/(2(1 + ν)) (Lamé, r_o → ∞).
+func TestAuditTubeBulkModulusRatio(t *testing.T) {
+	e := 206 * units.Gigapascal
+	ref, err := TubeBulkModulus(10*units.Millimetre, 20*units.Millimetre, e, 0.3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// (r_o² + r_i²)/(r_o² − r_i²) = 5/3 at r_o = 2r_i.
+	if want := float64(e) / (2 * (5.0/3 + 0.3)); !near(float64(ref), want, 1e-15) {
+		t.Errorf("B_c = %v, want %g", ref, want)
+	}
+	tiny, err := TubeBulkModulus(1e-200, 2e-200, e, 0.3)
+	if err != nil || !near(float64(tiny), float64(ref), 1e-15) {
+		t.Errorf("scaled to 1e-200 m: %v, %v; want %v", tiny, err, ref)
+	}
+	thick, err := TubeBulkModulus(0.01, 1e300, e, 0.3)
+	if want := float64(e) / (2 * 1.3); err != nil || !near(float64(thick), want, 1e-15) {
+		t.Errorf("bore in an unbounded wall: %v, %v; want %g", thick, err, want)
 	}
 }
