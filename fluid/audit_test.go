@@ -105,3 +105,27 @@ func TestAuditTubeBulkModulusRatio(t *testing.T) {
 		t.Errorf("bore in an unbounded wall: %v, %v; want %g", thick, err, want)
 	}
 }
+
+// FromDataSheet passed V40 and V100 straight to CurveThrough, so its errors
+// named "v1", "v2" or "t2" of fluid.CurveThrough, not the data-sheet fields.
+func TestAuditFromDataSheetNamesFields(t *testing.T) {
+	for _, c := range []struct {
+		param string
+		d     DataSheet
+	}{
+		{"V40", DataSheet{Class: HM, V40: 0, V100: mm2s(6), Density15: 870}},
+		{"V40", DataSheet{Class: HM, V40: mm2s(3e7), V100: mm2s(6), Density15: 870}},
+		{"V100", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(40), Density15: 870}},
+		{"V100", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(-1), Density15: 870}},
+		{"V100", DataSheet{Class: HM, V40: mm2s(46), V100: mm2s(46 * (1 - 1e-12)), Density15: 870}},
+	} {
+		f, err := FromDataSheet(c.d)
+		wantRangeError(t, err, c.param)
+		if !strings.Contains(err.Error(), "fluid.FromDataSheet") {
+			t.Errorf("error %q does not name fluid.FromDataSheet", err)
+		}
+		if f != (Fluid{}) {
+			t.Errorf("fluid %+v with an error", f)
+		}
+	}
+}
