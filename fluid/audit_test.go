@@ -129,3 +129,20 @@ func TestAuditFromDataSheetNamesFields(t *testing.T) {
 		}
 	}
 }
+
+// ISO 3448 designates a grade "ISO VG 46"; ParseGrade read that form but
+// nothing wrote it.
+func TestAuditGradeDesignation(t *testing.T) {
+	for _, g := range Grades() {
+		s := g.Designation()
+		if s != "ISO "+g.String() {
+			t.Errorf("%v: Designation %q", g, s)
+		}
+		if back, err := ParseGrade(s); err != nil || back != g {
+			t.Errorf("ParseGrade(%q) = %v, %v", s, back, err)
+		}
+	}
+	if s := Grade(47).Designation(); s != "Grade(47)" {
+		t.Errorf("invalid grade: %q", s)
+	}
+}
