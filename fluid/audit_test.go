@@ -146,3 +146,17 @@ func TestAuditGradeDesignation(t *testing.T) {
 		t.Errorf("invalid grade: %q", s)
 	}
 }
+
+// CurveFromVI passed the 100 °C viscosity of a VI near the top of its span
+// (VG 46 at VI 743, where ν100 is within a hair of ν40) to CurveThrough,
+// whose error named "t2 = 100 °C", not the caller's vi.
+func TestAuditCurveFromVINamesVI(t *testing.T) {
+	c, err := CurveFromVI(mm2s(46), 743)
+	wantRangeError(t, err, "vi")
+	if !strings.Contains(err.Error(), "fluid.CurveFromVI") {
+		t.Errorf("error %q does not name fluid.CurveFromVI", err)
+	}
+	if c != (Curve{}) {
+		t.Errorf("curve %+v with an error", c)
+	}
+}
