@@ -82,7 +82,8 @@ func (m BulkModel) k0(t units.Temperature) float64 {
 }
 
 // Modulus returns the bulk modulus of the given kind at temperature t and
-// gauge pressure p (from −1 to 2000 bar):
+// gauge pressure p (from −1 to 2000 bar, and above −K₀(t)/M, where the
+// model's tangent modulus reaches zero):
 //
 //	tangent: K = K₀(t) + M·p
 //	secant:  K̄ = p / (1 − (1 + M·p/K₀(t))^(−1/M))   (→ K₀(t) as p → 0)
@@ -94,6 +95,9 @@ func (m BulkModel) Modulus(kind BulkKind, t units.Temperature, p units.Pressure)
 		return 0, err
 	}
 	if err := checkPropertyInputs(fn, t, p); err != nil {
+		return 0, err
+	}
+	if err := m.checkPressure(fn, t, p); err != nil {
 		return 0, err
 	}
 	if kind > IsentropicSecant {
@@ -114,6 +118,19 @@ func (m BulkModel) Modulus(kind BulkKind, t units.Temperature, p units.Pressure)
 		return 0, err
 	}
 	return units.Pressure(k), nil
+}
+
+// checkPressure refuses a gauge pressure at or below −K₀(t)/M, where the
+// model's tangent modulus K₀(t) + M·p would be zero or negative and the
+// Murnaghan volume ratio has no real value. Only a suction pressure with a
+// very soft K₀(t) (a tiny K₀ or a steep temperature coefficient C at high
+// temperature) gets there.
+func (m BulkModel) checkPressure(fn string, t units.Temperature, p units.Pressure) error {
+	floor := units.Pressure(-m.k0(t) / m.M)
+	if p > floor {
+		return nil
+	}
+	return validate.Above(fn, "p", p, floor)
 }
 
 // secant returns p/(1 − V/V₀) with V/V₀ = exp(−ln(1 + M·p/K₀)/M), written
@@ -229,8 +246,8 @@ func TubeBulkModulus(di, do units.Length, e units.Pressure, nu float64) (units.P
 	if err := validate.InRange(fn, "nu", nu, 0, 0.5); err != nil {
 		return 0, err
 	}
-	ri2, ro2 := float64(di*di)/4, float64(do*do)/4
-	b := float64(e) / (2 * ((ro2+ri2)/(ro2-ri2) + nu))
+	q := float64(di/do) * float64(di/do) // r_i²/r_o², in (0, 1): no under- or overflow
+	b := float64(e) / (2 * ((1+q)/(1-q) + nu))
 	if err := validate.Result(fn, "B", b); err != nil {
 		return 0, err
 	}

@@ -110,6 +110,9 @@ func (f Fluid) Density(t units.Temperature, p units.Pressure) (units.Density, er
 	if err := checkPropertyInputs(fn, t, p); err != nil {
 		return 0, err
 	}
+	if err := f.Bulk.checkPressure(fn, t, p); err != nil {
+		return 0, err
+	}
 	rho := f.density(t, p)
 	if err := validate.Result(fn, "density", rho); err != nil {
 		return 0, err

@@ -122,7 +122,7 @@ func TestFromDataSheet(t *testing.T) {
 		{"Class", DataSheet{V40: mm2s(32), V100: mm2s(6), Density15: 870}},
 		{"Density15", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(6)}},
 		{"PourPoint", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(6), Density15: 870, PourPoint: -1}},
-		{"v2", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(40), Density15: 870}},
+		{"V100", DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(40), Density15: 870}},
 		{"vi", DataSheet{Class: HM, V40: mm2s(32), VI: math.NaN(), Density15: 870}},
 	}
 	for _, b := range bad {

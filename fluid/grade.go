@@ -265,3 +265,12 @@ func (p *gradeParser) word(w string) bool {
 func (p *gradeParser) fail(fn string, err error) error {
 	return &units.ParseError{Func: "fluid." + fn, Input: p.s, Pos: p.i, Err: err}
 }
+
+// Designation returns the grade as ISO 3448 designates it, "ISO VG 46", or
+// "Grade(47)" when g is not a valid grade. ParseGrade reads it back.
+func (g Grade) Designation() string {
+	if !g.Valid() {
+		return g.String()
+	}
+	return "ISO " + g.String()
+}

@@ -145,7 +145,8 @@ type DataSheet struct {
 // FromDataSheet builds a Fluid from a data sheet: the D341 curve through
 // V40 at 40 °C and V100 at 100 °C, the density at 15 °C, and for the rest
 // (expansion, bulk modulus, heat) the typical values of the class, which
-// the caller may override.
+// the caller may override. V40 and V100 must lie within [MinViscosity,
+// MaxViscosity], V100 below V40; errors name the DataSheet field.
 func FromDataSheet(d DataSheet) (Fluid, error) {
 	const fn = "fluid.FromDataSheet"
 	if _, ok := families[d.Class]; !ok {
@@ -157,14 +158,36 @@ func FromDataSheet(d DataSheet) (Fluid, error) {
 	if err := validate.NonNegative(fn, "PourPoint", d.PourPoint); err != nil {
 		return Fluid{}, err
 	}
+	if err := validate.InRange(fn, "V40", d.V40, MinViscosity, MaxViscosity); err != nil {
+		return Fluid{}, err
+	}
 	v100 := d.V100
 	if v100 == 0 {
 		var err error
 		if v100, err = V100ForVI(d.V40, d.VI); err != nil {
 			return Fluid{}, err
 		}
+	} else if err := checkV100(fn, d.V40, v100); err != nil {
+		return Fluid{}, err
 	}
-	return build(d.Name, d.Class, d.V40, v100, d.Density15, d.PourPoint)
+	f, err := build(d.Name, d.Class, d.V40, v100, d.Density15, d.PourPoint)
+	if err != nil { // V100 so close to V40 that the curve is nearly flat
+		return Fluid{}, validate.Fail(fn, "V100", v100,
+			"below V40 = "+d.V40.String()+" by enough that the D341 curve spans 0.21–2·10⁷ mm²/s at finite temperatures")
+	}
+	return f, nil
+}
+
+// checkV100 checks a data sheet's 100 °C viscosity against D341's limits
+// and its 40 °C viscosity.
+func checkV100(fn string, v40, v100 units.KinematicViscosity) error {
+	if err := validate.InRange(fn, "V100", v100, MinViscosity, MaxViscosity); err != nil {
+		return err
+	}
+	if v100 >= v40 {
+		return validate.Fail(fn, "V100", v100, "< V40 = "+v40.String())
+	}
+	return nil
 }
 
 func build(name string, c Class, v40, v100 units.KinematicViscosity, rho units.Density, pour units.Temperature) (Fluid, error) {

@@ -42,14 +42,12 @@ func TestRegressionDensityOverflow(t *testing.T) {
 }
 
 // BulkModel.Modulus and TubeBulkModulus returned NaN beside their error;
-// a failed call now returns 0, as every other function does.
+// a failed call now returns 0, as every other function does. (The
+// TubeBulkModulus input, diameters of 1e-200 m, no longer fails at all:
+// see TestAuditTubeBulkModulusRatio.)
 func TestRegressionNaNBesideError(t *testing.T) {
-	k, err := TubeBulkModulus(1e-200, 2e-200, 2e11, 0.3) // squares underflow to 0
-	if err == nil || k != 0 {
-		t.Errorf("TubeBulkModulus = %v, %v; want 0 and an error", k, err)
-	}
 	m := BulkModel{K0: 1, M: 10, C: 0, Gamma: 1.1} // 1 Pa: 1 + M·p/K₀ < 0 at −0.5 bar
-	k, err = m.Modulus(IsothermalSecant, celsius(40), -0.5*units.Bar)
+	k, err := m.Modulus(IsothermalSecant, celsius(40), -0.5*units.Bar)
 	if err == nil || k != 0 {
 		t.Errorf("Modulus = %v, %v; want 0 and an error", k, err)
 	}

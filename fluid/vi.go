@@ -21,11 +21,14 @@ const minVIY = 2 * units.SquareMillimetrePerSecond
 // L and H (mm²/s) come from Table 1 by linear interpolation for
 // 2 ≤ Y ≤ 70 mm²/s (see ReferenceViscosities), and for Y > 70 mm²/s from
 // L = 0.8353Y² + 14.67Y − 216 and H = 0.1684Y² + 11.85Y − 97. Report the
-// result rounded with RoundVI. v100 must be at least 2 mm²/s and below v40.
-// It does not allocate unless it fails.
+// result rounded with RoundVI. v100 must be at least 2 mm²/s and below v40,
+// and v40 at most MaxViscosity. It does not allocate unless it fails.
 func ViscosityIndex(v40, v100 units.KinematicViscosity) (float64, error) {
 	const fn = "fluid.ViscosityIndex"
 	if err := validate.Positive(fn, "v40", v40); err != nil {
+		return 0, err
+	}
+	if err := validate.InRange(fn, "v40", v40, 0, MaxViscosity); err != nil {
 		return 0, err
 	}
 	if err := validate.Above(fn, "v100", v100, 0); err != nil {
@@ -106,7 +109,9 @@ func RoundVI(vi float64) float64 { return math.RoundToEven(vi) }
 // unique, except that Table 1 and the quadratics meet at Y = 70 mm²/s with a
 // step of about 0.03 % in L and H: there VI drops by about 0.02 just above
 // 70 mm²/s, and a VI reached at Y = 70 is reached again about 0.01 mm²/s
-// higher (the result may be either).
+// higher (the result may be either). For v40 below about 2.4 mm²/s, VIs
+// are in the thousands and need not rise with Y; the result is then one
+// root between the VIs at the ends of the span.
 // v40 must exceed 2 mm²/s, and vi must lie between the VI at Y = 2 mm²/s and
 // the VI as Y approaches v40 (the error gives that span).
 func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosity, error) {
@@ -120,15 +125,16 @@ func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosi
 	u := v40.SquareMillimetresPerSecond()
 	lo, hi := math.Log(2.0), math.Log(u*(1-1e-9))
 	vlo, vhi := viOf(u, 2), viOf(u, math.Exp(hi))
-	if !(vi >= vlo && vi <= vhi) {
-		return 0, validate.InRange(fn, "vi", vi, vlo, vhi)
+	rising := vhi >= vlo // false only for v40 below about 2.4 mm²/s
+	if !(vi >= min(vlo, vhi) && vi <= max(vlo, vhi)) {
+		return 0, validate.InRange(fn, "vi", vi, min(vlo, vhi), max(vlo, vhi))
 	}
 	for range 200 {
 		mid := 0.5 * (lo + hi)
 		if mid <= lo || mid >= hi {
 			break
 		}
-		if viOf(u, math.Exp(mid)) < vi {
+		if (viOf(u, math.Exp(mid)) < vi) == rising {
 			lo = mid
 		} else {
 			hi = mid
@@ -140,13 +146,20 @@ func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosi
 // CurveFromVI returns the D341 curve of an oil with 40 °C viscosity v40 and
 // viscosity index vi: the curve through v40 at 40 °C and V100ForVI(v40, vi)
 // at 100 °C. This is how a designer turns a grade and a VI into viscosity at
-// any temperature.
+// any temperature. Errors name v40 or vi (a VI within a few units of the
+// top of its span gives ν100 so close to v40 that the curve is refused).
 func CurveFromVI(v40 units.KinematicViscosity, vi float64) (Curve, error) {
 	v100, err := V100ForVI(v40, vi)
 	if err != nil {
 		return Curve{}, err
 	}
-	return CurveThrough(t40, v40, t100, v100)
+	c, err := CurveThrough(t40, v40, t100, v100)
+	if err != nil { // within a few VI of the top of the span: ν100 ≈ ν40
+		return Curve{}, validate.Fail("fluid.CurveFromVI", "vi", vi,
+			"a VI whose 100 °C viscosity ("+v100.String()+") lies far enough below v40 = "+v40.String()+
+				" that the D341 curve spans 0.21–2·10⁷ mm²/s at finite temperatures")
+	}
+	return c, nil
 }
 
 // The D2270 reference temperatures.

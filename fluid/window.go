@@ -202,3 +202,19 @@ func (e *SelectError) Error() string {
 
 // Unwrap returns ErrNoGrade.
 func (e *SelectError) Unwrap() error { return ErrNoGrade }
+
+// Span returns the temperatures at which the fluid's viscosity crosses the
+// window's (Curve.Span), with Cold raised to the pour point when the curve
+// would allow a colder start: below its pour point an oil does not flow as
+// the curve says, whatever its viscosity. The pour point is a bound, not a
+// safe start temperature; the pump maker's cold-start limit governs.
+func (f Fluid) Span(w Window) (Span, error) {
+	s, err := f.Curve.Span(w)
+	if err != nil {
+		return Span{}, err
+	}
+	if f.PourPoint > 0 && s.Cold < f.PourPoint {
+		s.Cold = f.PourPoint
+	}
+	return s, nil
+}

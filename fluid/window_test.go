@@ -129,3 +129,27 @@ func TestSelectGradesBadInput(t *testing.T) {
 		wantRangeError(t, err, c.param)
 	}
 }
+
+// Fluid.Span stops at the pour point when the curve alone would allow a
+// colder start, and otherwise equals Curve.Span. Own check values: a VG 46
+// HM preset with its pour point moved above the 1000 mm²/s temperature.
+func TestFluidSpanPourPoint(t *testing.T) {
+	f, err := Typical(HM, VG46)
+	if err != nil {
+		t.Fatal(err)
+	}
+	w := DefaultWindow()
+	cs, _ := f.Curve.Span(w)
+	fs, err := f.Span(w)
+	if err != nil || fs != cs {
+		t.Fatalf("Fluid.Span = %+v, %v; want Curve.Span %+v (pour point %v below Cold)", fs, err, cs, f.PourPoint)
+	}
+	f.PourPoint = cs.Cold.Add(5 * units.DeltaKelvin)
+	fs, err = f.Span(w)
+	if err != nil || fs.Cold != f.PourPoint || fs.Hot != cs.Hot || fs.OptimumFrom != cs.OptimumFrom {
+		t.Errorf("Fluid.Span with pour point %v = %+v, %v; want Cold at the pour point, rest as %+v", f.PourPoint, fs, err, cs)
+	}
+	if _, err := f.Span(Window{}); !errors.Is(err, units.ErrRange) {
+		t.Errorf("Fluid.Span(Window{}) err = %v, want ErrRange", err)
+	}
+}

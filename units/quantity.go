@@ -12,10 +12,12 @@ import (
 //
 // The zero Quantity is a dimensionless zero.
 type Quantity struct {
-	value  float64   // SI value, offset applied for a temperature point
-	offset float64   // the offset applied (temperature points only)
-	dim    Dimension // SI dimension
-	ref    reference // gauge, absolute or temperature point of a lone spelling
+	value   float64   // SI value, offset applied for a temperature point
+	offset  float64   // the offset applied (temperature points only)
+	reading float64   // a temperature point's number on its own scale
+	scale   tempScale // and that scale
+	dim     Dimension // SI dimension
+	ref     reference // gauge, absolute or temperature point of a lone spelling
 }
 
 // Parse reads a number followed by a unit expression, such as "1.3 gal/min",
@@ -48,11 +50,7 @@ func Parse(s string) (Quantity, error) {
 	if f.err != nil {
 		return Quantity{}, f.at("Parse", s, at)
 	}
-	q := Quantity{value: float64(num * r.factor), dim: r.dim, ref: r.ref}
-	if r.ref == refPoint {
-		q.value += r.offset
-		q.offset = r.offset
-	}
+	q := quantityOf(num, r)
 	if math.IsInf(q.value, 0) || math.IsNaN(q.value) {
 		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: 0, Err: ErrRange, Detail: "value is not finite"}
 	}
@@ -127,7 +125,7 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 	v := q.value
 	switch {
 	case q.ref == refPoint && r.ref == refPoint:
-		v = (v - r.offset) / r.factor
+		v = convertScale(q.reading, q.scale, scaleOf(r))
 	case q.ref|r.ref == refGauge|refAbsolute:
 		return 0, nil, &ConversionError{From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
 	case q.ref == refNone && r.ref == refPoint:
@@ -143,11 +141,13 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 
 // Convert converts value from one unit expression to another, such as
 // Convert(1, "gpm", "L/min") or Convert(20, "°C", "°F"). Lone temperature
-// spellings are points on their scales (with offsets); a difference (ΔK,
-// Δ°F) converts to another difference, not to a point (ErrReference). Gauge
-// and absolute pressure spellings do not mix (ErrReference): cross with an
-// explicit ambient. A temperature below absolute zero or an absolute
-// pressure below vacuum, given or asked for, is ErrRange.
+// spellings are points on their scales (with offsets), converted from scale
+// to scale in one correctly rounded step (20 °C is 68 °F exactly); a
+// difference (ΔK, Δ°F) converts to another difference, not to a point
+// (ErrReference). Gauge and absolute pressure spellings do not mix
+// (ErrReference): cross with an explicit ambient. A temperature below
+// absolute zero or an absolute pressure below vacuum, given or asked for, is
+// ErrRange.
 func Convert(value float64, from, to string) (float64, error) {
 	if math.IsInf(value, 0) || math.IsNaN(value) {
 		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64), Valid: "finite"}
@@ -156,17 +156,25 @@ func Convert(value float64, from, to string) (float64, error) {
 	if f.err != nil {
 		return 0, &ParseError{Func: "Convert", Input: from, Pos: f.pos, Err: f.err, Detail: f.detail}
 	}
-	q := Quantity{value: float64(value * r.factor), dim: r.dim, ref: r.ref}
-	if r.ref == refPoint {
-		q.value += r.offset
-		q.offset = r.offset
-	}
-	v, bound, err := q.in("Convert", to)
+	v, bound, err := quantityOf(value, r).in("Convert", to)
 	if bound != nil {
 		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from,
 			Valid: bound.kind + " " + bound.minText}
 	}
 	return v, err
+}
+
+// quantityOf returns x of the resolved unit r. A temperature point also
+// keeps its reading and scale, so that conversions between scales do not
+// round through kelvins.
+func quantityOf(x float64, r resolved) Quantity {
+	q := Quantity{value: float64(x * r.factor), dim: r.dim, ref: r.ref}
+	if r.ref == refPoint {
+		q.value += r.offset
+		q.offset = r.offset
+		q.reading, q.scale = x, scaleOf(r)
+	}
+	return q
 }
 
 func refName(r reference) string {

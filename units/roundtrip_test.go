@@ -6,6 +6,7 @@ import (
 	"errors"
 	"fmt"
 	"math"
+	"math/big"
 	"math/rand/v2"
 	"reflect"
 	"strconv"
@@ -569,5 +570,53 @@ func TestStringHugeValues(t *testing.T) {
 				t.Errorf("%s(%g).String() = %q reads back as %g", c.name, v, str, back)
 			}
 		}
+	}
+}
+
+// TestConvertTemperatureScales checks Convert between every pair of
+// temperature scales against the exact definitions °F = 1.8·°C + 32,
+// K = °C + 273.15, °R = 1.8·°C + 491.67 (NIST SP 811, B.9), evaluated on the
+// exact value of the input float with math/big and rounded once: readings
+// from −100 to 1100 in steps of 0.1 convert to the correctly rounded result.
+// So 20 °C is 68 °F, not 67.99999999999993. Readings below absolute zero
+// (−100 K, −100 °R) are ErrRange.
+func TestConvertTemperatureScales(t *testing.T) {
+	type scale struct {
+		sym     string
+		a, b, d int64 // reading = (a·°C + b)/d
+	}
+	scales := []scale{{"°C", 1, 0, 1}, {"°F", 9, 160, 5}, {"K", 100, 27315, 100}, {"°R", 180, 49167, 100}}
+	exact := func(x float64, from, to scale) float64 {
+		c := new(big.Rat).SetFloat64(x) // °C = (d·x − b)/a
+		c.Mul(c, big.NewRat(from.d, 1)).Sub(c, big.NewRat(from.b, 1)).Quo(c, big.NewRat(from.a, 1))
+		c.Mul(c, big.NewRat(to.a, 1)).Add(c, big.NewRat(to.b, 1)).Quo(c, big.NewRat(to.d, 1))
+		f, _ := c.Float64()
+		return f
+	}
+	bad := 0
+	for _, from := range scales {
+		for _, to := range scales {
+			for i := -1000; i <= 11000; i++ {
+				x := float64(i) / 10
+				got, err := Convert(x, from.sym, to.sym)
+				if exact(x, from, scales[2]) < 0 { // below absolute zero
+					if !errors.Is(err, ErrRange) || got != 0 {
+						t.Errorf("Convert(%v, %s, %s) = %v, %v; want ErrRange (below absolute zero)", x, from.sym, to.sym, got, err)
+					}
+					continue
+				}
+				if want := exact(x, from, to); err != nil || got != want {
+					if bad++; bad <= 10 {
+						t.Errorf("Convert(%v, %s, %s) = %v, %v; want %v", x, from.sym, to.sym, got, err, want)
+					}
+				}
+			}
+		}
+	}
+	if bad > 0 {
+		t.Errorf("%d conversions not correctly rounded", bad)
+	}
+	if got, _ := Convert(20, "°C", "°F"); got != 68 {
+		t.Errorf("Convert(20, °C, °F) = %v, want 68", got)
 	}
 }

@@ -180,12 +180,12 @@ func (c Code) Validate() error {
 		return validate.Fail(fn, "Form", float64(c.Form), "Counter or Microscope (the zero Code is no code)")
 	}
 	if c.Form == Microscope && c.N[2] != (Number{}) {
-		return validate.Fail(fn, "N[2]", float64(c.N[2].Scale), "zero in the microscope form")
+		return numberError(fn, 2, c.N[2], "zero (Number{}) in the microscope form")
 	}
 	measured := false
 	for i := range c.Len() {
 		if !c.N[i].valid() {
-			return validate.Fail(fn, fmt.Sprintf("N[%d]", i), float64(c.N[i].Scale), "a number in normal form (scale 0…28; 28 with MarkAbove; 0 with MarkNotMeasured or MarkTooMany)")
+			return numberError(fn, i, c.N[i], "a number in normal form (scale 0…28; 28 with MarkAbove; 0 with MarkNotMeasured or MarkTooMany)")
 		}
 		measured = measured || c.N[i].Mark != MarkNotMeasured
 	}
@@ -193,9 +193,15 @@ func (c Code) Validate() error {
 		return validate.Fail(fn, "N", 0.0, "at least one size measured")
 	}
 	if i, j, ok := c.ordered(); !ok {
-		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(j))
+		return c.orderError(fn, fmt.Sprintf("N[%d]", i), fmt.Sprintf("N[%d]", j), i, j)
 	}
 	return nil
+}
+
+// numberError reports number i of a code, shown with its mark, that is not
+// what valid asks for.
+func numberError(fn string, i int, n Number, valid string) error {
+	return &units.RangeError{Func: fn, Param: fmt.Sprintf("N[%d]", i), Value: fmt.Sprintf("Number{Scale: %d, Mark: %d}", n.Scale, n.Mark), Valid: valid}
 }
 
 // ordered reports whether the measured numbers of c do not grow with size;
@@ -215,9 +221,11 @@ func (c Code) ordered() (small, large int, ok bool) {
 	return 0, 0, true
 }
 
-// orderError reports counts that grow from size small to size large.
-func orderError(fn, small, large string) error {
-	return fmt.Errorf("%s: count at %s is less than at %s: %w (%w)", fn, small, large, ErrOrder, units.ErrRange)
+// orderError reports numbers i and j of c that grow with size; pi and pj
+// name them as the caller's parameters.
+func (c Code) orderError(fn, pi, pj string, i, j int) error {
+	return fmt.Errorf("%s: %s = %v (%s) < %s = %v (%s); want %s ≥ %s: %w (%w)", fn,
+		pi, c.N[i], c.Form.SizeLabel(i), pj, c.N[j], c.Form.SizeLabel(j), pi, pj, ErrOrder, units.ErrRange)
 }
 
 // MakeCode returns the counter code n4/n6/n14 (≥4/≥6/≥14 µm(c)) of plain
@@ -243,7 +251,7 @@ func (c Code) checkPlain(fn string, names ...string) error {
 		}
 	}
 	if i, j, ok := c.ordered(); !ok {
-		return orderError(fn, c.Form.SizeLabel(i), c.Form.SizeLabel(j))
+		return c.orderError(fn, names[i], names[j], i, j)
 	}
 	return nil
 }
@@ -287,10 +295,10 @@ func checkCounts(fn, nA, nB, nC string, a, b, c float64) error {
 		return err
 	}
 	if a < b {
-		return fmt.Errorf("%s: %s = %g < %s = %g: %w (%w)", fn, nA, a, nB, b, ErrOrder, units.ErrRange)
+		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nA, a, nB, b, nA, nB, ErrOrder, units.ErrRange)
 	}
 	if b < c {
-		return fmt.Errorf("%s: %s = %g < %s = %g: %w (%w)", fn, nB, b, nC, c, ErrOrder, units.ErrRange)
+		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nB, b, nC, c, nB, nC, ErrOrder, units.ErrRange)
 	}
 	return nil
 }

@@ -245,8 +245,20 @@ func TestParseCodeBadInput(t *testing.T) {
 		{"18/16/\xff", 6, units.ErrSyntax},
 		{"-/-/-", 0, units.ErrSyntax},
 		{"ISO 18/16/13", 0, units.ErrSyntax},
+		{"18//13", 3, units.ErrSyntax},
+		{"18/16/13/", 9, units.ErrSyntax},
+		{"14/12/≥≥7", 9, units.ErrSyntax},
+		{"18/16/13\n", 8, units.ErrSyntax},
+		// Look-alike characters: fullwidth digits and slash, ⩾ and ≧ for ≥,
+		// a no-break space.
+		{"１８/16/13", 0, units.ErrSyntax},
+		{"18／16/13", 2, units.ErrSyntax},
+		{"18/16/⩾7", 6, units.ErrSyntax},
+		{"18/16/≧7", 6, units.ErrSyntax},
+		{"18/16/\u00a013", 6, units.ErrSyntax},
 		// Out of the table.
 		{"29/16/13", 0, units.ErrRange},
+		{"29/1/0", 0, units.ErrRange},
 		{"18/16/99", 6, units.ErrRange},
 		// Numbers growing with size.
 		{"13/16/18", 3, ErrOrder},

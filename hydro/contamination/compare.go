@@ -21,6 +21,9 @@ var ErrForm = errors.New("codes of different forms")
 // and i must be below c.Len(): otherwise the error matches units.ErrRange.
 func (c Code) Range(i int) (above, upTo float64, err error) {
 	const fn = "contamination.Code.Range"
+	if c.Len() == 0 {
+		return 0, 0, validate.Fail(fn, "i", float64(i), "none: the zero Code (no code) has no numbers")
+	}
 	if i < 0 || i >= c.Len() {
 		return 0, 0, validate.Fail(fn, "i", float64(i), fmt.Sprintf("0 to %d", c.Len()-1))
 	}

@@ -14,7 +14,7 @@ import (
 // ErrUnreachable reports a target concentration that no filter can hold:
 // the ingress is at least what the flow can carry away even with every
 // particle caught.
-var ErrUnreachable = errors.New("target cannot be held at this flow and ingress")
+var ErrUnreachable = errors.New("no steady cleanliness can be held at this flow, ingress and beta")
 
 // Efficiency returns the capture efficiency, in percent, of a filter with
 // beta ratio beta: E = (1 − 1/β)·100 % (ISO 16889). beta must be finite and

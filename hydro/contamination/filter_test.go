@@ -14,12 +14,13 @@ func TestEfficiency(t *testing.T) {
 	cases := []struct {
 		beta, percent, tol float64
 	}{
-		// ISO 16889 definition E = (1 − 1/β)·100 % [S]; pairs from CHECKS.md.
-		{2, 50, 1e-13},     // [S]
-		{75, 98.67, 0.005}, // [S], printed to two decimals
-		{200, 99.5, 1e-13}, // [X]
-		{1000, 99.9, 1e-13},
-		{1, 0, 0},
+		// ISO 16889 definition E = (1 − 1/β)·100 % [S]; the pairs are
+		// computed from it [X] (CHECKS.md), not read from a printed table.
+		{2, 50, 1e-13},      // [X]
+		{75, 98.67, 0.005},  // [X], given to two decimals
+		{200, 99.5, 1e-13},  // [X]
+		{1000, 99.9, 1e-13}, // [X]
+		{1, 0, 0},           // [X] β = 1 catches nothing
 	}
 	for _, c := range cases {
 		e, err := Efficiency(c.beta)

@@ -93,7 +93,7 @@ func PerML(count float64, sample units.Volume) (float64, error) {
 	if err := validate.Positive(fn, "sample", sample); err != nil {
 		return 0, err
 	}
-	v := count / sample.Millilitres()
+	v := count/sample.Millilitres() + 0 // + 0 turns a count of −0 into +0
 	if err := validate.Result(fn, "count per mL", v); err != nil {
 		return 0, err
 	}

@@ -133,7 +133,8 @@ type TargetInput struct {
 	// Components lists the component types on the circuit; the most
 	// sensitive sets the target. At least one is needed.
 	Components []Component
-	// Pressure is the highest working pressure (gauge).
+	// Pressure is the highest working pressure (gauge), > 0: an unset
+	// pressure is refused rather than read as the low band.
 	Pressure units.Pressure
 	// Critical: downtime is costly or a failure is hazardous; one class
 	// cleaner (common practice).
@@ -182,12 +183,16 @@ type Target struct {
 // This is common practice, not a standard. The component makers' limits
 // take precedence; a sample that meets the target is no warranty of life.
 //
-// Errors: no component (ErrNoComponent), an unknown component, a bad
-// pressure, or a bad base or override code (units.ErrRange).
+// Errors: no component (ErrNoComponent), an unknown component, a pressure
+// that is not finite and > 0, or a bad base or override code
+// (units.ErrRange).
 func RecommendTarget(in TargetInput) (Target, error) {
 	const fn = "contamination.RecommendTarget"
 	if len(in.Components) == 0 {
 		return Target{}, fmt.Errorf("%s: %w", fn, ErrNoComponent)
+	}
+	if err := validate.Positive(fn, "Pressure", in.Pressure); err != nil {
+		return Target{}, err
 	}
 	band, err := BandFor(in.Pressure)
 	if err != nil {
@@ -235,6 +240,9 @@ func RecommendTarget(in TargetInput) (Target, error) {
 
 // baseFor returns the caller's base code for c if given, else the table's.
 func baseFor(fn string, bases map[Component]Code, c Component) (Code, error) {
+	if c >= componentCount {
+		return Code{}, validate.Fail(fn, "Components", float64(c), "known Component values")
+	}
 	if b, ok := bases[c]; ok {
 		return b, checkTarget(fn, "Bases["+c.String()+"]", b)
 	}

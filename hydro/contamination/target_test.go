@@ -112,11 +112,12 @@ func TestRecommendTargetBadInput(t *testing.T) {
 		err  error
 	}{
 		{"no component", TargetInput{Pressure: 100 * units.Bar}, ErrNoComponent},
-		{"unknown component", TargetInput{Components: []Component{componentCount}}, units.ErrRange},
+		{"unknown component", TargetInput{Components: []Component{componentCount}, Pressure: 100 * units.Bar}, units.ErrRange},
+		{"zero pressure", TargetInput{Components: []Component{GearPump}}, units.ErrRange},
 		{"negative pressure", TargetInput{Components: []Component{GearPump}, Pressure: -units.Bar}, units.ErrRange},
 		{"NaN pressure", TargetInput{Components: []Component{GearPump}, Pressure: units.Pressure(math.NaN())}, units.ErrRange},
-		{"marked base", TargetInput{Components: []Component{GearPump}, Bases: map[Component]Code{GearPump: bad}}, units.ErrRange},
-		{"microscope override", TargetInput{Components: []Component{GearPump}, Override: &micro}, units.ErrRange},
+		{"marked base", TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Bases: map[Component]Code{GearPump: bad}}, units.ErrRange},
+		{"microscope override", TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Override: &micro}, units.ErrRange},
 	}
 	for _, c := range cases {
 		if _, err := RecommendTarget(c.in); !errors.Is(err, c.err) {

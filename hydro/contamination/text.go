@@ -116,7 +116,7 @@ func parseDigits(s string, i int, m Mark) (Number, int, *units.ParseError) {
 	switch {
 	case j == i:
 		detail := "want a scale number"
-		if r, _ := utf8.DecodeRuneInString(s[i:]); i < len(s) && r == utf8.RuneError {
+		if r, size := utf8.DecodeRuneInString(s[i:]); r == utf8.RuneError && size == 1 {
 			detail = "invalid UTF-8"
 		}
 		return Number{}, i, &units.ParseError{Pos: i, Err: units.ErrSyntax, Detail: detail}
