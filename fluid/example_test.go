@@ -157,3 +157,18 @@ func ExampleEffectiveBulk_At() {
 	// Output:
 	// liquid 17707 bar, effective 2186 bar
 }
+
+// A log loader parked outdoors starts at −20 °C and its oil runs at 70 °C in
+// summer; the site's cautions go on the report beside the grade.
+func ExampleSite_Cautions() {
+	site := fluid.Site{
+		MinStart:   units.TemperatureFromCelsius(-20),
+		MaxRunning: units.TemperatureFromCelsius(70),
+	}
+	for _, c := range site.Cautions() {
+		fmt.Println(c)
+	}
+	// Output:
+	// running oil at 70 °C is above the 60 °C pump inlet limit of ISO 4413: add cooling or confirm the pump maker's limit; hot oil and surfaces burn
+	// starting at -20 °C: warm the oil at low speed and pressure before full load (cavitation and seal risk on a cold start)
+}

@@ -70,6 +70,30 @@ type Site struct {
 	MinStart, MaxRunning units.Temperature
 }
 
+// MaxPumpInlet is the highest oil temperature at a pump inlet that ISO 4413
+// (general rules and safety requirements for hydraulic systems) accepts:
+// 60 °C = 333.15 K. A pump maker's own limit may be lower and then governs.
+const MaxPumpInlet units.Temperature = 333.15
+
+// Cautions returns what a designer should be told about the site's duty,
+// for display beside the chosen grade: running hotter than MaxPumpInlet
+// (ISO 4413) ages the oil, thins it towards the pump's minimum and makes
+// tank, lines and oil hot enough to burn; a start below 0 °C needs a
+// warm-up at low speed and pressure before full load (common practice).
+// Nil when there is nothing to say.
+func (s Site) Cautions() []string {
+	var out []string
+	if s.MaxRunning > MaxPumpInlet {
+		out = append(out, "running oil at "+s.MaxRunning.String()+" is above the "+MaxPumpInlet.String()+
+			" pump inlet limit of ISO 4413: add cooling or confirm the pump maker's limit; hot oil and surfaces burn")
+	}
+	if s.MinStart < units.TemperatureFromCelsius(0) {
+		out = append(out, "starting at "+s.MinStart.String()+
+			": warm the oil at low speed and pressure before full load (cavitation and seal risk on a cold start)")
+	}
+	return out
+}
+
 // Candidate is one grade that suits a site, with the figures behind it.
 // Viscosities are worst cases: the cold start uses the grade's upper limit
 // at 40 °C (Grade.Max), the hot running its lower limit (Grade.Min).

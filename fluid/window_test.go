@@ -153,3 +153,30 @@ func TestFluidSpanPourPoint(t *testing.T) {
 		t.Errorf("Fluid.Span(Window{}) err = %v, want ErrRange", err)
 	}
 }
+
+// Site.Cautions flags running above the ISO 4413 pump inlet limit of 60 °C
+// (ISO 4413, as CHECKS.md gives it) and starts below 0 °C (common practice),
+// and says nothing for a temperate duty.
+func TestSiteCautions(t *testing.T) {
+	for _, c := range []struct {
+		site Site
+		want []string // substrings, one per caution, in order
+	}{
+		{Site{MinStart: celsius(10), MaxRunning: celsius(55)}, nil},
+		{Site{MinStart: celsius(10), MaxRunning: celsius(60)}, nil},
+		{Site{MinStart: celsius(10), MaxRunning: celsius(70)}, []string{"70 °C is above the 60 °C pump inlet limit of ISO 4413"}},
+		{Site{MinStart: celsius(-25), MaxRunning: celsius(50)}, []string{"starting at -25 °C"}},
+		{Site{MinStart: celsius(-25), MaxRunning: celsius(75)}, []string{"ISO 4413", "warm the oil"}},
+	} {
+		got := c.site.Cautions()
+		if len(got) != len(c.want) {
+			t.Errorf("%+v.Cautions() = %q, want %d cautions", c.site, got, len(c.want))
+			continue
+		}
+		for i, w := range c.want {
+			if !strings.Contains(got[i], w) {
+				t.Errorf("%+v.Cautions()[%d] = %q, want it to contain %q", c.site, i, got[i], w)
+			}
+		}
+	}
+}
