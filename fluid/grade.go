@@ -162,6 +162,7 @@ type GradeError struct {
 	below *gradeRow
 }
 
+// Error implements the error interface.
 func (e *GradeError) Error() string {
 	s := "fluid.GradeOf: " + e.V40.String() + " at 40 °C lies "
 	switch {

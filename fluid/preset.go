@@ -123,6 +123,7 @@ type PresetError struct {
 	Grade Grade
 }
 
+// Error implements the error interface.
 func (e *PresetError) Error() string {
 	return "fluid.Typical: " + e.Class.String() + " " + e.Grade.String() + ": " + ErrNoPreset.Error()
 }

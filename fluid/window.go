@@ -218,6 +218,7 @@ type SelectError struct {
 	VI   float64
 }
 
+// Error implements the error interface.
 func (e *SelectError) Error() string {
 	return "fluid.SelectGrades: no grade VG 10–150 of VI " + strconv.FormatFloat(e.VI, 'f', -1, 64) +
 		" stays in the viscosity window from " + e.Site.MinStart.String() + " start to " +

@@ -36,6 +36,7 @@ type ParseError struct {
 	Detail string // what was expected, nearest known spellings, and so on
 }
 
+// Error implements the error interface.
 func (e *ParseError) Error() string {
 	var b strings.Builder
 	if !strings.Contains(e.Func, ".") {
@@ -68,6 +69,7 @@ type RangeError struct {
 	Valid string // the valid range, e.g. "> 0 mm²/s" or "finite"
 }
 
+// Error implements the error interface.
 func (e *RangeError) Error() string {
 	return e.Func + ": " + e.Param + " = " + e.Value + " is out of range: want " + e.Valid
 }
@@ -84,6 +86,7 @@ type ConversionError struct {
 	Err  error  // ErrDimension, ErrReference or ErrRange
 }
 
+// Error implements the error interface.
 func (e *ConversionError) Error() string {
 	return "units: cannot convert " + e.From + " to " + e.To + ": " + e.Err.Error()
 }

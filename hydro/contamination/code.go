@@ -15,6 +15,7 @@ var ErrOrder error = &rangeSentinel{"cumulative counts grow with particle size"}
 // rangeSentinel is a sentinel error that also matches units.ErrRange.
 type rangeSentinel struct{ msg string }
 
+// Error implements the error interface.
 func (e *rangeSentinel) Error() string { return e.msg }
 
 // Is reports whether target is units.ErrRange.
