@@ -4,6 +4,7 @@ import (
 	"math"
 	"sort"
 	"strings"
+	"sync"
 	"unicode"
 	"unicode/utf8"
 )
@@ -408,6 +409,23 @@ func unknownDetail(word string, t *typeInfo) string {
 // it keeps the error path cheap on long or hostile input.
 const maxSuggest = 24
 
+// spelling is a registered spelling as runes, for suggestions.
+type spelling struct {
+	s     string
+	runes []rune
+	unit  int // index in unitTable
+}
+
+// spellingList holds every registered spelling in sorted order, built once.
+var spellingList = sync.OnceValue(func() []spelling {
+	out := make([]spelling, 0, len(spellings))
+	for s, i := range spellings {
+		out = append(out, spelling{s, []rune(s), i})
+	}
+	sort.Slice(out, func(i, j int) bool { return out[i].s < out[j].s })
+	return out
+})
+
 // nearestSpellings returns up to n registered spellings closest to word by
 // edit distance (case differences count half), best first.
 func nearestSpellings(word string, t *typeInfo, n int) []string {
@@ -423,23 +441,18 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 	var d distance
 	ra := []rune(word)
 	limit := 2 + runes/3 // in half-edits
-	for s, i := range spellings {
-		if t != nil && unitTable[i].dim != t.dim {
+	for _, sp := range spellingList() {
+		if t != nil && unitTable[sp.unit].dim != t.dim {
 			continue
 		}
-		if diff := utf8.RuneCountInString(s) - runes; 2*diff > limit || -2*diff > limit {
+		if diff := len(sp.runes) - runes; 2*diff > limit || -2*diff > limit {
 			continue
 		}
-		if dist := d.between(ra, s); dist <= limit {
-			cs = append(cs, cand{s, dist})
+		if dist := d.between(ra, sp.runes, limit); dist <= limit {
+			cs = append(cs, cand{sp.s, dist})
 		}
 	}
-	sort.Slice(cs, func(i, j int) bool {
-		if cs[i].d != cs[j].d {
-			return cs[i].d < cs[j].d
-		}
-		return cs[i].s < cs[j].s
-	})
+	sort.SliceStable(cs, func(i, j int) bool { return cs[i].d < cs[j].d })
 	var out []string
 	for i := 0; i < len(cs) && i < n; i++ {
 		out = append(out, `"`+cs[i].s+`"`)
@@ -452,18 +465,19 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 // edit: a change of letter case costs 1, any other edit 2.
 func editDistance(a, b string) int {
 	var d distance
-	return d.between([]rune(a), b)
+	rb := []rune(b)
+	return d.between([]rune(a), rb, 2*(len([]rune(a))+len(rb)))
 }
 
 // distance holds the buffers of editDistance, reused across calls.
 type distance struct {
-	rb            []rune
 	pp, prev, cur []int
 }
 
-func (d *distance) between(ra []rune, b string) int {
-	d.rb = append(d.rb[:0], []rune(b)...)
-	rb, n := d.rb, len(d.rb)+1
+// between returns the distance from ra to rb, or a number above limit as
+// soon as every alignment costs more than limit.
+func (d *distance) between(ra, rb []rune, limit int) int {
+	n := len(rb) + 1
 	if cap(d.pp) < n {
 		d.pp, d.prev, d.cur = make([]int, n), make([]int, n), make([]int, n)
 	}
@@ -471,15 +485,22 @@ func (d *distance) between(ra []rune, b string) int {
 	for j := range prev {
 		prev[j] = 2 * j
 	}
+	bestPrev := 0
 	for i := 1; i <= len(ra); i++ {
 		cur[0] = 2 * i
+		best := cur[0]
 		for j := 1; j <= len(rb); j++ {
 			cur[j] = min(prev[j]+2, cur[j-1]+2, prev[j-1]+subCost(ra[i-1], rb[j-1]))
 			if i > 1 && j > 1 && sameFold(ra[i-1], rb[j-2]) && sameFold(ra[i-2], rb[j-1]) {
 				cost := 2 + subCost(ra[i-1], rb[j-2]) + subCost(ra[i-2], rb[j-1])
 				cur[j] = min(cur[j], pp[j-2]+cost)
 			}
+			best = min(best, cur[j])
 		}
+		if min(best, bestPrev) > limit { // later rows build on these two
+			return limit + 1
+		}
+		bestPrev = best
 		pp, prev, cur = prev, cur, pp
 	}
 	return prev[len(rb)]
@@ -496,5 +517,12 @@ func subCost(x, y rune) int {
 }
 
 func sameFold(x, y rune) bool {
-	return x == y || unicode.SimpleFold(x) == y || unicode.SimpleFold(y) == x
+	if x == y {
+		return true
+	}
+	if x < utf8.RuneSelf && y < utf8.RuneSelf {
+		lx := x | 0x20
+		return lx == y|0x20 && 'a' <= lx && lx <= 'z'
+	}
+	return unicode.SimpleFold(x) == y || unicode.SimpleFold(y) == x
 }
