@@ -102,6 +102,10 @@ func (p Power) PerSpeed(n RotationalSpeed) (Torque, error) {
 // TimesDuration returns the energy of power p over d: E = P·t.
 func (p Power) TimesDuration(d time.Duration) Energy { return Energy(float64(p) * d.Seconds()) }
 
+// TimesVelocity returns the mechanical power of force f moving at velocity
+// v: P = F·v (a cylinder's output power).
+func (f Force) TimesVelocity(v Velocity) Power { return Power(float64(f) * float64(v)) }
+
 // TimesDensity returns the dynamic viscosity of a fluid of kinematic
 // viscosity v and density rho: μ = ν·ρ.
 func (v KinematicViscosity) TimesDensity(rho Density) DynamicViscosity {

@@ -41,9 +41,22 @@ func TestCylinderWorkedExample(t *testing.T) {
 			t.Fatal(err)
 		}
 		power := p.TimesFlow(q)
+		if mech := load.TimesVelocity(v); !near(float64(mech), float64(power), 1e-14) {
+			t.Errorf("%s: F·v = %v, p·Q = %v; an ideal cylinder turns all of p·Q into F·v", c.name, mech, power)
+		}
 		if math.Abs(p.PSI()-c.psi) > c.tolP || math.Abs(v.FeetPerSecond()-c.fps) > c.tolV || math.Abs(power.Horsepower()-c.hp) > c.tolH {
 			t.Errorf("%s: %.4f psi, %.4f ft/s, %.4f hp; want %v, %v, %v", c.name, p.PSI(), v.FeetPerSecond(), power.Horsepower(), c.psi, c.fps, c.hp)
 		}
+	}
+}
+
+// One horsepower is 550 ft·lbf/s by definition (NIST SP 811, Appendix B).
+func TestForceTimesVelocity(t *testing.T) {
+	if hp := (550 * PoundForce).TimesVelocity(1 * FootPerSecond).Horsepower(); !near(hp, 1, 1e-15) {
+		t.Errorf("550 lbf at 1 ft/s = %.17g hp, want 1", hp)
+	}
+	if kw := (10 * Kilonewton).TimesVelocity(0.1 * MetrePerSecond).Kilowatts(); !near(kw, 1, 1e-15) {
+		t.Errorf("10 kN at 0.1 m/s = %.17g kW, want 1", kw)
 	}
 }
 
