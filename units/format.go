@@ -100,20 +100,25 @@ func coherentFor(u *unitDef) *unitDef {
 	if u.factor == 1 && u.offset == 0 {
 		return u
 	}
-	best := u
+	if c := coherentUnit(u.dim, u.ref); c != nil {
+		return c
+	}
+	if c := coherentUnit(u.dim, refNone|refGauge|refAbsolute|refPoint); c != nil {
+		return c
+	}
+	return u
+}
+
+// coherentUnit returns the first registered unit of dimension dim with
+// factor 1, offset 0 and one of the references refs, or nil.
+func coherentUnit(dim Dimension, refs reference) *unitDef {
 	for i := range unitTable {
 		c := &unitTable[i]
-		if c.dim != u.dim || c.factor != 1 || c.offset != 0 || c.noReg {
-			continue
-		}
-		if c.ref&u.ref != 0 {
+		if c.dim == dim && c.factor == 1 && c.offset == 0 && !c.noReg && c.ref&refs != 0 {
 			return c
 		}
-		if best == u {
-			best = c
-		}
 	}
-	return best
+	return nil
 }
 
 // goString formats v as "v * base", the shortest decimal that reads back.
@@ -235,11 +240,8 @@ func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
 
 // siUnit returns the registered unit of t with factor 1 and no offset.
 func siUnit(t *typeInfo) *unitDef {
-	for i := range unitTable {
-		u := &unitTable[i]
-		if u.dim == t.dim && u.factor == 1 && u.offset == 0 && !u.noReg && u.ref&t.accept != 0 {
-			return u
-		}
+	if c := coherentUnit(t.dim, t.accept); c != nil {
+		return c
 	}
 	return &unitTable[0] // unreachable: every type has an SI unit (tested)
 }
