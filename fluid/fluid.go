@@ -162,11 +162,8 @@ func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, er
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
-	c := float64(f.Thermal.C40) + f.Thermal.CSlope*(t.Celsius()-40)
-	if err := validate.Positive(fn, "c", c); err != nil {
-		return 0, err
-	}
-	return units.SpecificHeatCapacity(c), nil
+	c, err := linearFrom40(fn, "c", float64(f.Thermal.C40), f.Thermal.CSlope, t)
+	return units.SpecificHeatCapacity(c), err
 }
 
 // ThermalConductivity returns the thermal conductivity at temperature t from
@@ -176,11 +173,18 @@ func (f Fluid) ThermalConductivity(t units.Temperature) (units.ThermalConductivi
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
-	k := float64(f.Thermal.K40) + f.Thermal.KSlope*(t.Celsius()-40)
-	if err := validate.Positive(fn, "k", k); err != nil {
+	k, err := linearFrom40(fn, "k", float64(f.Thermal.K40), f.Thermal.KSlope, t)
+	return units.ThermalConductivity(k), err
+}
+
+// linearFrom40 returns at40 + slope·(t − 40 °C), refused (0 and an error
+// naming name) unless it is finite and > 0.
+func linearFrom40(fn, name string, at40, slope float64, t units.Temperature) (float64, error) {
+	x := at40 + slope*(t.Celsius()-40)
+	if err := validate.Positive(fn, name, x); err != nil {
 		return 0, err
 	}
-	return units.ThermalConductivity(k), nil
+	return x, nil
 }
 
 // BulkModulus returns the bulk modulus of the given kind at temperature t

@@ -185,19 +185,8 @@ func candidate(g Grade, s Site, vi float64, w Window) (Candidate, bool) {
 
 func (c Candidate) reason(w Window) string {
 	b := []byte(c.Grade.String())
-	b = append(b, ": start "...)
-	b = c.AtStart.Append(b)
-	b = append(b, " (max "...)
-	b = w.Max.Append(b)
-	b = append(b, ", "...)
-	b = appendK(b, c.ColdMargin)
-	b = append(b, " K margin), running "...)
-	b = c.AtRunning.Append(b)
-	b = append(b, " (min "...)
-	b = w.Min.Append(b)
-	b = append(b, ", "...)
-	b = appendK(b, c.HotMargin)
-	b = append(b, " K margin)"...)
+	b = appendEnd(b, ": start ", c.AtStart, " (max ", w.Max, c.ColdMargin)
+	b = appendEnd(b, ", running ", c.AtRunning, " (min ", w.Min, c.HotMargin)
 	if c.RunsInOptimum {
 		b = append(b, "; running viscosity in the optimum band"...)
 	} else if c.AtRunning > w.OptimumHigh {
@@ -206,6 +195,17 @@ func (c Candidate) reason(w Window) string {
 		b = append(b, "; running viscosity below the optimum band (more leakage and wear)"...)
 	}
 	return string(b)
+}
+
+// appendEnd appends one end of the duty: "<what>ν (<bound>limit, m K margin)".
+func appendEnd(b []byte, what string, v units.KinematicViscosity, bound string, limit units.KinematicViscosity, margin units.TemperatureDifference) []byte {
+	b = append(b, what...)
+	b = v.Append(b)
+	b = append(b, bound...)
+	b = limit.Append(b)
+	b = append(b, ", "...)
+	b = appendK(b, margin)
+	return append(b, " K margin)"...)
 }
 
 func appendK(b []byte, d units.TemperatureDifference) []byte {
