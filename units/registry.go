@@ -465,8 +465,8 @@ func nearestSpellings(word string, t *typeInfo, n int) []string {
 // edit: a change of letter case costs 1, any other edit 2.
 func editDistance(a, b string) int {
 	var d distance
-	rb := []rune(b)
-	return d.between([]rune(a), rb, 2*(len([]rune(a))+len(rb)))
+	ra, rb := []rune(a), []rune(b)
+	return d.between(ra, rb, 2*(len(ra)+len(rb))) // no edit costs more than that
 }
 
 // distance holds the buffers of editDistance, reused across calls.
