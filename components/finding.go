@@ -1,0 +1,233 @@
+package components
+
+import (
+	"cmp"
+	"encoding/json"
+	"fmt"
+	"slices"
+	"strings"
+
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// Severity is the signal word of a finding, in rising order of consequence,
+// after ANSI Z535.4 and ISO 3864-2: [Notice] (a design note, no hazard to
+// people), [Caution] (minor or moderate injury, or damage, could result),
+// [Warning] (death or serious injury could result), [Danger] (death or
+// serious injury will result if not avoided).
+type Severity uint8
+
+// Severities, least severe first; the order is the order of consequence.
+const (
+	Notice Severity = iota
+	Caution
+	Warning
+	Danger
+)
+
+var severityNames = [...]string{"notice", "caution", "warning", "danger"}
+
+// String returns the signal word in lower case: "danger".
+func (s Severity) String() string {
+	if int(s) < len(severityNames) {
+		return severityNames[s]
+	}
+	return fmt.Sprintf("Severity(%d)", uint8(s))
+}
+
+// MarshalText writes the signal word.
+func (s Severity) MarshalText() ([]byte, error) { return marshalName("Severity", s, severityNames[:]) }
+
+// UnmarshalText reads a signal word written by MarshalText.
+func (s *Severity) UnmarshalText(b []byte) error {
+	return unmarshalName("components.Severity.UnmarshalText", b, s, severityNames[:])
+}
+
+// Hazard is the kind of harm a finding is about; [NoHazard] marks a design
+// note.
+type Hazard uint8
+
+// Hazard kinds.
+const (
+	NoHazard        Hazard = iota // a design note: sizing, cost, life, efficiency
+	StoredEnergy                  // accumulators, trapped pressure, springs
+	SuspendedLoad                 // a load that falls if pressure is lost
+	OverrunningLoad               // a load that drives the actuator
+	Burst                         // hose, tube, fitting or housing rupture
+	HotSurface                    // hot oil and hot surfaces
+	Injection                     // fluid injection through the skin from a leak
+	Cavitation                    // pump inlet or actuator below vapour or air release pressure
+	FilterBypass                  // unfiltered flow past a filter element
+	Overpressure                  // pressure above a component's rating
+	Runaway                       // uncontrolled speed of an actuator or load
+	Contamination                 // particles or water beyond what a component tolerates
+	ColdStart                     // sluggish or damaging flow in cold oil
+)
+
+var hazardNames = [...]string{
+	"none", "stored energy", "suspended load", "overrunning load", "burst", "hot surface",
+	"injection", "cavitation", "filter bypass", "overpressure", "runaway", "contamination", "cold start",
+}
+
+// String returns the hazard's name in words: "stored energy".
+func (h Hazard) String() string {
+	if int(h) < len(hazardNames) {
+		return hazardNames[h]
+	}
+	return fmt.Sprintf("Hazard(%d)", uint8(h))
+}
+
+// MarshalText writes the hazard's name.
+func (h Hazard) MarshalText() ([]byte, error) { return marshalName("Hazard", h, hazardNames[:]) }
+
+// UnmarshalText reads a name written by MarshalText.
+func (h *Hazard) UnmarshalText(b []byte) error {
+	return unmarshalName("components.Hazard.UnmarshalText", b, h, hazardNames[:])
+}
+
+// Finding is one statement for the reader of a result: how serious, about
+// what hazard, under a stable topic key a program can switch on
+// ("fluid.cold-margin"), one plain sentence, and the rule behind it.
+//
+// The sentence is a format with one %v verb per quoted value; the values
+// are typed quantities (units.Pressure, units.Flow, …), plain numbers or
+// strings, and [Finding.Text] writes each quantity in the unit system asked
+// for, so a finding reads the same in bar and in psi. Build findings with
+// [NewFinding]; the zero Finding is an empty notice.
+type Finding struct {
+	Severity Severity
+	Hazard   Hazard
+	Topic    string // stable key, "pkg.what": safe to switch on
+	Rule     Rule
+	format   string
+	args     []any
+}
+
+// NewFinding returns a finding whose sentence is format with args quoted in
+// it. Only the %v verb is meant; args are typed quantities, numbers or
+// strings. The args slice is copied.
+func NewFinding(sev Severity, hz Hazard, topic string, rule Rule, format string, args ...any) Finding {
+	return Finding{Severity: sev, Hazard: hz, Topic: topic, Rule: rule, format: format, args: slices.Clone(args)}
+}
+
+// Args returns a copy of the values the sentence quotes, in order.
+func (f Finding) Args() []any { return slices.Clone(f.args) }
+
+// Text writes the sentence with every quantity in the units of sys
+// (units.Metric, units.USCustomary, or a caller's own system); a nil sys
+// means metric.
+func (f Finding) Text(sys *units.System) string {
+	if sys == nil {
+		sys = metric()
+	}
+	out := make([]any, len(f.args))
+	for i, a := range f.args {
+		out[i] = quote(sys, a)
+	}
+	return fmt.Sprintf(f.format, out...)
+}
+
+// String returns the severity, the hazard when there is one, and the
+// sentence in metric units: "warning (cavitation): …".
+func (f Finding) String() string {
+	head := f.Severity.String()
+	if f.Hazard != NoHazard {
+		head += " (" + f.Hazard.String() + ")"
+	}
+	return head + ": " + f.Text(metric())
+}
+
+// same reports whether two findings say the same thing: same severity,
+// hazard, topic, rule and sentence.
+func (f Finding) same(g Finding) bool {
+	return f.Severity == g.Severity && f.Hazard == g.Hazard && f.Topic == g.Topic &&
+		f.Rule == g.Rule && f.Text(metric()) == g.Text(metric())
+}
+
+// findingJSON is the stable JSON form of a finding.
+type findingJSON struct {
+	Severity Severity `json:"severity"`
+	Hazard   Hazard   `json:"hazard"`
+	Topic    string   `json:"topic"`
+	Text     string   `json:"text"`
+	Rule     Rule     `json:"rule"`
+}
+
+// MarshalJSON writes {"severity","hazard","topic","text","rule"}, the text
+// in metric units. Use [Finding.Text] for another unit system.
+func (f Finding) MarshalJSON() ([]byte, error) {
+	return json.Marshal(findingJSON{f.Severity, f.Hazard, f.Topic, f.Text(metric()), f.Rule})
+}
+
+// UnmarshalJSON reads the form MarshalJSON writes; the sentence comes back
+// as fixed text.
+func (f *Finding) UnmarshalJSON(b []byte) error {
+	var j findingJSON
+	if err := json.Unmarshal(b, &j); err != nil {
+		return err
+	}
+	*f = Finding{Severity: j.Severity, Hazard: j.Hazard, Topic: j.Topic, Rule: j.Rule,
+		format: strings.ReplaceAll(j.Text, "%", "%%")}
+	return nil
+}
+
+// Findings is a list of findings. Its methods never change the receiver.
+type Findings []Finding
+
+// Merge returns fs followed by every finding of more that fs does not yet
+// say, in order, without duplicates.
+func (fs Findings) Merge(more ...Finding) Findings {
+	out := slices.Clone(fs)
+	for _, f := range more {
+		if !slices.ContainsFunc(out, f.same) {
+			out = append(out, f)
+		}
+	}
+	return out
+}
+
+// Hazard returns the findings about hazard h, in order.
+func (fs Findings) Hazard(h Hazard) Findings {
+	return fs.Filter(func(f Finding) bool { return f.Hazard == h })
+}
+
+// AtLeast returns the findings of severity s or worse, in order.
+func (fs Findings) AtLeast(s Severity) Findings {
+	return fs.Filter(func(f Finding) bool { return f.Severity >= s })
+}
+
+// Topic returns the findings under topic key, in order.
+func (fs Findings) Topic(key string) Findings {
+	return fs.Filter(func(f Finding) bool { return f.Topic == key })
+}
+
+// Filter returns the findings for which keep is true, in order.
+func (fs Findings) Filter(keep func(Finding) bool) Findings {
+	var out Findings
+	for _, f := range fs {
+		if keep(f) {
+			out = append(out, f)
+		}
+	}
+	return out
+}
+
+// Worst returns the highest severity in fs, and false when fs is empty.
+func (fs Findings) Worst() (Severity, bool) {
+	if len(fs) == 0 {
+		return Notice, false
+	}
+	w := fs[0].Severity
+	for _, f := range fs[1:] {
+		w = max(w, f.Severity)
+	}
+	return w, true
+}
+
+// Sorted returns a copy ordered most severe first; findings of one severity
+// keep their order.
+func (fs Findings) Sorted() Findings {
+	out := slices.Clone(fs)
+	slices.SortStableFunc(out, func(a, b Finding) int { return cmp.Compare(b.Severity, a.Severity) })
+	return out
+}

@@ -1,0 +1,161 @@
+package components
+
+import (
+	"encoding/json"
+	"errors"
+	"testing"
+
+	"github.com/google/go-cmp/cmp"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+func TestFindingText(t *testing.T) {
+	f := NewFinding(Warning, Cavitation, "pump.inlet", StandardRule("ISO 4413:2010"),
+		"the inlet sees %v against a minimum of %v", units.AbsolutePressure(72000), units.AbsolutePressure(80000))
+	// 72 000 Pa = 0.72 bar = 10.44 psi (psi = 6894.757 Pa, NIST SP 811).
+	if got, want := f.Text(&units.Metric), "the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
+		t.Errorf("metric text = %q; want %q", got, want)
+	}
+	if got, want := f.Text(&units.USCustomary), "the inlet sees 10.44 psia against a minimum of 11.6 psia"; got != want {
+		t.Errorf("US text = %q; want %q", got, want)
+	}
+	if got, want := f.String(), "warning (cavitation): the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
+		t.Errorf("String = %q; want %q", got, want)
+	}
+	if got := f.Text(nil); got != f.Text(&units.Metric) {
+		t.Errorf("nil system = %q; want the metric text", got)
+	}
+}
+
+func TestFindingArgsCopied(t *testing.T) {
+	args := []any{units.Pressure(1e5)}
+	f := NewFinding(Notice, NoHazard, "x", Rule{}, "%v", args...)
+	args[0] = units.Pressure(2e5)
+	a := f.Args()
+	a[0] = units.Pressure(3e5)
+	if got := f.Text(&units.Metric); got != "1 bar" {
+		t.Errorf("Text = %q after changing the caller's slices; want 1 bar", got)
+	}
+}
+
+func TestFindingsMergeFilterSort(t *testing.T) {
+	r := PracticeRule("test")
+	a := NewFinding(Notice, NoHazard, "a", r, "note %v", 1.0)
+	b := NewFinding(Danger, StoredEnergy, "b", r, "stored")
+	c := NewFinding(Warning, Burst, "c", r, "burst")
+	b2 := NewFinding(Danger, StoredEnergy, "b", r, "stored") // says what b says
+	fs := Findings{a, b}.Merge(c, b2, a)
+	if len(fs) != 3 {
+		t.Fatalf("Merge kept %d findings; want 3 without duplicates: %v", len(fs), fs)
+	}
+	if got := fs.Hazard(Burst); len(got) != 1 || got[0].Topic != "c" {
+		t.Errorf("Hazard(Burst) = %v", got)
+	}
+	if got := fs.AtLeast(Warning); len(got) != 2 {
+		t.Errorf("AtLeast(Warning) = %v; want b and c", got)
+	}
+	if got := fs.Topic("a"); len(got) != 1 {
+		t.Errorf("Topic(a) = %v", got)
+	}
+	var order []Severity
+	for _, f := range fs.Sorted() {
+		order = append(order, f.Severity)
+	}
+	if diff := cmp.Diff([]Severity{Danger, Warning, Notice}, order); diff != "" {
+		t.Errorf("Sorted order (-want +got):\n%s", diff)
+	}
+	if w, ok := fs.Worst(); !ok || w != Danger {
+		t.Errorf("Worst = %v, %v", w, ok)
+	}
+	if _, ok := Findings(nil).Worst(); ok {
+		t.Error("Worst of no findings reported a severity")
+	}
+	if fs[0].Topic != "a" {
+		t.Error("Sorted changed its receiver")
+	}
+}
+
+func TestFindingJSON(t *testing.T) {
+	f := NewFinding(Caution, HotSurface, "thermal.steady", PracticeRule("oil at most 60 °C at the pump inlet"),
+		"the oil settles at %v", units.TemperatureFromCelsius(71))
+	b, err := json.Marshal(f)
+	if err != nil {
+		t.Fatal(err)
+	}
+	want := `{"severity":"caution","hazard":"hot surface","topic":"thermal.steady","text":"the oil settles at 71 °C","rule":{"kind":"common practice","source":"oil at most 60 °C at the pump inlet"}}`
+	if string(b) != want {
+		t.Errorf("JSON =\n%s\nwant\n%s", b, want)
+	}
+	var back Finding
+	if err := json.Unmarshal(b, &back); err != nil {
+		t.Fatal(err)
+	}
+	if !back.same(f) {
+		t.Errorf("round trip = %v; want %v", back, f)
+	}
+	pct := NewFinding(Notice, NoHazard, "x", Rule{}, "100 %% sure")
+	b, _ = json.Marshal(pct)
+	if err := json.Unmarshal(b, &back); err != nil || back.Text(nil) != "100 % sure" {
+		t.Errorf("a literal percent sign did not survive: %q, %v", back.Text(nil), err)
+	}
+}
+
+func TestNamesRoundTrip(t *testing.T) {
+	for s := Notice; s <= Danger; s++ {
+		roundTrip(t, s)
+	}
+	for h := NoHazard; int(h) < len(hazardNames); h++ {
+		roundTrip(t, h)
+	}
+	for k := Unstated; int(k) < len(ruleKindNames); k++ {
+		roundTrip(t, k)
+	}
+	roundTrip(t, AtMost)
+	roundTrip(t, AtLeast)
+	var s Severity
+	err := s.UnmarshalText([]byte("DANGER!"))
+	var pe *units.ParseError
+	if !errors.As(err, &pe) || !errors.Is(err, units.ErrSyntax) || pe.Func != "components.Severity.UnmarshalText" {
+		t.Errorf("bad severity error = %v", err)
+	}
+	if _, err := Severity(9).MarshalText(); !errors.Is(err, units.ErrRange) {
+		t.Errorf("Severity(9).MarshalText error = %v; want ErrRange", err)
+	}
+	if Hazard(200).String() != "Hazard(200)" || Severity(9).String() != "Severity(9)" {
+		t.Error("String of an unnamed value")
+	}
+}
+
+func roundTrip[T interface {
+	~uint8
+	MarshalText() ([]byte, error)
+}](t *testing.T, v T) {
+	t.Helper()
+	b, err := v.MarshalText()
+	if err != nil {
+		t.Fatalf("%v: %v", v, err)
+	}
+	var back T
+	if err := any(&back).(interface{ UnmarshalText([]byte) error }).UnmarshalText(b); err != nil || back != v {
+		t.Errorf("%q read back as %v, %v", b, back, err)
+	}
+}
+
+func TestRuleString(t *testing.T) {
+	for _, c := range []struct {
+		r    Rule
+		want string
+	}{
+		{StandardRule("ISO 3320:2013, Table 1"), "standard: ISO 3320:2013, Table 1"},
+		{HandbookRule("a handbook"), "handbook: a handbook"},
+		{PracticeRule("pump 25 % over flow"), "common practice: pump 25 % over flow"},
+		{CallerRule("Spec.Margin"), "caller: Spec.Margin"},
+		{OurRule("laminar below Re 2300"), "our choice: laminar below Re 2300"},
+		{PhysicsRule("Pascal's law"), "physics: Pascal's law"},
+		{Rule{}, "unstated"},
+	} {
+		if got := c.r.String(); got != c.want {
+			t.Errorf("%#v.String() = %q; want %q", c.r, got, c.want)
+		}
+	}
+}

@@ -1,0 +1,263 @@
+package components
+
+import (
+	"encoding/json"
+	"iter"
+	"math"
+	"slices"
+	"strconv"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
+)
+
+// Series is an ordered list of standard sizes of one quantity — cylinder
+// bores, motor ratings, tube diameters — with a name, the rule it comes from,
+// and for each size whether it is a preferred (first-choice) or a
+// second-choice value, as ISO 3320 marks its bores.
+//
+// A Series is immutable and safe for concurrent use; the zero Series is
+// empty. Build one with [NewSeries].
+type Series[T ~float64] struct {
+	name   string
+	rule   Rule
+	values []T
+	second []bool // parallel to values; nil when every value is preferred
+}
+
+// NewSeries returns a series of the given sizes, which must be finite,
+// > 0 and strictly ascending; second lists the second-choice sizes, each of
+// which must be one of sizes. The slices are copied. It fails with an error
+// matching units.ErrRange naming the bad size.
+func NewSeries[T ~float64](name string, rule Rule, sizes, second []T) (Series[T], error) {
+	const fn = "components.NewSeries"
+	for i, v := range sizes {
+		p := "sizes[" + strconv.Itoa(i) + "]"
+		if err := validate.Positive(fn, p, v); err != nil {
+			return Series[T]{}, err
+		}
+		if i > 0 && v <= sizes[i-1] {
+			return Series[T]{}, validate.Above(fn, p, v, sizes[i-1])
+		}
+	}
+	s := Series[T]{name: name, rule: rule, values: slices.Clone(sizes)}
+	if len(second) > 0 {
+		s.second = make([]bool, len(sizes))
+	}
+	for i, v := range second {
+		j, ok := slices.BinarySearch(s.values, v)
+		if !ok {
+			return Series[T]{}, validate.Fail(fn, "second["+strconv.Itoa(i)+"]", v, "one of sizes")
+		}
+		s.second[j] = true
+	}
+	return s, nil
+}
+
+// Name returns the series' name: "ISO 3320 cylinder bores".
+func (s Series[T]) Name() string { return s.name }
+
+// Rule returns where the series comes from.
+func (s Series[T]) Rule() Rule { return s.rule }
+
+// Len returns the number of sizes.
+func (s Series[T]) Len() int { return len(s.values) }
+
+// At returns the i-th size, smallest first, and whether it is preferred.
+// It returns 0, false when i is out of range.
+func (s Series[T]) At(i int) (size T, preferred bool) {
+	if i < 0 || i >= len(s.values) {
+		return 0, false
+	}
+	return s.values[i], s.second == nil || !s.second[i]
+}
+
+// All iterates over the sizes, smallest first, with whether each is
+// preferred.
+func (s Series[T]) All() iter.Seq2[T, bool] {
+	return func(yield func(T, bool) bool) {
+		for i := range s.values {
+			if v, p := s.At(i); !yield(v, p) {
+				return
+			}
+		}
+	}
+}
+
+// Smallest returns the smallest size (0 for an empty series).
+func (s Series[T]) Smallest() T {
+	v, _ := s.At(0)
+	return v
+}
+
+// Largest returns the largest size (0 for an empty series).
+func (s Series[T]) Largest() T {
+	v, _ := s.At(len(s.values) - 1)
+	return v
+}
+
+// Preferred reports whether v is a size of the series and a preferred one.
+func (s Series[T]) Preferred(v T) bool {
+	i, ok := slices.BinarySearch(s.values, v)
+	return ok && (s.second == nil || !s.second[i])
+}
+
+// Contains reports whether v is a size of the series.
+func (s Series[T]) Contains(v T) bool {
+	_, ok := slices.BinarySearch(s.values, v)
+	return ok
+}
+
+// PreferredOnly returns the series without its second-choice sizes.
+func (s Series[T]) PreferredOnly() Series[T] {
+	if s.second == nil {
+		return s
+	}
+	out := Series[T]{name: s.name + " (preferred)", rule: s.rule}
+	for v, p := range s.All() {
+		if p {
+			out.values = append(out.values, v)
+		}
+	}
+	return out
+}
+
+// Next returns the smallest size at or above min. It fails with an error
+// matching units.ErrRange when min is not finite and > 0, or is above the
+// largest size (the error names the largest).
+func (s Series[T]) Next(min T) (T, error) {
+	const fn = "components.Series.Next"
+	if err := validate.Positive(fn, "min", min); err != nil {
+		return 0, err
+	}
+	i, _ := slices.BinarySearch(s.values, min)
+	if i == len(s.values) {
+		return 0, s.beyond(fn, "min", min)
+	}
+	return s.values[i], nil
+}
+
+// Below returns the largest size strictly below v (the next smaller
+// size). It fails with an error matching units.ErrRange when v is not finite
+// and > 0 or when no size is below it.
+func (s Series[T]) Below(v T) (T, error) {
+	const fn = "components.Series.Below"
+	if err := validate.Positive(fn, "v", v); err != nil {
+		return 0, err
+	}
+	i, _ := slices.BinarySearch(s.values, v)
+	if i == 0 {
+		return 0, validate.Fail(fn, "v", v, "> "+format(s.Smallest())+", the smallest of "+s.label())
+	}
+	return s.values[i-1], nil
+}
+
+// Nearest returns the size closest to v on a ratio scale (standard series
+// are geometric), the larger on a tie. It fails with an error matching
+// units.ErrRange when v is not finite and > 0 or the series is empty.
+func (s Series[T]) Nearest(v T) (T, error) {
+	const fn = "components.Series.Nearest"
+	if err := validate.Positive(fn, "v", v); err != nil {
+		return 0, err
+	}
+	if len(s.values) == 0 {
+		return 0, s.beyond(fn, "v", v)
+	}
+	i, _ := slices.BinarySearch(s.values, v)
+	switch {
+	case i == 0:
+		return s.values[0], nil
+	case i == len(s.values):
+		return s.values[i-1], nil
+	}
+	lo, hi := s.values[i-1], s.values[i]
+	if math.Log(float64(v/lo)) < math.Log(float64(hi/v)) {
+		return lo, nil
+	}
+	return hi, nil
+}
+
+// Select returns the choice of the smallest size at or above required. A
+// requirement above the largest size is not an error: the choice comes back
+// with Chosen 0 and OK false, for the caller to report as a finding. It
+// fails with an error matching units.ErrRange only when required is not
+// finite and > 0.
+func (s Series[T]) Select(required T) (Choice[T], error) {
+	if err := validate.Positive("components.Series.Select", "required", required); err != nil {
+		return Choice[T]{}, err
+	}
+	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
+	if i, _ := slices.BinarySearch(s.values, required); i < len(s.values) {
+		c.Chosen = s.values[i]
+	}
+	return c, nil
+}
+
+func (s Series[T]) label() string {
+	if s.name == "" {
+		return "the series"
+	}
+	return s.name
+}
+
+func (s Series[T]) beyond(fn, param string, v T) error {
+	if len(s.values) == 0 {
+		return validate.Fail(fn, param, v, "a size of a non-empty series")
+	}
+	return validate.Fail(fn, param, v, "≤ "+format(s.Largest())+", the largest of "+s.label())
+}
+
+// format writes v with its unit when T has a String method.
+func format[T ~float64](v T) string {
+	if st, ok := any(v).(interface{ String() string }); ok {
+		return st.String()
+	}
+	return strconv.FormatFloat(float64(v), 'g', -1, 64)
+}
+
+// Choice is a standard size picked for a computed requirement: the
+// required value, the chosen size (0 when no size of the series meets it),
+// the series' name and its rule. The margin and the verdict are computed.
+type Choice[T ~float64] struct {
+	Required T
+	Chosen   T
+	Series   string
+	Rule     Rule
+}
+
+// OK reports whether a size was chosen that meets the requirement.
+func (c Choice[T]) OK() bool { return c.Chosen > 0 && c.Chosen >= c.Required }
+
+// Margin returns Chosen/Required − 1, the fraction the chosen size is above
+// the requirement (0.12 for 12 %), or 0 when nothing was chosen or the
+// requirement is 0.
+func (c Choice[T]) Margin() float64 {
+	if c.Chosen == 0 || c.Required == 0 {
+		return 0
+	}
+	return float64(c.Chosen/c.Required) - 1
+}
+
+type choiceJSON[T ~float64] struct {
+	Required T       `json:"required"`
+	Chosen   T       `json:"chosen"`
+	Series   string  `json:"series"`
+	Margin   float64 `json:"margin"`
+	OK       bool    `json:"ok"`
+	Rule     Rule    `json:"rule"`
+}
+
+// MarshalJSON writes {"required","chosen","series","margin","ok","rule"}.
+func (c Choice[T]) MarshalJSON() ([]byte, error) {
+	return json.Marshal(choiceJSON[T]{c.Required, c.Chosen, c.Series, c.Margin(), c.OK(), c.Rule})
+}
+
+// UnmarshalJSON reads the form MarshalJSON writes; margin and ok are
+// recomputed, not read.
+func (c *Choice[T]) UnmarshalJSON(b []byte) error {
+	var j choiceJSON[T]
+	if err := json.Unmarshal(b, &j); err != nil {
+		return err
+	}
+	*c = Choice[T]{Required: j.Required, Chosen: j.Chosen, Series: j.Series, Rule: j.Rule}
+	return nil
+}
