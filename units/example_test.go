@@ -56,7 +56,7 @@ func ExampleParse() {
 	fmt.Println(err)
 	// Output:
 	// 4.921 L/min <nil>
-	// units: cannot convert m^3·s^-1 (volume flow) to Pressure (kg·m^-1·s^-2): dimension mismatch
+	// units.Quantity.Pressure: cannot convert m^3·s^-1 (volume flow) to Pressure (kg·m^-1·s^-2): dimension mismatch
 }
 
 func ExampleConvert() {
