@@ -120,7 +120,17 @@ func parseHoseSize(fn, input string) (HoseSize, error) {
 		}
 	}
 	return 0, &units.ParseError{Func: fn, Input: input, Pos: start, Err: units.ErrRange,
-		Detail: "want an SAE J517 dash size: -3 -4 -5 -6 -8 -10 -12 -16 -20 -24 -32 -40 -48 -56 -64"}
+		Detail: "want an SAE J517 dash size:" + dashList()}
+}
+
+// dashList writes the dash sizes, " -3 -4 … -64", for an error message.
+func dashList() string {
+	var b []byte
+	for _, h := range hoseDashes {
+		b = append(b, " -"...)
+		b = strconv.AppendInt(b, int64(h), 10)
+	}
+	return string(b)
 }
 
 func skipSpaces(s string, i int) int {

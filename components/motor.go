@@ -28,7 +28,7 @@ var (
 )
 
 // IECMotorRatings returns the preferred rated outputs of IEC 60072-1
-// (clause 9) for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
+// (clause 9, "Preferred rated output values") for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
 // 0.25 0.37 0.55 0.75 1.1 1.5 2.2 3 4 5.5 7.5 11 15 18.5 22 30 37 45 55 75 90
 // 110 132 160 200 250 315 kW. The values to 55 kW were confirmed in a
 // published list; 75 kW and up are recalled (from memory).

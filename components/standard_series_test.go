@@ -101,6 +101,9 @@ func TestIECMotorRatings(t *testing.T) {
 func TestNEMAMotorRatings(t *testing.T) {
 	const hp = units.Horsepower
 	// NEMA MG 1: ½ … 150 hp confirmed; 200 … 500 hp by 50 from memory.
+	// Cross-check: the horsepower column of NFPA 70 (NEC) Table 430.250, as
+	// reproduced in a public reference table, lists ½ … 200, 400, 450 and
+	// 500 hp; 250, 300 and 350 hp were not legible there.
 	checkTable(t, NEMAMotorRatings(),
 		[]units.Power{0.5 * hp, 0.75 * hp, 1 * hp, 1.5 * hp, 2 * hp, 3 * hp, 5 * hp, 7.5 * hp, 10 * hp,
 			15 * hp, 20 * hp, 25 * hp, 30 * hp, 40 * hp, 50 * hp, 60 * hp, 75 * hp, 100 * hp, 125 * hp,

@@ -71,7 +71,9 @@ var (
 // diameter, by outside diameter. It returns nil for an unknown class.
 //
 // The outside diameters are the L and S series of ISO 8434-1 (24° cone
-// connectors; recalled from the standard, from memory). ISO 8434-1 does not
+// connectors for tube of 4 mm to 42 mm outside diameter, ISO 8434-1:2018,
+// clause 1; the series values recalled, from memory); its extra-light LL
+// series (4 mm to 12 mm) is left out. ISO 8434-1 does not
 // fix wall thicknesses: the one or two walls listed for each diameter are
 // the common stock sizes of cold-drawn precision steel hydraulic tube
 // (EN 10305-4 practice), common practice. Light-series walls run 1–3 mm,
