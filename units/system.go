@@ -45,7 +45,9 @@ func (s *System) checkField(field, spelling string, t *typeInfo) error {
 	return fmt.Errorf("units: System %q: field %s = %q is not a unit of %s: %w", s.Name, field, spelling, t.kind, ErrUnknownUnit)
 }
 
-// fits reports whether values of type t can be shown in unit u.
+// fits reports whether values of type t can be shown in unit u. A vacuum
+// reading ("inHg vac") cannot show a pressure above ambient, so it is not a
+// display unit.
 func fits(u *unitDef, t *typeInfo) bool {
-	return u.dim == t.dim && u.ref&t.accept != 0 && (t.useOffset || u.offset == 0)
+	return u.dim == t.dim && u.ref&t.accept != 0 && (t.useOffset || u.offset == 0) && !u.isVacuum()
 }
