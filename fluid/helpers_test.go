@@ -30,3 +30,11 @@ func wantRangeError(t *testing.T, err error, param string) {
 		t.Fatalf("err = %q does not name %q and its valid range", err, param)
 	}
 }
+
+func up(v units.KinematicViscosity) units.KinematicViscosity {
+	return units.KinematicViscosity(math.Nextafter(float64(v), math.Inf(1)))
+}
+
+func down(v units.KinematicViscosity) units.KinematicViscosity {
+	return units.KinematicViscosity(math.Nextafter(float64(v), math.Inf(-1)))
+}
