@@ -14,7 +14,7 @@ func Example() {
 	p := 210 * units.Bar
 	q := 38 * units.LitrePerMinute
 	fmt.Printf("%.0f psi, %.2f gpm\n", p.PSI(), q.USGallonsPerMinute())
-	fmt.Println(p.TimesFlow(q))                                // metric trade unit
+	fmt.Println(p.TimesFlow(q))                                  // metric trade unit
 	fmt.Println(units.USCustomary().FormatPower(p.TimesFlow(q))) // US customary
 	// Output:
 	// 3046 psi, 10.04 gpm
