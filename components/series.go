@@ -150,7 +150,10 @@ func (s Series[T]) Above(v T) (T, error) {
 		i++
 	}
 	if i == len(s.values) {
-		return 0, s.beyond(fn, "v", v)
+		if i == 0 {
+			return 0, s.beyond(fn, "v", v)
+		}
+		return 0, validate.Fail(fn, "v", v, "< "+format(s.Largest())+", the largest of "+s.label())
 	}
 	return s.values[i], nil
 }

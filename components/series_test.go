@@ -166,7 +166,7 @@ func TestSeriesAboveFloor(t *testing.T) {
 		t.Errorf("Floor(39 mm) error = %v; want a RangeError naming the smallest", err)
 	}
 	_, err = s.Above(100 * mm)
-	if !errors.As(err, &re) || re.Param != "v" || re.Valid != "≤ 100 mm, the largest of test bores" {
+	if !errors.As(err, &re) || re.Param != "v" || re.Valid != "< 100 mm, the largest of test bores" {
 		t.Errorf("Above(100 mm) error = %v; want a RangeError naming the largest", err)
 	}
 }
@@ -291,3 +291,9 @@ func BenchmarkSeriesSelectPreferred(b *testing.B) {
 }
 
 func first[T any](v T, _ error) T { return v }
+
+func TestSeriesAboveEmpty(t *testing.T) {
+	if _, err := (Series[units.Length]{}).Above(1); !errors.Is(err, units.ErrRange) {
+		t.Errorf("Above on an empty series: error = %v; want ErrRange", err)
+	}
+}
