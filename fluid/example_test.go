@@ -31,12 +31,13 @@ func ExampleSelectGrades() {
 		fmt.Println(err)
 		return
 	}
+	us := units.USCustomary()
 	for _, c := range cs {
 		fmt.Printf("%v: start %v (≤ %v), running %v (≥ %v)\n",
 			c.Grade, c.Start.Value, c.Start.Limit, c.Running.Value, c.Running.Limit)
 		for _, f := range c.Findings {
 			fmt.Println(f)
-			fmt.Println(f.Text(&units.USCustomary))
+			fmt.Println(f.Text(&us))
 		}
 	}
 	// Output:

@@ -128,7 +128,8 @@ func TestSelectGradesThinMargin(t *testing.T) {
 	if len(args) != 4 || args[1] != vg32.ColdMargin || args[0] != site.MinStart || args[3] != w.Max {
 		t.Errorf("finding quotes %v, want the start, the margin, the grade and the limit as typed values", args)
 	}
-	metric, us := fs[0].Text(&units.Metric), fs[0].Text(&units.USCustomary)
+	usSystem := units.USCustomary()
+	metric, us := fs[0].Text(nil), fs[0].Text(&usSystem)
 	if !strings.Contains(metric, "0.3 K") || !strings.Contains(us, "0.54 °F") || !strings.Contains(us, "cSt") {
 		t.Errorf("metric %q, US %q: the margin and limit do not render in each system", metric, us)
 	}

@@ -1,7 +1,5 @@
 package validate
 
-import "github.com/hydrosize/hydrosize/units"
-
 // Sentinel returns a package sentinel error with message msg that also
 // matches units.ErrRange with errors.Is, so a family's own sentinel
 // (contamination.ErrOrder, fluid.ErrNoGrade, …) keeps the promise that
@@ -12,12 +10,12 @@ type sentinel struct{ msg string }
 
 func (e *sentinel) Error() string { return e.msg }
 
-// Is reports whether target is units.ErrRange.
-func (e *sentinel) Is(target error) bool { return target == units.ErrRange }
+// Is reports whether target is ErrRange (units.ErrRange).
+func (e *sentinel) Is(target error) bool { return target == ErrRange }
 
-// Kind returns err, a *units.RangeError, marked also as kind (a sentinel):
+// Kind returns err, a *RangeError (units.RangeError), marked also as kind (a sentinel):
 // the result matches both with errors.Is, errors.As finds the
-// *units.RangeError, and its text is err's followed by kind's. A nil err
+// *RangeError, and its text is err's followed by kind's. A nil err
 // gives nil.
 func Kind(err, kind error) error {
 	if err == nil {
