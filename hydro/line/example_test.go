@@ -3,6 +3,7 @@ package line_test
 import (
 	"fmt"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/fluid"
 	"github.com/hydrosize/hydrosize/hydro/line"
 	"github.com/hydrosize/hydrosize/units"
@@ -104,4 +105,22 @@ func ExampleBarlow() {
 	r, _ := line.Barlow(25*units.Millimetre, 2.5*units.Millimetre, 450*units.Megapascal, 4, line.OutsideDiameter)
 	fmt.Println(r.Working, r.Rule)
 	// Output: 225 bar physics: Barlow, p = 2·S·t/(D·SF) on the outside diameter
+}
+
+func ExampleSelectTube() {
+	// The baling press pressure line: 95 L/min at up to 6 m/s, 250 bar in
+	// S-series tube of 410 MPa steel with a safety factor of 4 (the
+	// 25 × 3 mm tube has the bore but holds only 246 bar).
+	c, _ := line.SelectTube(line.TubeNeed{Flow: 95 * units.LitrePerMinute, Limit: line.PressureLine.Limit(),
+		Class: components.HeavyTube, Pressure: 250 * units.Bar, Strength: 410 * units.Megapascal, Safety: 4})
+	fmt.Printf("%v: bore %.1f mm for %.1f mm needed, %.2f m/s, wall good for %.0f bar\n",
+		c.Tube, c.Bore.Chosen.Millimetres(), c.Bore.Required.Millimetres(), c.Velocity.Value.MetresPerSecond(), c.Wall.Working.Bar())
+	// Output: 30 × 5 mm (S): bore 20.0 mm for 18.3 mm needed, 5.04 m/s, wall good for 342 bar
+}
+
+func ExampleSelectHose() {
+	// The forestry crane's pump suction hose: 40 L/min at up to 1.2 m/s.
+	c, _ := line.SelectHose(40*units.LitrePerMinute, line.SuctionLine.Limit())
+	fmt.Printf("dash %v, %.2f m/s\n", c.Size, c.Velocity.Value.MetresPerSecond())
+	// Output: dash -20, 0.84 m/s
 }

@@ -39,7 +39,7 @@ func TestClosureSurge(t *testing.T) {
 	}
 	t40 := units.TemperatureFromCelsius(40)
 	c := Closure{Fluid: oil, Temperature: t40, Pressure: 0, Velocity: 4 * units.MetrePerSecond, Length: 12,
-		Wall: Wall{Bore: 20 * units.Millimetre, OD: 22 * units.Millimetre, Modulus: 206 * units.Gigapascal, Poisson: 0.3},
+		Wall:   Wall{Bore: 20 * units.Millimetre, OD: 22 * units.Millimetre, Modulus: 206 * units.Gigapascal, Poisson: 0.3},
 		Rating: 40 * units.Bar}
 	s, err := c.Surge()
 	if err != nil {
