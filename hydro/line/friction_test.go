@@ -1,10 +1,10 @@
 package line
 
 import (
-	"errors"
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -195,16 +195,9 @@ func BenchmarkFrictionFactor(b *testing.B) {
 	_ = sink
 }
 
-// wantRangeError checks that err matches units.ErrRange and names param
-// (the field after the last dot when param has none).
+// wantRangeError checks, in a subtest called name, that err is a range
+// error naming param, its qualified function, value and valid range.
 func wantRangeError(t *testing.T, name string, err error, param string) {
 	t.Helper()
-	if !errors.Is(err, units.ErrRange) {
-		t.Errorf("%s: err = %v, want units.ErrRange", name, err)
-		return
-	}
-	var re *units.RangeError
-	if !errors.As(err, &re) || re.Param != param || re.Valid == "" {
-		t.Errorf("%s: err = %v, want a range error naming %q and its valid range", name, err, param)
-	}
+	t.Run(name, func(t *testing.T) { checktest.RangeError(t, err, param) })
 }
