@@ -62,13 +62,17 @@ func TestConvertBelowAbsoluteZero(t *testing.T) {
 // may still be read as an interval (as ParseTemperatureDifference does).
 func TestConvertDifferenceToPoint(t *testing.T) {
 	for _, c := range []struct {
+		v        float64
 		from, to string
 	}{
-		{"ΔK", "°C"}, {"Δ°F", "°F"}, {"delta degC", "K"}, {"ΔK", "°R"},
+		{5, "ΔK", "°C"}, {5, "Δ°F", "°F"}, {5, "delta degC", "K"}, {5, "ΔK", "°R"},
+		// A negative value is still a reference error first, not a
+		// temperature below absolute zero or a pressure below vacuum.
+		{-5, "ΔK", "°C"}, {-5, "bar", "bara"}, {-1, "psig", "psia"},
 	} {
-		got, err := Convert(5, c.from, c.to)
+		got, err := Convert(c.v, c.from, c.to)
 		if !errors.Is(err, ErrReference) || got != 0 {
-			t.Errorf("Convert(5, %q, %q) = %g, %v; want ErrReference", c.from, c.to, got, err)
+			t.Errorf("Convert(%g, %q, %q) = %g, %v; want ErrReference", c.v, c.from, c.to, got, err)
 		}
 	}
 	q, _ := Parse("5 ΔK")

@@ -78,7 +78,8 @@ func (q Length) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Length) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricLength], &typeLength)
 }
@@ -178,7 +179,8 @@ func (q Area) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Area) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricArea], &typeArea)
 }
@@ -288,7 +290,8 @@ func (q Volume) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Volume) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVolume], &typeVolume)
 }
@@ -383,7 +386,8 @@ func (q Mass) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Mass) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricMass], &typeMass)
 }
@@ -478,7 +482,8 @@ func (q Force) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Force) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricForce], &typeForce)
 }
@@ -610,7 +615,8 @@ func (q Pressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bar when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Pressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPressure], &typePressure)
 }
@@ -719,7 +725,9 @@ func (q AbsolutePressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bara when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 Pa (absolute vacuum).
 func (q AbsolutePressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAbsolutePressure], &typeAbsolutePressure)
 }
@@ -825,7 +833,8 @@ func (q Flow) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L/min when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Flow) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFlow], &typeFlow)
 }
@@ -925,7 +934,8 @@ func (q Velocity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Velocity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVelocity], &typeVelocity)
 }
@@ -1019,7 +1029,8 @@ func (q Displacement) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm³/rev when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Displacement) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDisplacement], &typeDisplacement)
 }
@@ -1109,7 +1120,8 @@ func (q RotationalSpeed) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in rpm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q RotationalSpeed) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricRotationalSpeed], &typeRotationalSpeed)
 }
@@ -1204,7 +1216,8 @@ func (q Torque) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in N·m when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Torque) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTorque], &typeTorque)
 }
@@ -1304,7 +1317,8 @@ func (q Power) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kW when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Power) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPower], &typePower)
 }
@@ -1404,7 +1418,8 @@ func (q Energy) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Energy) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricEnergy], &typeEnergy)
 }
@@ -1492,7 +1507,9 @@ func (q Temperature) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in °C when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 K (absolute zero).
 func (q Temperature) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperature], &typeTemperature)
 }
@@ -1587,7 +1604,8 @@ func (q TemperatureDifference) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in K when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q TemperatureDifference) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperatureDifference], &typeTemperatureDifference)
 }
@@ -1687,7 +1705,8 @@ func (q KinematicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm²/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q KinematicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricKinematicViscosity], &typeKinematicViscosity)
 }
@@ -1782,7 +1801,8 @@ func (q DynamicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mPa·s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q DynamicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDynamicViscosity], &typeDynamicViscosity)
 }
@@ -1882,7 +1902,8 @@ func (q Density) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg/m³ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Density) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDensity], &typeDensity)
 }
@@ -1980,7 +2001,8 @@ func (q SpecificHeatCapacity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ/(kg·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q SpecificHeatCapacity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricSpecificHeatCapacity], &typeSpecificHeatCapacity)
 }
@@ -2071,7 +2093,8 @@ func (q HeatTransferCoefficient) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m²·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q HeatTransferCoefficient) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricHeatTransferCoefficient], &typeHeatTransferCoefficient)
 }
@@ -2160,7 +2183,8 @@ func (q ThermalConductivity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q ThermalConductivity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricThermalConductivity], &typeThermalConductivity)
 }
@@ -2255,7 +2279,8 @@ func (q Stiffness) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN/mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Stiffness) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricStiffness], &typeStiffness)
 }
@@ -2340,7 +2365,8 @@ func (q Frequency) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in Hz when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Frequency) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFrequency], &typeFrequency)
 }
@@ -2430,7 +2456,8 @@ func (q Acceleration) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Acceleration) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAcceleration], &typeAcceleration)
 }

@@ -71,7 +71,7 @@ func pad(s string, width int) string {
 
 // show formats q in both systems, trying the quantity types in turn.
 func show(q units.Quantity) (metric, us, kind string, err error) {
-	m, u := &units.Metric, &units.USCustomary
+	m, u := units.Metric(), units.USCustomary()
 	if p, err := q.Pressure(); err == nil {
 		return m.FormatPressure(p), u.FormatPressure(p), "pressure (gauge)", nil
 	}
