@@ -215,7 +215,7 @@ func TestMinimumRod(t *testing.T) {
 		if x.Method != w.method || !near(x.Safety.Value, 3.5, 1e-9) {
 			t.Errorf("%s: the least rod %v gives %v by %v; want 3.5 by %v", w.name, r.Rod.Required, x.Safety.Value, x.Method, w.method)
 		}
-		if smaller, err := stdRods.Below(r.Rod.Chosen); err == nil {
+		if smaller, err := components.ISO3320Rods().Below(r.Rod.Chosen); err == nil {
 			c.Cylinder.Rod = smaller
 			if s := c.check(); s.Safety.OK() {
 				t.Errorf("%s: the smaller rod %v passes too (%v)", w.name, smaller, s.Safety.Value)

@@ -313,7 +313,7 @@ func second[T any](_ T, err error) error { return err }
 func TestLargerBoreNeverLessForce(t *testing.T) {
 	p, back := 160*units.Bar, 5*units.Bar
 	var lastE, lastR units.Force
-	for b := range stdBores.All() {
+	for b := range components.ISO3320Bores().All() {
 		c := Cylinder{Bore: b, Rod: b * 0.5, Stroke: 1}
 		fe, err1 := c.Force(Extend, p, back)
 		fr, err2 := c.Force(Retract, p, back)

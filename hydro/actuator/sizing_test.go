@@ -119,7 +119,7 @@ func TestSizeRoundTrip(t *testing.T) {
 					t.Errorf("%v %v %v: pressure %+v, bore %+v", f, dir, ends, r.Pressure, r.Bore)
 				}
 				// The bore below the chosen one, with its rod, does not do the job.
-				b, err := stdBores.Below(r.Bore.Chosen)
+				b, err := components.ISO3320Bores().Below(r.Bore.Chosen)
 				if err != nil {
 					continue
 				}
@@ -283,5 +283,28 @@ func BenchmarkDutySize(b *testing.B) {
 	b.ReportAllocs()
 	for b.Loop() {
 		_, _ = d.Size()
+	}
+}
+
+// TestSizeLandsOnISO3320: a duty whose minimum bore is just under each
+// ISO 3320 bore chooses that bore, and the second-choice sizes are marked
+// (ISO 3320 bores, mm, from memory: 8 10 12 16 20 25 32 40 50 63 80 (90) 100
+// (110) 125 (140) 160 (180) 200 (220) 250 (280) 320 (360) 400 (450) 500).
+func TestSizeLandsOnISO3320(t *testing.T) {
+	bores := []float64{8, 10, 12, 16, 20, 25, 32, 40, 50, 63, 80, 90, 100, 110, 125, 140, 160, 180, 200,
+		220, 250, 280, 320, 360, 400, 450, 500}
+	second := map[float64]bool{90: true, 110: true, 140: true, 180: true, 220: true, 280: true, 360: true, 450: true}
+	p := 100 * units.Bar
+	for _, b := range bores {
+		want := units.Length(b) * mm
+		f := p.TimesArea(units.CircleArea(want)) * units.Force(DefaultSealEfficiency*(1-1e-9))
+		r, err := Duty{Force: f, Pressure: p, Stroke: 1}.Size()
+		if err != nil || r.Bore.Chosen != want {
+			t.Errorf("minimum bore just under %v mm: chose %v, %v", b, r.Bore.Chosen, err)
+			continue
+		}
+		if got := len(r.Findings.Topic("actuator.second-choice-bore")) == 1; got != second[b] {
+			t.Errorf("%v mm: second-choice notice %v; want %v", b, got, second[b])
+		}
 	}
 }
