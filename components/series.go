@@ -136,6 +136,90 @@ func (s Series[T]) Next(min T) (T, error) {
 	return s.values[i], nil
 }
 
+// Above returns the smallest size strictly above v (the next larger size,
+// one step up from a size that failed a check). It fails with an error
+// matching units.ErrRange when v is not finite and > 0 or when no size is
+// above it (the error names the largest).
+func (s Series[T]) Above(v T) (T, error) {
+	const fn = "components.Series.Above"
+	if err := validate.Positive(fn, "v", v); err != nil {
+		return 0, err
+	}
+	i, found := slices.BinarySearch(s.values, v)
+	if found {
+		i++
+	}
+	if i == len(s.values) {
+		if i == 0 {
+			return 0, s.beyond(fn, "v", v)
+		}
+		return 0, validate.Fail(fn, "v", v, "< "+format(s.Largest())+", the largest of "+s.label())
+	}
+	return s.values[i], nil
+}
+
+// Floor returns the largest size at or below max: the coarsest filter
+// rating that is no coarser than required, the largest bore that fits a
+// space. It fails with an error matching units.ErrRange when max is not
+// finite and > 0 or is below the smallest size (the error names the
+// smallest).
+func (s Series[T]) Floor(max T) (T, error) {
+	const fn = "components.Series.Floor"
+	if err := validate.Positive(fn, "max", max); err != nil {
+		return 0, err
+	}
+	i, found := slices.BinarySearch(s.values, max)
+	if found {
+		return s.values[i], nil
+	}
+	if i == 0 {
+		return 0, s.beneath(fn, "max", max)
+	}
+	return s.values[i-1], nil
+}
+
+// NextPreferred returns the smallest preferred size at or above min,
+// skipping second-choice sizes, without building a new series as
+// [Series.PreferredOnly] does. It fails as [Series.Next] does, naming the
+// largest preferred size.
+func (s Series[T]) NextPreferred(min T) (T, error) {
+	const fn = "components.Series.NextPreferred"
+	if err := validate.Positive(fn, "min", min); err != nil {
+		return 0, err
+	}
+	if i := s.preferredFrom(min); i < len(s.values) {
+		return s.values[i], nil
+	}
+	return 0, s.beyondPreferred(fn, "min", min)
+}
+
+// SelectPreferred returns the choice of the smallest preferred size at or
+// above required, skipping second-choice sizes; otherwise it behaves as
+// [Series.Select]. The choice names the whole series.
+func (s Series[T]) SelectPreferred(required T) (Choice[T], error) {
+	if err := validate.Positive("components.Series.SelectPreferred", "required", required); err != nil {
+		return Choice[T]{}, err
+	}
+	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
+	if i := s.preferredFrom(required); i < len(s.values) {
+		c.Chosen = s.values[i]
+	}
+	return c, nil
+}
+
+// Sizes returns a fresh copy of the sizes, smallest first.
+func (s Series[T]) Sizes() []T { return slices.Clone(s.values) }
+
+// preferredFrom returns the index of the first preferred size ≥ v, or
+// len(s.values).
+func (s Series[T]) preferredFrom(v T) int {
+	i, _ := slices.BinarySearch(s.values, v)
+	for i < len(s.values) && s.second != nil && s.second[i] {
+		i++
+	}
+	return i
+}
+
 // Below returns the largest size strictly below v (the next smaller
 // size). It fails with an error matching units.ErrRange when v is not finite
 // and > 0 or when no size is below it.
@@ -204,6 +288,76 @@ func (s Series[T]) beyond(fn, param string, v T) error {
 		return validate.Fail(fn, param, v, "a size of a non-empty series")
 	}
 	return validate.Fail(fn, param, v, "≤ "+format(s.Largest())+", the largest of "+s.label())
+}
+
+func (s Series[T]) beneath(fn, param string, v T) error {
+	if len(s.values) == 0 {
+		return validate.Fail(fn, param, v, "a size of a non-empty series")
+	}
+	return validate.Fail(fn, param, v, "≥ "+format(s.Smallest())+", the smallest of "+s.label())
+}
+
+func (s Series[T]) beyondPreferred(fn, param string, v T) error {
+	for i := len(s.values) - 1; i >= 0; i-- {
+		if top, p := s.At(i); p {
+			return validate.Fail(fn, param, v, "≤ "+format(top)+", the largest preferred size of "+s.label())
+		}
+	}
+	return validate.Fail(fn, param, v, "a size of a series with preferred sizes")
+}
+
+// fixed builds one of this package's own tables. It skips the checks of
+// NewSeries, which a test applies to every table instead, so that building
+// a table at start-up can neither fail nor panic.
+func fixed[T ~float64](name string, rule Rule, sizes, second []T) Series[T] {
+	s := Series[T]{name: name, rule: rule, values: sizes}
+	if len(second) > 0 {
+		s.second = make([]bool, len(sizes))
+		for _, v := range second {
+			if j, ok := slices.BinarySearch(sizes, v); ok {
+				s.second[j] = true
+			}
+		}
+	}
+	return s
+}
+
+type seriesJSON[T ~float64] struct {
+	Name   string `json:"name"`
+	Rule   Rule   `json:"rule"`
+	Sizes  []T    `json:"sizes"`
+	Second []T    `json:"second,omitempty"`
+}
+
+// MarshalJSON writes {"name","rule","sizes","second"}: every size smallest
+// first, and the second-choice sizes again under "second" (left out when
+// there are none).
+func (s Series[T]) MarshalJSON() ([]byte, error) {
+	j := seriesJSON[T]{Name: s.name, Rule: s.rule, Sizes: s.values}
+	if j.Sizes == nil {
+		j.Sizes = []T{}
+	}
+	for v, p := range s.All() {
+		if !p {
+			j.Second = append(j.Second, v)
+		}
+	}
+	return json.Marshal(j)
+}
+
+// UnmarshalJSON reads the form MarshalJSON writes — a caller's own catalog
+// series, say — with the checks of [NewSeries].
+func (s *Series[T]) UnmarshalJSON(b []byte) error {
+	var j seriesJSON[T]
+	if err := json.Unmarshal(b, &j); err != nil {
+		return err
+	}
+	v, err := NewSeries(j.Name, j.Rule, j.Sizes, j.Second)
+	if err != nil {
+		return err
+	}
+	*s = v
+	return nil
 }
 
 // format writes v with its unit when T has a String method.

@@ -1,8 +1,10 @@
 package components
 
 import (
+	"encoding/json"
 	"errors"
 	"math"
+	"slices"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/units"
@@ -138,3 +140,160 @@ func TestSeriesCopiesInput(t *testing.T) {
 }
 
 func second[T any](_ T, err error) error { return err }
+
+func TestSeriesAboveFloor(t *testing.T) {
+	s := testBores(t)
+	mm := units.Millimetre
+	for _, c := range []struct {
+		name      string
+		got, want units.Length
+		err       error
+	}{
+		{"Above(63)", first(s.Above(63 * mm)), 80 * mm, second(s.Above(63 * mm))},
+		{"Above(64)", first(s.Above(64 * mm)), 80 * mm, second(s.Above(64 * mm))},
+		{"Above(1)", first(s.Above(1 * mm)), 40 * mm, second(s.Above(1 * mm))},
+		{"Floor(63)", first(s.Floor(63 * mm)), 63 * mm, second(s.Floor(63 * mm))},
+		{"Floor(79)", first(s.Floor(79 * mm)), 63 * mm, second(s.Floor(79 * mm))},
+		{"Floor(900)", first(s.Floor(900 * mm)), 100 * mm, second(s.Floor(900 * mm))},
+	} {
+		if c.err != nil || c.got != c.want {
+			t.Errorf("%s = %v, %v; want %v", c.name, c.got, c.err, c.want)
+		}
+	}
+	_, err := s.Floor(39 * mm)
+	var re *units.RangeError
+	if !errors.As(err, &re) || re.Param != "max" || re.Valid != "≥ 40 mm, the smallest of test bores" {
+		t.Errorf("Floor(39 mm) error = %v; want a RangeError naming the smallest", err)
+	}
+	_, err = s.Above(100 * mm)
+	if !errors.As(err, &re) || re.Param != "v" || re.Valid != "< 100 mm, the largest of test bores" {
+		t.Errorf("Above(100 mm) error = %v; want a RangeError naming the largest", err)
+	}
+}
+
+func TestSeriesNextPreferred(t *testing.T) {
+	mm := units.Millimetre
+	s, err := NewSeries("tail", StandardRule("test"), []units.Length{40 * mm, 50 * mm, 63 * mm, 70 * mm},
+		[]units.Length{50 * mm, 70 * mm})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if got, err := s.NextPreferred(41 * mm); err != nil || got != 63*mm {
+		t.Errorf("NextPreferred(41 mm) = %v, %v; want 63 mm", got, err)
+	}
+	// 70 mm is a size but second choice: above 63 mm no preferred size is left.
+	_, err = s.NextPreferred(64 * mm)
+	var re *units.RangeError
+	if !errors.As(err, &re) || re.Valid != "≤ 63 mm, the largest preferred size of tail" {
+		t.Errorf("NextPreferred(64 mm) error = %v", err)
+	}
+	c, err := s.SelectPreferred(64 * mm)
+	if err != nil || c.OK() || c.Chosen != 0 || c.Series != "tail" {
+		t.Errorf("SelectPreferred(64 mm) = %+v, %v; want a failed choice", c, err)
+	}
+	if c, err := s.Select(64 * mm); err != nil || c.Chosen != 70*mm {
+		t.Errorf("Select(64 mm) = %+v, %v; want 70 mm", c, err)
+	}
+	for name, err := range map[string]error{
+		"NextPreferred(NaN)":  second(s.NextPreferred(units.Length(math.NaN()))),
+		"SelectPreferred(-1)": second(s.SelectPreferred(-1)),
+		"Above(0)":            second(s.Above(0)),
+		"Floor(Inf)":          second(s.Floor(units.Length(math.Inf(1)))),
+		"Floor empty":         second(Series[units.Length]{}.Floor(1)),
+		"NextPreferred empty": second(Series[units.Length]{}.NextPreferred(1)),
+	} {
+		if !errors.Is(err, units.ErrRange) {
+			t.Errorf("%s: error = %v; want ErrRange", name, err)
+		}
+	}
+}
+
+func TestSeriesJSON(t *testing.T) {
+	s := testBores(t)
+	b, err := json.Marshal(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	const want = `{"name":"test bores","rule":{"kind":"standard","source":"test"},` +
+		`"sizes":["40 mm","50 mm","63 mm","80 mm","90 mm","100 mm"],"second":["90 mm"]}`
+	if string(b) != want {
+		t.Errorf("JSON\n got %s\nwant %s", b, want)
+	}
+	var back Series[units.Length]
+	if err := json.Unmarshal(b, &back); err != nil {
+		t.Fatal(err)
+	}
+	if back.Name() != s.Name() || back.Rule() != s.Rule() || !slices.Equal(back.Sizes(), s.Sizes()) || back.Preferred(90*units.Millimetre) {
+		t.Errorf("read back %+v", back)
+	}
+	if err := json.Unmarshal([]byte(`{"name":"x","sizes":["2 mm","1 mm"]}`), &back); !errors.Is(err, units.ErrRange) {
+		t.Errorf("descending sizes: error = %v; want ErrRange", err)
+	}
+	if b, err := json.Marshal(Series[units.Length]{}); err != nil || string(b) != `{"name":"","rule":{"kind":"unstated","source":""},"sizes":[]}` {
+		t.Errorf("empty series JSON %s, %v", b, err)
+	}
+}
+
+func TestSeriesSizesIsACopy(t *testing.T) {
+	s := ISO3320Bores()
+	v := s.Sizes()
+	v[0] = 1
+	if s.Smallest() != 8*units.Millimetre || ISO3320Bores().Smallest() != 8*units.Millimetre {
+		t.Error("Sizes returned shared storage")
+	}
+}
+
+func TestSeriesLookupAllocs(t *testing.T) {
+	s := ISO3320Bores()
+	req := 71.3 * units.Millimetre
+	for name, f := range map[string]func(){
+		"Next":            func() { _, _ = s.Next(req) },
+		"NextPreferred":   func() { _, _ = s.NextPreferred(req) },
+		"Select":          func() { _, _ = s.Select(req) },
+		"SelectPreferred": func() { _, _ = s.SelectPreferred(req) },
+		"Nearest":         func() { _, _ = s.Nearest(req) },
+		"Below":           func() { _, _ = s.Below(req) },
+		"Above":           func() { _, _ = s.Above(req) },
+		"Floor":           func() { _, _ = s.Floor(req) },
+		"ISO3320Bores":    func() { _ = ISO3320Bores() },
+	} {
+		if n := testing.AllocsPerRun(100, f); n != 0 {
+			t.Errorf("%s allocates %v times; want 0", name, n)
+		}
+	}
+}
+
+func BenchmarkSeriesNext(b *testing.B) {
+	s := ISO3320Bores()
+	req := 71.3 * units.Millimetre
+	b.ReportAllocs()
+	for b.Loop() {
+		_, _ = s.Next(req)
+	}
+}
+
+func BenchmarkSeriesSelect(b *testing.B) {
+	s := ISO3320Bores()
+	req := 71.3 * units.Millimetre
+	b.ReportAllocs()
+	for b.Loop() {
+		_, _ = s.Select(req)
+	}
+}
+
+func BenchmarkSeriesSelectPreferred(b *testing.B) {
+	s := ISO3320Bores()
+	req := 85 * units.Millimetre
+	b.ReportAllocs()
+	for b.Loop() {
+		_, _ = s.SelectPreferred(req)
+	}
+}
+
+func first[T any](v T, _ error) T { return v }
+
+func TestSeriesAboveEmpty(t *testing.T) {
+	if _, err := (Series[units.Length]{}).Above(1); !errors.Is(err, units.ErrRange) {
+		t.Errorf("Above on an empty series: error = %v; want ErrRange", err)
+	}
+}

@@ -1,8 +1,17 @@
 //go:build ignore
 
-// gen writes quantities_gen.go: the quantity types, their unit constants,
-// accessors, formatting, text marshalling, typed parsers and the unit registry.
-// Run it with go generate ./units (see doc.go).
+// gen writes the generated files of package units from the quantities
+// table below, the one place where a unit is defined:
+//
+//   - quantities_gen.go: each quantity type, its unit constants and its
+//     methods (accessors, In, String, Format, text marshalling, the typed
+//     parser and the conversion from a dynamic Quantity);
+//   - tables_gen.go: the data tables that parsing, conversion and
+//     formatting read (type descriptions and the unit table);
+//   - systems_gen.go: the presentation systems and their per-type methods;
+//   - doc.go: the package documentation with every accepted spelling.
+//
+// Run it with go generate ./units (the directive is in defs.go).
 package main
 
 import (
@@ -41,55 +50,56 @@ type quantity struct {
 	Units   []unit
 	NoType  bool // registry-only units (time, angle)
 
-	MetricIdx int // index in unitTable of the Metric unit (set by main)
+	MetricIdx int // index in unitTable of the metric unit (set by main)
+	USIdx     int // index in unitTable of the US customary unit (set by main)
 }
 
 var quantities = []quantity{
 	{Name: "Length", Kind: "length", Dim: "dim(1, 0, 0, 0, 0)", Base: "Metre", Metric: "mm", US: "in",
 		Doc: "Length is a length or distance in metres (m): bores, rods, strokes, line diameters and lengths.",
 		Units: []unit{
-			{"Metre", "1", "is the SI unit of length.", "Metres", "m", []string{"metre", "meter"}, "", "", false},
-			{"Millimetre", "1e-3", "is 10⁻³ m.", "Millimetres", "mm", nil, "", "", false},
-			{"Centimetre", "1e-2", "is 10⁻² m.", "Centimetres", "cm", nil, "", "", false},
-			{"Micrometre", "1e-6", "is 10⁻⁶ m, the micron of filtration ratings.", "Micrometres", "µm", []string{"μm", "um", "micron"}, "", "", false},
-			{"Inch", "inchM", "is 0.0254 m exactly (NIST SP 811).", "Inches", "in", []string{"inch", "inches"}, "", "", false},
-			{"Foot", "footM", "is 0.3048 m exactly (NIST SP 811).", "Feet", "ft", []string{"foot", "feet"}, "", "", false},
+			{Const: "Metre", Value: "1", Doc: "is the SI unit of length.", Accessor: "Metres", Symbol: "m", Aliases: []string{"metre", "meter"}},
+			{Const: "Millimetre", Value: "1e-3", Doc: "is 10⁻³ m.", Accessor: "Millimetres", Symbol: "mm"},
+			{Const: "Centimetre", Value: "1e-2", Doc: "is 10⁻² m.", Accessor: "Centimetres", Symbol: "cm"},
+			{Const: "Micrometre", Value: "1e-6", Doc: "is 10⁻⁶ m, the micron of filtration ratings.", Accessor: "Micrometres", Symbol: "µm", Aliases: []string{"μm", "um", "micron"}},
+			{Const: "Inch", Value: "inchM", Doc: "is 0.0254 m exactly (NIST SP 811).", Accessor: "Inches", Symbol: "in", Aliases: []string{"inch", "inches"}},
+			{Const: "Foot", Value: "footM", Doc: "is 0.3048 m exactly (NIST SP 811).", Accessor: "Feet", Symbol: "ft", Aliases: []string{"foot", "feet"}},
 		}},
 	{Name: "Area", Kind: "area", Dim: "dim(2, 0, 0, 0, 0)", Base: "SquareMetre", Metric: "cm²", US: "in²",
 		Doc: "Area is an area in square metres (m²): piston and annulus areas, flow sections.",
 		Units: []unit{
-			{"SquareMetre", "1", "is the SI unit of area.", "SquareMetres", "m²", []string{"m2", "m^2", "sq m"}, "", "", false},
-			{"SquareMillimetre", "1e-6", "is 10⁻⁶ m².", "SquareMillimetres", "mm²", []string{"mm2", "mm^2", "sq mm"}, "", "", false},
-			{"SquareCentimetre", "1e-4", "is 10⁻⁴ m².", "SquareCentimetres", "cm²", []string{"cm2", "cm^2", "sq cm"}, "", "", false},
-			{"SquareInch", "inchM * inchM", "is 6.4516 cm² exactly (NIST SP 811).", "SquareInches", "in²", []string{"in2", "in^2", "sq in"}, "", "", false},
-			{"SquareFoot", "footM * footM", "is 0.09290304 m² exactly (NIST SP 811).", "SquareFeet", "ft²", []string{"ft2", "ft^2", "sq ft"}, "", "", false},
+			{Const: "SquareMetre", Value: "1", Doc: "is the SI unit of area.", Accessor: "SquareMetres", Symbol: "m²", Aliases: []string{"m2", "m^2", "sq m"}},
+			{Const: "SquareMillimetre", Value: "1e-6", Doc: "is 10⁻⁶ m².", Accessor: "SquareMillimetres", Symbol: "mm²", Aliases: []string{"mm2", "mm^2", "sq mm"}},
+			{Const: "SquareCentimetre", Value: "1e-4", Doc: "is 10⁻⁴ m².", Accessor: "SquareCentimetres", Symbol: "cm²", Aliases: []string{"cm2", "cm^2", "sq cm"}},
+			{Const: "SquareInch", Value: "inchM * inchM", Doc: "is 6.4516 cm² exactly (NIST SP 811).", Accessor: "SquareInches", Symbol: "in²", Aliases: []string{"in2", "in^2", "sq in"}},
+			{Const: "SquareFoot", Value: "footM * footM", Doc: "is 0.09290304 m² exactly (NIST SP 811).", Accessor: "SquareFeet", Symbol: "ft²", Aliases: []string{"ft2", "ft^2", "sq ft"}},
 		}},
 	{Name: "Volume", Kind: "volume", Dim: "dim(3, 0, 0, 0, 0)", Base: "CubicMetre", Metric: "L", US: "gal",
 		Doc: "Volume is a volume in cubic metres (m³): reservoirs, accumulators, swept volumes.",
 		Units: []unit{
-			{"CubicMetre", "1", "is the SI unit of volume.", "CubicMetres", "m³", []string{"m3", "m^3", "cu m"}, "", "", false},
-			{"Litre", "1e-3", "is 10⁻³ m³ exactly (CGPM 1964).", "Litres", "L", []string{"l", "litre", "liter", "dm³", "dm3"}, "", "", false},
-			{"Millilitre", "1e-6", "is 10⁻⁶ m³.", "Millilitres", "mL", []string{"ml"}, "", "", false},
-			{"CubicCentimetre", "1e-6", "is 10⁻⁶ m³ (one cc).", "CubicCentimetres", "cm³", []string{"cm3", "cm^3", "cc", "ccm"}, "", "", false},
-			{"CubicInch", "inchM * inchM * inchM", "is 16.387064 cm³ exactly (NIST SP 811).", "CubicInches", "in³", []string{"in3", "in^3", "cu in", "cuin", "cid"}, "", "", false},
-			{"USGallon", "usGallonM3", "is the US liquid gallon, 231 in³ = 3.785411784 L exactly (NIST SP 811).", "USGallons", "gal", []string{"US gal", "USgal", "usgal", "gal(US)"}, "", "", false},
-			{"UKGallon", "ukGallonM3", "is the imperial gallon, 4.54609 L exactly (NIST SP 811).", "UKGallons", "UK gal", []string{"UKgal", "imp gal", "gal(UK)"}, "", "", false},
+			{Const: "CubicMetre", Value: "1", Doc: "is the SI unit of volume.", Accessor: "CubicMetres", Symbol: "m³", Aliases: []string{"m3", "m^3", "cu m"}},
+			{Const: "Litre", Value: "1e-3", Doc: "is 10⁻³ m³ exactly (CGPM 1964).", Accessor: "Litres", Symbol: "L", Aliases: []string{"l", "litre", "liter", "dm³", "dm3"}},
+			{Const: "Millilitre", Value: "1e-6", Doc: "is 10⁻⁶ m³.", Accessor: "Millilitres", Symbol: "mL", Aliases: []string{"ml"}},
+			{Const: "CubicCentimetre", Value: "1e-6", Doc: "is 10⁻⁶ m³ (one cc).", Accessor: "CubicCentimetres", Symbol: "cm³", Aliases: []string{"cm3", "cm^3", "cc", "ccm"}},
+			{Const: "CubicInch", Value: "inchM * inchM * inchM", Doc: "is 16.387064 cm³ exactly (NIST SP 811).", Accessor: "CubicInches", Symbol: "in³", Aliases: []string{"in3", "in^3", "cu in", "cuin", "cid"}},
+			{Const: "USGallon", Value: "usGallonM3", Doc: "is the US liquid gallon, 231 in³ = 3.785411784 L exactly (NIST SP 811).", Accessor: "USGallons", Symbol: "gal", Aliases: []string{"US gal", "USgal", "usgal", "gal(US)"}},
+			{Const: "UKGallon", Value: "ukGallonM3", Doc: "is the imperial gallon, 4.54609 L exactly (NIST SP 811).", Accessor: "UKGallons", Symbol: "UK gal", Aliases: []string{"UKgal", "imp gal", "gal(UK)"}},
 		}},
 	{Name: "Mass", Kind: "mass", Dim: "dim(0, 1, 0, 0, 0)", Base: "Kilogram", Metric: "kg", US: "lbm",
 		Doc: "Mass is a mass in kilograms (kg): payloads, moving parts, oil charges.",
 		Units: []unit{
-			{"Kilogram", "1", "is the SI unit of mass.", "Kilograms", "kg", nil, "", "", false},
-			{"Gram", "1e-3", "is 10⁻³ kg.", "Grams", "g", nil, "", "", false},
-			{"Tonne", "1e3", "is the metric ton, 1000 kg.", "Tonnes", "t", []string{"tonne"}, "", "", false},
-			{"PoundMass", "lbmKg", "is the avoirdupois pound, 0.45359237 kg exactly (NIST SP 811).", "Pounds", "lbm", []string{"lb"}, "", "", false},
+			{Const: "Kilogram", Value: "1", Doc: "is the SI unit of mass.", Accessor: "Kilograms", Symbol: "kg"},
+			{Const: "Gram", Value: "1e-3", Doc: "is 10⁻³ kg.", Accessor: "Grams", Symbol: "g"},
+			{Const: "Tonne", Value: "1e3", Doc: "is the metric ton, 1000 kg.", Accessor: "Tonnes", Symbol: "t", Aliases: []string{"tonne"}},
+			{Const: "PoundMass", Value: "lbmKg", Doc: "is the avoirdupois pound, 0.45359237 kg exactly (NIST SP 811).", Accessor: "Pounds", Symbol: "lbm", Aliases: []string{"lb"}},
 		}},
 	{Name: "Force", Kind: "force", Dim: "dim(1, 1, -2, 0, 0)", Base: "Newton", Metric: "kN", US: "lbf",
 		Doc: "Force is a force in newtons (N): loads, cylinder thrust and pull.",
 		Units: []unit{
-			{"Newton", "1", "is the SI unit of force.", "Newtons", "N", nil, "", "", false},
-			{"Kilonewton", "1e3", "is 10³ N.", "Kilonewtons", "kN", nil, "", "", false},
-			{"PoundForce", "lbfN", "is lbm·g₀ = 4.4482216152605 N exactly (NIST SP 811).", "PoundsForce", "lbf", nil, "", "", false},
-			{"KilogramForce", "kgfN", "is 1 kg·g₀ = 9.80665 N exactly (NIST SP 811).", "KilogramsForce", "kgf", []string{"kp"}, "", "", false},
+			{Const: "Newton", Value: "1", Doc: "is the SI unit of force.", Accessor: "Newtons", Symbol: "N"},
+			{Const: "Kilonewton", Value: "1e3", Doc: "is 10³ N.", Accessor: "Kilonewtons", Symbol: "kN"},
+			{Const: "PoundForce", Value: "lbfN", Doc: "is lbm·g₀ = 4.4482216152605 N exactly (NIST SP 811).", Accessor: "PoundsForce", Symbol: "lbf"},
+			{Const: "KilogramForce", Value: "kgfN", Doc: "is 1 kg·g₀ = 9.80665 N exactly (NIST SP 811).", Accessor: "KilogramsForce", Symbol: "kgf", Aliases: []string{"kp"}},
 		}},
 	{Name: "Pressure", Kind: "pressure", Dim: "dim(-1, 1, -2, 0, 0)", Base: "Pascal", Metric: "bar", US: "psi",
 		Accept: "refNone | refGauge",
@@ -100,16 +110,16 @@ var quantities = []quantity{
 // so explicitly. Use AbsolutePressure for gas laws and cavitation checks, and
 // convert between the two only with an explicit ambient pressure.`,
 		Units: []unit{
-			{"Pascal", "1", "is the SI unit of pressure.", "Pascals", "Pa", nil, "", "", false},
-			{"Kilopascal", "1e3", "is 10³ Pa.", "Kilopascals", "kPa", nil, "", "", false},
-			{"Megapascal", "1e6", "is 10⁶ Pa (one N/mm²).", "Megapascals", "MPa", []string{"N/mm²", "N/mm2"}, "", "", false},
-			{"Gigapascal", "1e9", "is 10⁹ Pa, the usual unit of bulk and elastic moduli.", "Gigapascals", "GPa", nil, "", "", false},
-			{"Bar", "barPa", "is 10⁵ Pa exactly (NIST SP 811).", "Bar", "bar", []string{"barg", "bar(g)", "bar g"}, "", "refGauge", false},
-			{"Millibar", "1e-3 * barPa", "is 100 Pa.", "Millibar", "mbar", nil, "", "", false},
-			{"PSI", "psiPa", "is one pound-force per square inch, ≈ 6894.757 Pa (exact ratio, NIST SP 811).", "PSI", "psi", []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}, "", "refGauge", false},
-			{"KSI", "1e3 * psiPa", "is 1000 psi, used for material strengths.", "KSI", "ksi", nil, "", "", false},
-			{"KilogramForcePerSquareCentimetre", "kgfN * 1e4", "is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811).", "KilogramsForcePerSquareCentimetre", "kgf/cm²", []string{"kgf/cm2", "at"}, "", "refGauge", false},
-			{"InchOfMercury", "inHgPa", "is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, \"conventional\").", "InchesOfMercury", "inHg", []string{"in Hg", "\"Hg"}, "", "", false},
+			{Const: "Pascal", Value: "1", Doc: "is the SI unit of pressure.", Accessor: "Pascals", Symbol: "Pa"},
+			{Const: "Kilopascal", Value: "1e3", Doc: "is 10³ Pa.", Accessor: "Kilopascals", Symbol: "kPa"},
+			{Const: "Megapascal", Value: "1e6", Doc: "is 10⁶ Pa (one N/mm²).", Accessor: "Megapascals", Symbol: "MPa", Aliases: []string{"N/mm²", "N/mm2"}},
+			{Const: "Gigapascal", Value: "1e9", Doc: "is 10⁹ Pa, the usual unit of bulk and elastic moduli.", Accessor: "Gigapascals", Symbol: "GPa"},
+			{Const: "Bar", Value: "barPa", Doc: "is 10⁵ Pa exactly (NIST SP 811).", Accessor: "Bar", Symbol: "bar", Aliases: []string{"barg", "bar(g)", "bar g"}, Ref: "refGauge"},
+			{Const: "Millibar", Value: "1e-3 * barPa", Doc: "is 100 Pa.", Accessor: "Millibar", Symbol: "mbar"},
+			{Const: "PSI", Value: "psiPa", Doc: "is one pound-force per square inch, ≈ 6894.757 Pa (exact ratio, NIST SP 811).", Accessor: "PSI", Symbol: "psi", Aliases: []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}, Ref: "refGauge"},
+			{Const: "KSI", Value: "1e3 * psiPa", Doc: "is 1000 psi, used for material strengths.", Accessor: "KSI", Symbol: "ksi"},
+			{Const: "KilogramForcePerSquareCentimetre", Value: "kgfN * 1e4", Doc: "is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811).", Accessor: "KilogramsForcePerSquareCentimetre", Symbol: "kgf/cm²", Aliases: []string{"kgf/cm2", "at"}, Ref: "refGauge"},
+			{Const: "InchOfMercury", Value: "inHgPa", Doc: "is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, \"conventional\").", Accessor: "InchesOfMercury", Symbol: "inHg", Aliases: []string{"in Hg", "\"Hg"}},
 		}},
 	{Name: "AbsolutePressure", Kind: "absolute pressure", Dim: "dim(-1, 1, -2, 0, 0)", Base: "PascalAbsolute", Metric: "bara", US: "psia",
 		Accept: "refNone | refAbsolute", Min: "0", MinText: "≥ 0 Pa (absolute vacuum)",
@@ -118,73 +128,73 @@ var quantities = []quantity{
 // checks need. It is never negative. Absolute spellings are bara, psia and atm;
 // the SI units Pa, kPa, MPa and mbar are read as either kind.`,
 		Units: []unit{
-			{"PascalAbsolute", "1", "is one pascal above absolute vacuum.", "Pascals", "Pa(a)", []string{"Pa abs"}, "", "refAbsolute", false},
-			{"KilopascalAbsolute", "1e3", "is 10³ Pa above absolute vacuum.", "Kilopascals", "kPa(a)", []string{"kPaa", "kPa abs"}, "", "refAbsolute", false},
-			{"MegapascalAbsolute", "1e6", "is 10⁶ Pa above absolute vacuum.", "Megapascals", "MPa(a)", []string{"MPa abs"}, "", "refAbsolute", false},
-			{"BarAbsolute", "barPa", "is 10⁵ Pa above absolute vacuum.", "Bar", "bara", []string{"bar(a)", "bar a", "bar abs"}, "", "refAbsolute", false},
-			{"PSIAbsolute", "psiPa", "is one psi above absolute vacuum.", "PSI", "psia", []string{"psi(a)", "psi abs"}, "", "refAbsolute", false},
-			{"StandardAtmosphere", "atmPa", "is the standard atmosphere, 101 325 Pa exactly (NIST SP 811), the usual ambient when no site value is known. It must still be passed explicitly.", "Atmospheres", "atm", nil, "", "refAbsolute", false},
+			{Const: "PascalAbsolute", Value: "1", Doc: "is one pascal above absolute vacuum.", Accessor: "Pascals", Symbol: "Pa(a)", Aliases: []string{"Pa abs"}, Ref: "refAbsolute"},
+			{Const: "KilopascalAbsolute", Value: "1e3", Doc: "is 10³ Pa above absolute vacuum.", Accessor: "Kilopascals", Symbol: "kPa(a)", Aliases: []string{"kPaa", "kPa abs"}, Ref: "refAbsolute"},
+			{Const: "MegapascalAbsolute", Value: "1e6", Doc: "is 10⁶ Pa above absolute vacuum.", Accessor: "Megapascals", Symbol: "MPa(a)", Aliases: []string{"MPa abs"}, Ref: "refAbsolute"},
+			{Const: "BarAbsolute", Value: "barPa", Doc: "is 10⁵ Pa above absolute vacuum.", Accessor: "Bar", Symbol: "bara", Aliases: []string{"bar(a)", "bar a", "bar abs"}, Ref: "refAbsolute"},
+			{Const: "PSIAbsolute", Value: "psiPa", Doc: "is one psi above absolute vacuum.", Accessor: "PSI", Symbol: "psia", Aliases: []string{"psi(a)", "psi abs"}, Ref: "refAbsolute"},
+			{Const: "StandardAtmosphere", Value: "atmPa", Doc: "is the standard atmosphere, 101 325 Pa exactly (NIST SP 811), the usual ambient when no site value is known. It must still be passed explicitly.", Accessor: "Atmospheres", Symbol: "atm", Ref: "refAbsolute"},
 		}},
 	{Name: "Flow", Kind: "volume flow", Dim: "dim(3, 0, -1, 0, 0)", Base: "CubicMetrePerSecond", Metric: "L/min", US: "gpm",
 		Doc: "Flow is a volume flow rate in cubic metres per second (m³/s): pump delivery, cylinder and line flows.",
 		Units: []unit{
-			{"CubicMetrePerSecond", "1", "is the SI unit of volume flow.", "CubicMetresPerSecond", "m³/s", []string{"m3/s", "m^3/s"}, "", "", false},
-			{"LitrePerMinute", "1e-3 / minuteS", "is one litre per minute.", "LitresPerMinute", "L/min", []string{"l/min", "lpm", "LPM"}, "", "", false},
-			{"LitrePerSecond", "1e-3", "is one litre per second.", "LitresPerSecond", "L/s", []string{"l/s"}, "", "", false},
-			{"CubicMetrePerHour", "1.0 / hourS", "is one cubic metre per hour.", "CubicMetresPerHour", "m³/h", []string{"m3/h", "m^3/h"}, "", "", false},
-			{"USGallonPerMinute", "usGallonM3 / minuteS", "is one US gallon per minute.", "USGallonsPerMinute", "gpm", []string{"GPM", "US gpm", "gal/min"}, "", "", false},
-			{"CubicInchPerSecond", "inchM * inchM * inchM", "is one cubic inch per second.", "CubicInchesPerSecond", "in³/s", []string{"in3/s", "in^3/s"}, "", "", false},
+			{Const: "CubicMetrePerSecond", Value: "1", Doc: "is the SI unit of volume flow.", Accessor: "CubicMetresPerSecond", Symbol: "m³/s", Aliases: []string{"m3/s", "m^3/s"}},
+			{Const: "LitrePerMinute", Value: "1e-3 / minuteS", Doc: "is one litre per minute.", Accessor: "LitresPerMinute", Symbol: "L/min", Aliases: []string{"l/min", "lpm", "LPM"}},
+			{Const: "LitrePerSecond", Value: "1e-3", Doc: "is one litre per second.", Accessor: "LitresPerSecond", Symbol: "L/s", Aliases: []string{"l/s"}},
+			{Const: "CubicMetrePerHour", Value: "1.0 / hourS", Doc: "is one cubic metre per hour.", Accessor: "CubicMetresPerHour", Symbol: "m³/h", Aliases: []string{"m3/h", "m^3/h"}},
+			{Const: "USGallonPerMinute", Value: "usGallonM3 / minuteS", Doc: "is one US gallon per minute.", Accessor: "USGallonsPerMinute", Symbol: "gpm", Aliases: []string{"GPM", "US gpm", "gal/min"}},
+			{Const: "CubicInchPerSecond", Value: "inchM * inchM * inchM", Doc: "is one cubic inch per second.", Accessor: "CubicInchesPerSecond", Symbol: "in³/s", Aliases: []string{"in3/s", "in^3/s"}},
 		}},
 	{Name: "Velocity", Kind: "velocity", Dim: "dim(1, 0, -1, 0, 0)", Base: "MetrePerSecond", Metric: "m/s", US: "ft/s",
 		Doc: "Velocity is a speed in metres per second (m/s): piston speeds and fluid velocities in lines.",
 		Units: []unit{
-			{"MetrePerSecond", "1", "is the SI unit of velocity.", "MetresPerSecond", "m/s", nil, "", "", false},
-			{"MillimetrePerSecond", "1e-3", "is one millimetre per second.", "MillimetresPerSecond", "mm/s", nil, "", "", false},
-			{"FootPerSecond", "footM", "is 0.3048 m/s exactly.", "FeetPerSecond", "ft/s", []string{"fps"}, "", "", false},
-			{"InchPerSecond", "inchM", "is 0.0254 m/s exactly.", "InchesPerSecond", "in/s", []string{"ips"}, "", "", false},
-			{"FootPerMinute", "footM / minuteS", "is 0.00508 m/s exactly.", "FeetPerMinute", "ft/min", []string{"fpm"}, "", "", false},
+			{Const: "MetrePerSecond", Value: "1", Doc: "is the SI unit of velocity.", Accessor: "MetresPerSecond", Symbol: "m/s"},
+			{Const: "MillimetrePerSecond", Value: "1e-3", Doc: "is one millimetre per second.", Accessor: "MillimetresPerSecond", Symbol: "mm/s"},
+			{Const: "FootPerSecond", Value: "footM", Doc: "is 0.3048 m/s exactly.", Accessor: "FeetPerSecond", Symbol: "ft/s", Aliases: []string{"fps"}},
+			{Const: "InchPerSecond", Value: "inchM", Doc: "is 0.0254 m/s exactly.", Accessor: "InchesPerSecond", Symbol: "in/s", Aliases: []string{"ips"}},
+			{Const: "FootPerMinute", Value: "footM / minuteS", Doc: "is 0.00508 m/s exactly.", Accessor: "FeetPerMinute", Symbol: "ft/min", Aliases: []string{"fpm"}},
 		}},
 	{Name: "Displacement", Kind: "displacement", Dim: "dim(3, 0, 0, 0, -1)", Base: "CubicMetrePerRevolution", Metric: "cm³/rev", US: "in³/rev",
 		Doc: `Displacement is the volume a pump or motor moves per revolution, in cubic
 // metres per revolution (m³/rev). Revolutions, not radians, so that
 // flow = displacement × speed holds without 2π.`,
 		Units: []unit{
-			{"CubicMetrePerRevolution", "1", "is the coherent unit of displacement.", "CubicMetresPerRevolution", "m³/rev", []string{"m3/rev", "m^3/rev"}, "", "", false},
-			{"CubicCentimetrePerRevolution", "1e-6", "is one cm³ (cc) per revolution.", "CubicCentimetresPerRevolution", "cm³/rev", []string{"cm3/rev", "cm^3/rev", "cc/rev", "ccm/rev", "mL/rev", "ml/rev"}, "", "", false},
-			{"CubicInchPerRevolution", "inchM * inchM * inchM", "is one cubic inch per revolution, 16.387064 cm³/rev exactly.", "CubicInchesPerRevolution", "in³/rev", []string{"in3/rev", "in^3/rev", "cir", "cu in/rev"}, "", "", false},
+			{Const: "CubicMetrePerRevolution", Value: "1", Doc: "is the coherent unit of displacement.", Accessor: "CubicMetresPerRevolution", Symbol: "m³/rev", Aliases: []string{"m3/rev", "m^3/rev"}},
+			{Const: "CubicCentimetrePerRevolution", Value: "1e-6", Doc: "is one cm³ (cc) per revolution.", Accessor: "CubicCentimetresPerRevolution", Symbol: "cm³/rev", Aliases: []string{"cm3/rev", "cm^3/rev", "cc/rev", "ccm/rev", "mL/rev", "ml/rev"}},
+			{Const: "CubicInchPerRevolution", Value: "inchM * inchM * inchM", Doc: "is one cubic inch per revolution, 16.387064 cm³/rev exactly.", Accessor: "CubicInchesPerRevolution", Symbol: "in³/rev", Aliases: []string{"in3/rev", "in^3/rev", "cir", "cu in/rev"}},
 		}},
 	{Name: "RotationalSpeed", Kind: "rotational speed", Dim: "dim(0, 0, -1, 0, 1)", Base: "RevolutionPerSecond", Metric: "rpm", US: "rpm",
 		Doc: "RotationalSpeed is a shaft speed in revolutions per second (rev/s).",
 		Units: []unit{
-			{"RevolutionPerSecond", "1", "is the coherent unit of rotational speed.", "RevolutionsPerSecond", "rev/s", []string{"rps", "r/s"}, "", "", false},
-			{"RevolutionPerMinute", "1.0 / minuteS", "is one revolution per minute.", "RPM", "rpm", []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "1/min"}, "", "", false},
-			{"RadianPerSecond", "1 / revRad", "is 1/(2π) rev/s; not exact in binary floating point.", "RadiansPerSecond", "rad/s", nil, "", "", false},
+			{Const: "RevolutionPerSecond", Value: "1", Doc: "is the coherent unit of rotational speed.", Accessor: "RevolutionsPerSecond", Symbol: "rev/s", Aliases: []string{"rps", "r/s"}},
+			{Const: "RevolutionPerMinute", Value: "1.0 / minuteS", Doc: "is one revolution per minute.", Accessor: "RPM", Symbol: "rpm", Aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "1/min"}},
+			{Const: "RadianPerSecond", Value: "1 / revRad", Doc: "is 1/(2π) rev/s; not exact in binary floating point.", Accessor: "RadiansPerSecond", Symbol: "rad/s"},
 		}},
 	{Name: "Torque", Kind: "torque", Dim: "dim(2, 1, -2, 0, 0)", Base: "NewtonMetre", Metric: "N·m", US: "lbf·ft",
 		Doc: "Torque is a moment in newton metres (N·m): pump shaft, motor and slew torques.",
 		Units: []unit{
-			{"NewtonMetre", "1", "is the SI unit of torque.", "NewtonMetres", "N·m", []string{"Nm", "N*m", "N.m", "N m", "N-m", "N⋅m"}, "", "", false},
-			{"KilonewtonMetre", "1e3", "is 10³ N·m.", "KilonewtonMetres", "kN·m", []string{"kNm", "kN*m", "kN.m", "kN m"}, "", "", false},
-			{"PoundForceFoot", "lbfN * footM", "is one lbf acting at one foot, ≈ 1.3558 N·m (exact product).", "PoundForceFeet", "lbf·ft", []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft"}, "", "", false},
-			{"PoundForceInch", "lbfN * inchM", "is one lbf acting at one inch, ≈ 0.11298 N·m (exact product).", "PoundForceInches", "lbf·in", []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin"}, "", "", false},
+			{Const: "NewtonMetre", Value: "1", Doc: "is the SI unit of torque.", Accessor: "NewtonMetres", Symbol: "N·m", Aliases: []string{"Nm", "N*m", "N.m", "N m", "N-m", "N⋅m"}},
+			{Const: "KilonewtonMetre", Value: "1e3", Doc: "is 10³ N·m.", Accessor: "KilonewtonMetres", Symbol: "kN·m", Aliases: []string{"kNm", "kN*m", "kN.m", "kN m"}},
+			{Const: "PoundForceFoot", Value: "lbfN * footM", Doc: "is one lbf acting at one foot, ≈ 1.3558 N·m (exact product).", Accessor: "PoundForceFeet", Symbol: "lbf·ft", Aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft"}},
+			{Const: "PoundForceInch", Value: "lbfN * inchM", Doc: "is one lbf acting at one inch, ≈ 0.11298 N·m (exact product).", Accessor: "PoundForceInches", Symbol: "lbf·in", Aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin"}},
 		}},
 	{Name: "Power", Kind: "power", Dim: "dim(2, 1, -3, 0, 0)", Base: "Watt", Metric: "kW", US: "hp",
 		Doc: "Power is a power in watts (W): hydraulic, shaft and electrical power, and heat flows.",
 		Units: []unit{
-			{"Watt", "1", "is the SI unit of power.", "Watts", "W", nil, "", "", false},
-			{"Kilowatt", "1e3", "is 10³ W.", "Kilowatts", "kW", nil, "", "", false},
-			{"Horsepower", "hpW", "is the mechanical (imperial) horsepower, 550 ft·lbf/s ≈ 745.69987 W (NIST SP 811).", "Horsepower", "hp", []string{"HP"}, "", "", false},
-			{"MetricHorsepower", "metricHpW", "is 75 kgf·m/s = 735.49875 W exactly (NIST SP 811).", "MetricHorsepower", "PS", []string{"CV", "hp(M)"}, "", "", false},
-			{"BTUPerHour", "btuJ / hourS", "is one International Table BTU per hour, ≈ 0.29307 W.", "BTUPerHour", "BTU/h", []string{"Btu/h", "BTU/hr", "Btu/hr", "BTUH"}, "", "", false},
+			{Const: "Watt", Value: "1", Doc: "is the SI unit of power.", Accessor: "Watts", Symbol: "W"},
+			{Const: "Kilowatt", Value: "1e3", Doc: "is 10³ W.", Accessor: "Kilowatts", Symbol: "kW"},
+			{Const: "Horsepower", Value: "hpW", Doc: "is the mechanical (imperial) horsepower, 550 ft·lbf/s ≈ 745.69987 W (NIST SP 811).", Accessor: "Horsepower", Symbol: "hp", Aliases: []string{"HP"}},
+			{Const: "MetricHorsepower", Value: "metricHpW", Doc: "is 75 kgf·m/s = 735.49875 W exactly (NIST SP 811).", Accessor: "MetricHorsepower", Symbol: "PS", Aliases: []string{"CV", "hp(M)"}},
+			{Const: "BTUPerHour", Value: "btuJ / hourS", Doc: "is one International Table BTU per hour, ≈ 0.29307 W.", Accessor: "BTUPerHour", Symbol: "BTU/h", Aliases: []string{"Btu/h", "BTU/hr", "Btu/hr", "BTUH"}},
 		}},
 	{Name: "Energy", Kind: "energy", Dim: "dim(2, 1, -2, 0, 0)", Base: "Joule", Metric: "kJ", US: "BTU",
 		Doc: "Energy is an energy or quantity of heat in joules (J): stored accumulator energy, heat per cycle.",
 		Units: []unit{
-			{"Joule", "1", "is the SI unit of energy.", "Joules", "J", nil, "", "", false},
-			{"Kilojoule", "1e3", "is 10³ J.", "Kilojoules", "kJ", nil, "", "", false},
-			{"Megajoule", "1e6", "is 10⁶ J.", "Megajoules", "MJ", nil, "", "", false},
-			{"KilowattHour", "1e3 * hourS", "is 3.6 MJ exactly.", "KilowattHours", "kWh", []string{"kW·h", "kW*h", "kW h"}, "", "", false},
-			{"BTU", "btuJ", "is the International Table British thermal unit, 1055.05585262 J exactly (NIST SP 811).", "BTU", "BTU", []string{"Btu", "btu"}, "", "", false},
+			{Const: "Joule", Value: "1", Doc: "is the SI unit of energy.", Accessor: "Joules", Symbol: "J"},
+			{Const: "Kilojoule", Value: "1e3", Doc: "is 10³ J.", Accessor: "Kilojoules", Symbol: "kJ"},
+			{Const: "Megajoule", Value: "1e6", Doc: "is 10⁶ J.", Accessor: "Megajoules", Symbol: "MJ"},
+			{Const: "KilowattHour", Value: "1e3 * hourS", Doc: "is 3.6 MJ exactly.", Accessor: "KilowattHours", Symbol: "kWh", Aliases: []string{"kW·h", "kW*h", "kW h"}},
+			{Const: "BTU", Value: "btuJ", Doc: "is the International Table British thermal unit, 1055.05585262 J exactly (NIST SP 811).", Accessor: "BTU", Symbol: "BTU", Aliases: []string{"Btu", "btu"}},
 		}},
 	{Name: "Temperature", Kind: "temperature", Dim: "dim(0, 0, 0, 1, 0)", Base: "Kelvin", Metric: "°C", US: "°F",
 		Accept: "refPoint", Offset: true, Min: "0", MinText: "≥ 0 K (absolute zero)",
@@ -193,10 +203,10 @@ var quantities = []quantity{
 // (TemperatureFromCelsius, t.Celsius) rather than constants. The difference of
 // two temperatures is a TemperatureDifference: use t.Sub and t.Add.`,
 		Units: []unit{
-			{"Kelvin", "1", "is the SI unit of thermodynamic temperature.", "Kelvin", "K", []string{"kelvin"}, "", "refPoint", false},
-			{"Rankine", "fahrenheitK", "is 5/9 K exactly; 0 °R is absolute zero.", "Rankine", "°R", []string{"degR", "R"}, "", "refPoint", false},
-			{"", "1", "", "", "°C", []string{"degC", "℃", "C", "deg C", "celsius"}, "celsiusZeroK", "refPoint", false},
-			{"", "fahrenheitK", "", "", "°F", []string{"degF", "℉", "F", "deg F", "fahrenheit"}, "fahrenheitZeroK", "refPoint", false},
+			{Const: "Kelvin", Value: "1", Doc: "is the SI unit of thermodynamic temperature.", Accessor: "Kelvin", Symbol: "K", Aliases: []string{"kelvin"}, Ref: "refPoint"},
+			{Const: "Rankine", Value: "fahrenheitK", Doc: "is 5/9 K exactly; 0 °R is absolute zero.", Accessor: "Rankine", Symbol: "°R", Aliases: []string{"degR", "R"}, Ref: "refPoint"},
+			{Value: "1", Symbol: "°C", Aliases: []string{"degC", "℃", "C", "deg C", "celsius"}, Offset: "celsiusZeroK", Ref: "refPoint"},
+			{Value: "fahrenheitK", Symbol: "°F", Aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit"}, Offset: "fahrenheitZeroK", Ref: "refPoint"},
 		}},
 	{Name: "TemperatureDifference", Kind: "temperature difference", Dim: "dim(0, 0, 0, 1, 0)", Base: "DeltaKelvin", Metric: "K", US: "°F",
 		Accept: "refNone | refPoint",
@@ -206,89 +216,89 @@ var quantities = []quantity{
 // spellings (K, °C, °F) parse as intervals here; Δ spellings (ΔK, Δ°C, Δ°F)
 // say so explicitly.`,
 		Units: []unit{
-			{"DeltaKelvin", "1", "is an interval of one kelvin.", "Kelvin", "K", nil, "", "", true},
-			{"DeltaCelsius", "1", "is an interval of one degree Celsius, equal to one kelvin.", "Celsius", "°C", nil, "", "", true},
-			{"DeltaFahrenheit", "fahrenheitK", "is an interval of one degree Fahrenheit, 5/9 K exactly.", "Fahrenheit", "°F", nil, "", "", true},
-			{"", "1", "", "", "ΔK", []string{"delta K", "deltaK"}, "", "", false},
-			{"", "1", "", "", "Δ°C", []string{"delta degC", "deltaC", "ΔC", "delta C"}, "", "", false},
-			{"", "fahrenheitK", "", "", "Δ°F", []string{"delta degF", "deltaF", "ΔF", "delta F"}, "", "", false},
+			{Const: "DeltaKelvin", Value: "1", Doc: "is an interval of one kelvin.", Accessor: "Kelvin", Symbol: "K", NoReg: true},
+			{Const: "DeltaCelsius", Value: "1", Doc: "is an interval of one degree Celsius, equal to one kelvin.", Accessor: "Celsius", Symbol: "°C", NoReg: true},
+			{Const: "DeltaFahrenheit", Value: "fahrenheitK", Doc: "is an interval of one degree Fahrenheit, 5/9 K exactly.", Accessor: "Fahrenheit", Symbol: "°F", NoReg: true},
+			{Value: "1", Symbol: "ΔK", Aliases: []string{"delta K", "deltaK"}},
+			{Value: "1", Symbol: "Δ°C", Aliases: []string{"delta degC", "deltaC", "ΔC", "delta C"}},
+			{Value: "fahrenheitK", Symbol: "Δ°F", Aliases: []string{"delta degF", "deltaF", "ΔF", "delta F"}},
 		}},
 	{Name: "KinematicViscosity", Kind: "kinematic viscosity", Dim: "dim(2, 0, -1, 0, 0)", Base: "SquareMetrePerSecond", Metric: "mm²/s", US: "cSt",
 		Doc: "KinematicViscosity is a kinematic viscosity in square metres per second (m²/s); oils are quoted in mm²/s (cSt).",
 		Units: []unit{
-			{"SquareMetrePerSecond", "1", "is the SI unit of kinematic viscosity.", "SquareMetresPerSecond", "m²/s", []string{"m2/s", "m^2/s"}, "", "", false},
-			{"SquareMillimetrePerSecond", "1e-6", "is 10⁻⁶ m²/s, the unit of ISO 3448 grades.", "SquareMillimetresPerSecond", "mm²/s", []string{"mm2/s", "mm^2/s"}, "", "", false},
-			{"Centistokes", "1e-6", "is one centistokes, 1 mm²/s exactly.", "Centistokes", "cSt", []string{"cst", "CST"}, "", "", false},
-			{"Stokes", "1e-4", "is one stokes, 1 cm²/s exactly.", "Stokes", "St", nil, "", "", false},
+			{Const: "SquareMetrePerSecond", Value: "1", Doc: "is the SI unit of kinematic viscosity.", Accessor: "SquareMetresPerSecond", Symbol: "m²/s", Aliases: []string{"m2/s", "m^2/s"}},
+			{Const: "SquareMillimetrePerSecond", Value: "1e-6", Doc: "is 10⁻⁶ m²/s, the unit of ISO 3448 grades.", Accessor: "SquareMillimetresPerSecond", Symbol: "mm²/s", Aliases: []string{"mm2/s", "mm^2/s"}},
+			{Const: "Centistokes", Value: "1e-6", Doc: "is one centistokes, 1 mm²/s exactly.", Accessor: "Centistokes", Symbol: "cSt", Aliases: []string{"cst", "CST"}},
+			{Const: "Stokes", Value: "1e-4", Doc: "is one stokes, 1 cm²/s exactly.", Accessor: "Stokes", Symbol: "St"},
 		}},
 	{Name: "DynamicViscosity", Kind: "dynamic viscosity", Dim: "dim(-1, 1, -1, 0, 0)", Base: "PascalSecond", Metric: "mPa·s", US: "cP",
 		Doc: "DynamicViscosity is an absolute (dynamic) viscosity in pascal seconds (Pa·s).",
 		Units: []unit{
-			{"PascalSecond", "1", "is the SI unit of dynamic viscosity.", "PascalSeconds", "Pa·s", []string{"Pa*s", "Pa.s", "Pa s", "Pas"}, "", "", false},
-			{"MillipascalSecond", "1e-3", "is 10⁻³ Pa·s.", "MillipascalSeconds", "mPa·s", []string{"mPa*s", "mPa.s", "mPa s", "mPas"}, "", "", false},
-			{"Centipoise", "1e-3", "is one centipoise, 1 mPa·s exactly.", "Centipoise", "cP", []string{"cp", "cps"}, "", "", false},
-			{"Poise", "1e-1", "is one poise, 0.1 Pa·s exactly.", "Poise", "P", nil, "", "", false},
+			{Const: "PascalSecond", Value: "1", Doc: "is the SI unit of dynamic viscosity.", Accessor: "PascalSeconds", Symbol: "Pa·s", Aliases: []string{"Pa*s", "Pa.s", "Pa s", "Pas"}},
+			{Const: "MillipascalSecond", Value: "1e-3", Doc: "is 10⁻³ Pa·s.", Accessor: "MillipascalSeconds", Symbol: "mPa·s", Aliases: []string{"mPa*s", "mPa.s", "mPa s", "mPas"}},
+			{Const: "Centipoise", Value: "1e-3", Doc: "is one centipoise, 1 mPa·s exactly.", Accessor: "Centipoise", Symbol: "cP", Aliases: []string{"cp", "cps"}},
+			{Const: "Poise", Value: "1e-1", Doc: "is one poise, 0.1 Pa·s exactly.", Accessor: "Poise", Symbol: "P"},
 		}},
 	{Name: "Density", Kind: "density", Dim: "dim(-3, 1, 0, 0, 0)", Base: "KilogramPerCubicMetre", Metric: "kg/m³", US: "lbm/ft³",
 		Doc: "Density is a mass density in kilograms per cubic metre (kg/m³).",
 		Units: []unit{
-			{"KilogramPerCubicMetre", "1", "is the SI unit of density.", "KilogramsPerCubicMetre", "kg/m³", []string{"kg/m3", "kg/m^3"}, "", "", false},
-			{"GramPerCubicCentimetre", "1e3", "is one g/cm³ (g/mL), 1000 kg/m³.", "GramsPerCubicCentimetre", "g/cm³", []string{"g/cm3", "g/cc", "g/mL", "g/ml"}, "", "", false},
-			{"KilogramPerLitre", "1e3", "is one kg/L, 1000 kg/m³.", "KilogramsPerLitre", "kg/L", []string{"kg/l"}, "", "", false},
-			{"PoundPerCubicFoot", "lbmKg / (footM * footM * footM)", "is one lbm/ft³, ≈ 16.0185 kg/m³ (exact ratio).", "PoundsPerCubicFoot", "lbm/ft³", []string{"lbm/ft3", "lb/ft³", "lb/ft3", "pcf"}, "", "", false},
-			{"PoundPerUSGallon", "lbmKg / usGallonM3", "is one lbm per US gallon, ≈ 119.826 kg/m³ (exact ratio).", "PoundsPerUSGallon", "lbm/gal", []string{"lb/gal", "ppg"}, "", "", false},
+			{Const: "KilogramPerCubicMetre", Value: "1", Doc: "is the SI unit of density.", Accessor: "KilogramsPerCubicMetre", Symbol: "kg/m³", Aliases: []string{"kg/m3", "kg/m^3"}},
+			{Const: "GramPerCubicCentimetre", Value: "1e3", Doc: "is one g/cm³ (g/mL), 1000 kg/m³.", Accessor: "GramsPerCubicCentimetre", Symbol: "g/cm³", Aliases: []string{"g/cm3", "g/cc", "g/mL", "g/ml"}},
+			{Const: "KilogramPerLitre", Value: "1e3", Doc: "is one kg/L, 1000 kg/m³.", Accessor: "KilogramsPerLitre", Symbol: "kg/L", Aliases: []string{"kg/l"}},
+			{Const: "PoundPerCubicFoot", Value: "lbmKg / (footM * footM * footM)", Doc: "is one lbm/ft³, ≈ 16.0185 kg/m³ (exact ratio).", Accessor: "PoundsPerCubicFoot", Symbol: "lbm/ft³", Aliases: []string{"lbm/ft3", "lb/ft³", "lb/ft3", "pcf"}},
+			{Const: "PoundPerUSGallon", Value: "lbmKg / usGallonM3", Doc: "is one lbm per US gallon, ≈ 119.826 kg/m³ (exact ratio).", Accessor: "PoundsPerUSGallon", Symbol: "lbm/gal", Aliases: []string{"lb/gal", "ppg"}},
 		}},
 	{Name: "SpecificHeatCapacity", Kind: "specific heat capacity", Dim: "dim(2, 0, -2, -1, 0)", Base: "JoulePerKilogramKelvin", Metric: "kJ/(kg·K)", US: "BTU/(lbm·°F)",
 		Doc: "SpecificHeatCapacity is a specific heat capacity in joules per kilogram kelvin (J/(kg·K)).",
 		Units: []unit{
-			{"JoulePerKilogramKelvin", "1", "is the SI unit of specific heat capacity.", "JoulesPerKilogramKelvin", "J/(kg·K)", []string{"J/kg/K", "J/(kg*K)", "J/kgK"}, "", "", false},
-			{"KilojoulePerKilogramKelvin", "1e3", "is 10³ J/(kg·K).", "KilojoulesPerKilogramKelvin", "kJ/(kg·K)", []string{"kJ/kg/K", "kJ/(kg*K)", "kJ/kgK"}, "", "", false},
-			{"BTUPerPoundFahrenheit", "btuJ / (lbmKg * fahrenheitK)", "is one BTU_IT/(lbm·°F), 4186.8 J/(kg·K) exactly (NIST SP 811).", "BTUPerPoundFahrenheit", "BTU/(lbm·°F)", []string{"BTU/(lbm*°F)", "BTU/lbm/°F", "Btu/(lb·°F)", "Btu/lb/F", "BTU/lb/F"}, "", "", false},
+			{Const: "JoulePerKilogramKelvin", Value: "1", Doc: "is the SI unit of specific heat capacity.", Accessor: "JoulesPerKilogramKelvin", Symbol: "J/(kg·K)", Aliases: []string{"J/kg/K", "J/(kg*K)", "J/kgK"}},
+			{Const: "KilojoulePerKilogramKelvin", Value: "1e3", Doc: "is 10³ J/(kg·K).", Accessor: "KilojoulesPerKilogramKelvin", Symbol: "kJ/(kg·K)", Aliases: []string{"kJ/kg/K", "kJ/(kg*K)", "kJ/kgK"}},
+			{Const: "BTUPerPoundFahrenheit", Value: "btuJ / (lbmKg * fahrenheitK)", Doc: "is one BTU_IT/(lbm·°F), 4186.8 J/(kg·K) exactly (NIST SP 811).", Accessor: "BTUPerPoundFahrenheit", Symbol: "BTU/(lbm·°F)", Aliases: []string{"BTU/(lbm*°F)", "BTU/lbm/°F", "Btu/(lb·°F)", "Btu/lb/F", "BTU/lb/F"}},
 		}},
 	{Name: "HeatTransferCoefficient", Kind: "heat transfer coefficient", Dim: "dim(0, 1, -3, -1, 0)", Base: "WattPerSquareMetreKelvin", Metric: "W/(m²·K)", US: "BTU/(h·ft²·°F)",
 		Doc: "HeatTransferCoefficient is a surface heat transfer coefficient in watts per square metre kelvin (W/(m²·K)): reservoir walls, coolers.",
 		Units: []unit{
-			{"WattPerSquareMetreKelvin", "1", "is the SI unit of heat transfer coefficient.", "WattsPerSquareMetreKelvin", "W/(m²·K)", []string{"W/m²/K", "W/(m2*K)", "W/m2/K", "W/m2K", "W/(m^2*K)"}, "", "", false},
-			{"BTUPerHourSquareFootFahrenheit", "btuJ / (hourS * footM * footM * fahrenheitK)", "is one BTU_IT/(h·ft²·°F), ≈ 5.6783 W/(m²·K) (exact ratio).", "BTUPerHourSquareFootFahrenheit", "BTU/(h·ft²·°F)", []string{"BTU/(h*ft2*F)", "Btu/(h·ft²·°F)", "BTU/h/ft2/F"}, "", "", false},
+			{Const: "WattPerSquareMetreKelvin", Value: "1", Doc: "is the SI unit of heat transfer coefficient.", Accessor: "WattsPerSquareMetreKelvin", Symbol: "W/(m²·K)", Aliases: []string{"W/m²/K", "W/(m2*K)", "W/m2/K", "W/m2K", "W/(m^2*K)"}},
+			{Const: "BTUPerHourSquareFootFahrenheit", Value: "btuJ / (hourS * footM * footM * fahrenheitK)", Doc: "is one BTU_IT/(h·ft²·°F), ≈ 5.6783 W/(m²·K) (exact ratio).", Accessor: "BTUPerHourSquareFootFahrenheit", Symbol: "BTU/(h·ft²·°F)", Aliases: []string{"BTU/(h*ft2*F)", "Btu/(h·ft²·°F)", "BTU/h/ft2/F"}},
 		}},
 	{Name: "ThermalConductivity", Kind: "thermal conductivity", Dim: "dim(1, 1, -3, -1, 0)", Base: "WattPerMetreKelvin", Metric: "W/(m·K)", US: "BTU/(h·ft·°F)",
 		Doc: "ThermalConductivity is a thermal conductivity in watts per metre kelvin (W/(m·K)).",
 		Units: []unit{
-			{"WattPerMetreKelvin", "1", "is the SI unit of thermal conductivity.", "WattsPerMetreKelvin", "W/(m·K)", []string{"W/m/K", "W/(m*K)", "W/mK"}, "", "", false},
-			{"BTUPerHourFootFahrenheit", "btuJ / (hourS * footM * fahrenheitK)", "is one BTU_IT/(h·ft·°F), ≈ 1.7307 W/(m·K) (exact ratio).", "BTUPerHourFootFahrenheit", "BTU/(h·ft·°F)", []string{"BTU/(h*ft*F)", "Btu/(h·ft·°F)", "BTU/h/ft/F"}, "", "", false},
+			{Const: "WattPerMetreKelvin", Value: "1", Doc: "is the SI unit of thermal conductivity.", Accessor: "WattsPerMetreKelvin", Symbol: "W/(m·K)", Aliases: []string{"W/m/K", "W/(m*K)", "W/mK"}},
+			{Const: "BTUPerHourFootFahrenheit", Value: "btuJ / (hourS * footM * fahrenheitK)", Doc: "is one BTU_IT/(h·ft·°F), ≈ 1.7307 W/(m·K) (exact ratio).", Accessor: "BTUPerHourFootFahrenheit", Symbol: "BTU/(h·ft·°F)", Aliases: []string{"BTU/(h*ft*F)", "Btu/(h·ft·°F)", "BTU/h/ft/F"}},
 		}},
 	{Name: "Stiffness", Kind: "stiffness", Dim: "dim(0, 1, -2, 0, 0)", Base: "NewtonPerMetre", Metric: "kN/mm", US: "lbf/in",
 		Doc: "Stiffness is a spring rate in newtons per metre (N/m): the hydraulic stiffness of a cylinder's oil columns.",
 		Units: []unit{
-			{"NewtonPerMetre", "1", "is the SI unit of stiffness.", "NewtonsPerMetre", "N/m", nil, "", "", false},
-			{"NewtonPerMillimetre", "1e3", "is one N/mm, 10³ N/m.", "NewtonsPerMillimetre", "N/mm", nil, "", "", false},
-			{"KilonewtonPerMillimetre", "1e6", "is one kN/mm, 10⁶ N/m.", "KilonewtonsPerMillimetre", "kN/mm", nil, "", "", false},
-			{"PoundForcePerInch", "lbfN / inchM", "is one lbf/in, ≈ 175.127 N/m (exact ratio).", "PoundsForcePerInch", "lbf/in", []string{"lb/in"}, "", "", false},
+			{Const: "NewtonPerMetre", Value: "1", Doc: "is the SI unit of stiffness.", Accessor: "NewtonsPerMetre", Symbol: "N/m"},
+			{Const: "NewtonPerMillimetre", Value: "1e3", Doc: "is one N/mm, 10³ N/m.", Accessor: "NewtonsPerMillimetre", Symbol: "N/mm"},
+			{Const: "KilonewtonPerMillimetre", Value: "1e6", Doc: "is one kN/mm, 10⁶ N/m.", Accessor: "KilonewtonsPerMillimetre", Symbol: "kN/mm"},
+			{Const: "PoundForcePerInch", Value: "lbfN / inchM", Doc: "is one lbf/in, ≈ 175.127 N/m (exact ratio).", Accessor: "PoundsForcePerInch", Symbol: "lbf/in", Aliases: []string{"lb/in"}},
 		}},
 	{Name: "Frequency", Kind: "frequency", Dim: "dim(0, 0, -1, 0, 0)", Base: "Hertz", Metric: "Hz", US: "Hz",
 		Doc: "Frequency is a frequency in hertz (Hz, 1/s): natural frequencies, supply frequency, cycle rates.",
 		Units: []unit{
-			{"Hertz", "1", "is the SI unit of frequency.", "Hertz", "Hz", []string{"1/s", "s⁻¹", "s^-1"}, "", "", false},
-			{"CyclePerMinute", "1.0 / minuteS", "is one cycle per minute.", "CyclesPerMinute", "cpm", []string{"cycles/min"}, "", "", false},
+			{Const: "Hertz", Value: "1", Doc: "is the SI unit of frequency.", Accessor: "Hertz", Symbol: "Hz", Aliases: []string{"1/s", "s⁻¹", "s^-1"}},
+			{Const: "CyclePerMinute", Value: "1.0 / minuteS", Doc: "is one cycle per minute.", Accessor: "CyclesPerMinute", Symbol: "cpm", Aliases: []string{"cycles/min"}},
 		}},
 	{Name: "Acceleration", Kind: "acceleration", Dim: "dim(1, 0, -2, 0, 0)", Base: "MetrePerSecondSquared", Metric: "m/s²", US: "ft/s²",
 		Doc: "Acceleration is an acceleration in metres per second squared (m/s²).",
 		Units: []unit{
-			{"MetrePerSecondSquared", "1", "is the SI unit of acceleration.", "MetresPerSecondSquared", "m/s²", []string{"m/s2", "m/s^2"}, "", "", false},
-			{"StandardGravity", "gravity", "is g₀ = 9.80665 m/s² exactly (CGPM 1901).", "StandardGravities", "g₀", []string{"gn"}, "", "", false},
-			{"FootPerSecondSquared", "footM", "is 0.3048 m/s² exactly.", "FeetPerSecondSquared", "ft/s²", []string{"ft/s2", "ft/s^2"}, "", "", false},
+			{Const: "MetrePerSecondSquared", Value: "1", Doc: "is the SI unit of acceleration.", Accessor: "MetresPerSecondSquared", Symbol: "m/s²", Aliases: []string{"m/s2", "m/s^2"}},
+			{Const: "StandardGravity", Value: "gravity", Doc: "is g₀ = 9.80665 m/s² exactly (CGPM 1901).", Accessor: "StandardGravities", Symbol: "g₀", Aliases: []string{"gn"}},
+			{Const: "FootPerSecondSquared", Value: "footM", Doc: "is 0.3048 m/s² exactly.", Accessor: "FeetPerSecondSquared", Symbol: "ft/s²", Aliases: []string{"ft/s2", "ft/s^2"}},
 		}},
 	{Name: "time", NoType: true, Kind: "time", Dim: "dim(0, 0, 1, 0, 0)",
 		Units: []unit{
-			{"", "1", "", "", "s", []string{"sec"}, "", "", false},
-			{"", "1e-3", "", "", "ms", nil, "", "", false},
-			{"", "minuteS", "", "", "min", nil, "", "", false},
-			{"", "hourS", "", "", "h", []string{"hr"}, "", "", false},
+			{Value: "1", Symbol: "s", Aliases: []string{"sec"}},
+			{Value: "1e-3", Symbol: "ms"},
+			{Value: "minuteS", Symbol: "min"},
+			{Value: "hourS", Symbol: "h", Aliases: []string{"hr"}},
 		}},
 	{Name: "angle", NoType: true, Kind: "angle", Dim: "dim(0, 0, 0, 0, 1)",
 		Units: []unit{
-			{"", "1", "", "", "rev", []string{"r", "revolution"}, "", "", false},
-			{"", "1 / revRad", "", "", "rad", nil, "", "", false},
+			{Value: "1", Symbol: "rev", Aliases: []string{"r", "revolution"}},
+			{Value: "1 / revRad", Symbol: "rad"},
 		}},
 }
 
@@ -300,6 +310,9 @@ func main() {
 		for _, u := range q.Units {
 			if !q.NoType && u.Symbol == q.Metric {
 				q.MetricIdx = idx
+			}
+			if !q.NoType && u.Symbol == q.US {
+				q.USIdx = idx
 			}
 			idx++
 			spellings := u.Aliases
@@ -314,19 +327,27 @@ func main() {
 			}
 		}
 	}
+	for _, o := range outputs {
+		write(o.file, o.tmpl)
+	}
+	writeDoc()
+}
+
+// write executes t over the quantities table and writes the formatted
+// result to file (or, when it does not format, file.broken for a look).
+func write(file string, t *template.Template) {
 	var buf bytes.Buffer
-	if err := tmpl.Execute(&buf, quantities); err != nil {
+	if err := t.Execute(&buf, quantities); err != nil {
 		fail(err)
 	}
 	out, err := format.Source(buf.Bytes())
 	if err != nil {
-		os.WriteFile("quantities_gen.go.broken", buf.Bytes(), 0o644)
+		os.WriteFile(file+".broken", buf.Bytes(), 0o644)
+		fail(fmt.Errorf("%s: %w", file, err))
+	}
+	if err := os.WriteFile(file, out, 0o644); err != nil {
 		fail(err)
 	}
-	if err := os.WriteFile("quantities_gen.go", out, 0o644); err != nil {
-		fail(err)
-	}
-	writeDoc()
 }
 
 // writeDoc writes doc.go: the package documentation with every spelling.
@@ -384,6 +405,17 @@ and read back by accessors that name the unit:
 
 Arithmetic on quantities compiles to plain float64 arithmetic. Physics across
 types is typed (Pressure.TimesArea returns a Force; Flow.PerArea a Velocity).
+
+# Overflow
+
+The helpers that return no error — the products (Pressure.TimesArea,
+Displacement.TimesSpeed, …), CircleArea, In and the accessors, the
+temperature and gauge/absolute crossings — follow float64 semantics, as the
+arithmetic operators do: for absurd inputs (a product beyond about 1e308, an
+In of a value near the float64 limit in a small unit) the result may be ±Inf,
+and a NaN input gives NaN. Every function of this package that returns an
+error checks its own result as well as its inputs, and never returns NaN or
+±Inf beside a nil error; on error it returns the zero value.
 
 # Exactness
 
@@ -444,15 +476,26 @@ nothing.
 String writes the metric trade unit (bar, L/min, kN, mm, cm³/rev, kW, °C,
 mm²/s) with four significant digits; Append does the same into a caller's
 buffer without allocating; Format supports %v, %s, %#v, and %e/%f/%g with
-width and precision. A System (Metric, USCustomary, or a copy changed by the
-caller) chooses the unit of each type for reports. MarshalText writes text that
-UnmarshalText reads back to the identical float64, so quantities travel through
-JSON, YAML and flags.
+width and precision. A System chooses the unit of each type for reports:
+Metric and USCustomary return the trade systems, and a caller adjusts its own
+copy with the System's With methods (no caller can change the systems that
+another gets). MarshalText writes text that UnmarshalText reads back to the
+identical float64, so quantities travel through JSON, YAML and flags; it
+refuses, with ErrRange, every value that UnmarshalText would refuse (NaN, ±Inf,
+a temperature below absolute zero, an absolute pressure below vacuum), so
+json.Marshal never writes a document that cannot be read back.
 
-# Errors for bad values
+# Errors
 
-RangeError names a function, a parameter, the value and the valid range, and
-unwraps to ErrRange. The hydrosize families return it for bad input.
+Every error matches one of the sentinels ErrSyntax, ErrUnknownUnit,
+ErrDimension, ErrRange and ErrReference with errors.Is. A *ParseError
+quotes the text; a *ConversionError names both sides of a failed conversion;
+a *RangeError names a parameter, the value and the valid range, and is the one
+type every hydrosize package returns for a bad argument (errors.As finds it).
+The function an error names is always qualified by its package, as a caller
+writes it: "units.ParsePressure", "units.Pressure.UnmarshalText",
+"units.Quantity.In", "fluid.CurveThrough". The Error methods never panic,
+whatever a caller put in the fields.
 `
 
 func fail(err error) {
@@ -515,12 +558,26 @@ var funcs = template.FuncMap{
 	},
 }
 
-var tmpl = template.Must(template.New("gen").Funcs(funcs).Parse(`// Code generated by gen.go; DO NOT EDIT.
+// The generated files, each from its own template over the quantities table.
+var outputs = []struct {
+	file string
+	tmpl *template.Template
+}{
+	{"quantities_gen.go", parse("quantities", quantitiesTmpl)},
+	{"tables_gen.go", parse("tables", tablesTmpl)},
+	{"systems_gen.go", parse("systems", systemsTmpl)},
+}
+
+func parse(name, text string) *template.Template {
+	return template.Must(template.New(name).Funcs(funcs).Parse(text))
+}
+
+// quantitiesTmpl writes each type, its unit constants and its methods.
+const quantitiesTmpl = `// Code generated by gen.go; DO NOT EDIT.
 
 package units
 
 import "fmt"
-
 {{range $q := .}}{{if not $q.NoType}}{{check $q}}
 // {{$q.Doc}}
 //
@@ -573,7 +630,9 @@ func (q {{$q.Name}}) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in {{$q.Metric}} when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf{{if $q.Min}},
+// and a value below {{$q.MinText}}{{end}}.
 func (q {{$q.Name}}) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metric{{$q.Name}}], &type{{$q.Name}})
 }
@@ -581,7 +640,7 @@ func (q {{$q.Name}}) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that Parse{{$q.Name}} accepts.
 func (q *{{$q.Name}}) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &type{{$q.Name}})
+	v, err := parseTyped("units.{{$q.Name}}.UnmarshalText", string(text), &type{{$q.Name}})
 	if err != nil {
 		return err
 	}
@@ -593,7 +652,7 @@ func (q *{{$q.Name}}) UnmarshalText(text []byte) error {
 // then a unit of {{$q.Kind}} such as {{examples $q}} (see the package doc
 // for the grammar and every spelling).
 func Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
-	v, err := parseTyped("Parse{{$q.Name}}", s, &type{{$q.Name}})
+	v, err := parseTyped("units.Parse{{$q.Name}}", s, &type{{$q.Name}})
 	return {{$q.Name}}(v), err
 }
 
@@ -604,55 +663,12 @@ func (d Quantity) {{$q.Name}}() ({{$q.Name}}, error) {
 	v, err := d.as(&type{{$q.Name}})
 	return {{$q.Name}}(v), err
 }
+{{end}}{{end}}`
 
-// Append{{$q.Name}} appends q in the system's unit for {{$q.Name}} to b.
-// It does not allocate when b has room.
-func (s *System) Append{{$q.Name}}(b []byte, q {{$q.Name}}) []byte {
-	return appendIn(b, float64(q), s.unit(s.{{$q.Name}}, &type{{$q.Name}}, metric{{$q.Name}}), s.digits())
-}
+// tablesTmpl writes the data tables: type descriptions and the unit table.
+const tablesTmpl = `// Code generated by gen.go; DO NOT EDIT.
 
-// Format{{$q.Name}} formats q in the system's unit for {{$q.Name}}.
-func (s *System) Format{{$q.Name}}(q {{$q.Name}}) string {
-	var buf [40]byte
-	return string(s.Append{{$q.Name}}(buf[:0], q))
-}
-{{end}}{{end}}
-// System is a presentation system: for each quantity type, the spelling of
-// the unit that reports use. Copy Metric or USCustomary and change the fields
-// you need; an empty or unknown field falls back to the metric unit (Check
-// reports such fields).
-type System struct {
-	Name   string // a label, e.g. "metric"
-	Digits int    // significant digits; 0 means 4
-{{- range $q := .}}{{if not $q.NoType}}
-	{{$q.Name}} string
-{{- end}}{{end}}
-}
-
-// Metric is the metric trade system: bar, L/min, kN, mm, cm³/rev, kW, °C, mm²/s.
-var Metric = System{Name: "metric", Digits: 4,
-{{- range $q := .}}{{if not $q.NoType}}
-	{{$q.Name}}: {{quote $q.Metric}},
-{{- end}}{{end}}
-}
-
-// USCustomary is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
-var USCustomary = System{Name: "US customary", Digits: 4,
-{{- range $q := .}}{{if not $q.NoType}}
-	{{$q.Name}}: {{quote $q.US}},
-{{- end}}{{end}}
-}
-
-// Check reports the first field of s whose unit is unknown or of the wrong
-// dimension or reference.
-func (s *System) Check() error {
-{{- range $q := .}}{{if not $q.NoType}}
-	if err := s.checkField("{{$q.Name}}", s.{{$q.Name}}, &type{{$q.Name}}); err != nil {
-		return err
-	}
-{{- end}}{{end}}
-	return nil
-}
+package units
 
 // Type descriptions used by parsing and conversion.
 var (
@@ -681,4 +697,56 @@ var unitTable = [...]unitDef{
 	{sym: {{quote $u.Symbol}}, factor: {{$u.Value}}, offset: {{offset $u.Offset}}, dim: {{$q.Dim}}, ref: {{ref $u.Ref}}, noReg: {{$u.NoReg}}, aliases: []string{ {{range $a := $u.Aliases}}{{quote $a}}, {{end}} }},
 {{- end}}{{end}}
 }
-`))
+`
+
+// systemsTmpl writes the presentation systems.
+const systemsTmpl = `// Code generated by gen.go; DO NOT EDIT.
+
+package units
+
+// Slots of System.units, one per quantity type.
+const (
+{{- range $i, $q := .}}{{if not $q.NoType}}
+	slot{{$q.Name}}{{if eq $i 0}} = iota{{end}}
+{{- end}}{{end}}
+	numSlots
+)
+
+// metricSystem is the metric trade system: bar, L/min, kN, mm, cm³/rev, kW, °C, mm²/s.
+var metricSystem = System{name: "metric", digits: 4, units: [numSlots]uint16{
+{{- range $q := .}}{{if not $q.NoType}}
+	slot{{$q.Name}}: {{$q.MetricIdx}} + 1, // {{$q.Metric}}
+{{- end}}{{end}}
+}}
+
+// usCustomarySystem is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
+var usCustomarySystem = System{name: "US customary", digits: 4, units: [numSlots]uint16{
+{{- range $q := .}}{{if not $q.NoType}}
+	slot{{$q.Name}}: {{$q.USIdx}} + 1, // {{$q.US}}
+{{- end}}{{end}}
+}}
+{{range $q := .}}{{if not $q.NoType}}
+// Append{{$q.Name}} appends q in the system's unit for {{$q.Name}} to b.
+// It does not allocate when b has room.
+func (s System) Append{{$q.Name}}(b []byte, q {{$q.Name}}) []byte {
+	return appendIn(b, float64(q), s.unit(slot{{$q.Name}}, metric{{$q.Name}}), s.Digits())
+}
+
+// Format{{$q.Name}} formats q in the system's unit for {{$q.Name}}.
+func (s System) Format{{$q.Name}}(q {{$q.Name}}) string {
+	var buf [40]byte
+	return string(s.Append{{$q.Name}}(buf[:0], q))
+}
+
+// {{$q.Name}}Unit returns the spelling of the unit s writes a {{$q.Name}} in,
+// such as "{{$q.Metric}}".
+func (s System) {{$q.Name}}Unit() string { return s.unit(slot{{$q.Name}}, metric{{$q.Name}}).sym }
+
+// With{{$q.Name}} returns a copy of s that writes a {{$q.Name}} in the
+// registered unit spelled unit, such as {{examples $q}}; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of {{$q.Kind}}.
+func (s System) With{{$q.Name}}(unit string) (System, error) {
+	return s.with(slot{{$q.Name}}, "units.System.With{{$q.Name}}", unit, &type{{$q.Name}})
+}
+{{end}}{{end}}`

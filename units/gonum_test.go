@@ -134,13 +134,3 @@ func TestGonumDimensionsDiffer(t *testing.T) {
 		t.Errorf("torque and energy: gonum %v/%v, ours %v/%v", one(unit.Torque(1)).Dimensions(), one(unit.Energy(1)).Dimensions(), torque.Dimension(), energy.Dimension())
 	}
 }
-
-// typeByName returns the description of quantity type name, or nil.
-func typeByName(name string) *typeInfo {
-	for _, info := range allTypes {
-		if info.name == name {
-			return info
-		}
-	}
-	return nil
-}

@@ -1,16 +1,19 @@
 package units
 
+// Reading "number unit" text into a typed value: the number (a fast path for
+// plain decimals, strconv otherwise) and the typed parsers' checks of
+// dimension, reference and range. The unit itself is resolved by the
+// registry and the expression parser (registry.go, expr.go).
+
 import (
 	"errors"
 	"math"
 	"strconv"
 )
 
-// scanNumber returns the length of the decimal number at the start of s:
-//
-//	[+-] ( digits [ "." digits ] | "." digits ) [ ("e" | "E") [+-] digits ]
-//
-// Hexadecimal, underscores, NaN and Inf are not numbers here.
+// scanNumber returns the length of the decimal number at the start of s, the
+// number production of the grammar in the package documentation (no
+// hexadecimal, underscores, NaN or Inf).
 func scanNumber(s string) int {
 	i := 0
 	if i < len(s) && (s[i] == '+' || s[i] == '-') {

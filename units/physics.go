@@ -3,13 +3,15 @@ package units
 import (
 	"math"
 	"time"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
 )
 
-// Physics across quantity types. Products are plain methods, as plain as
-// float64 multiplication (finite inputs beyond about 1e154 can overflow);
-// quotients return an error when the divisor is zero, negative where that is
-// meaningless, or not finite, and when the quotient itself is not finite, so
-// that no quotient is ever ±Inf or NaN.
+// Physics across quantity types. Products are plain methods with float64
+// semantics (see Overflow in the package documentation); quotients return an
+// error when the divisor is zero, negative where that is meaningless, or not
+// finite, and when the quotient itself is not finite, so that no quotient is
+// ever ±Inf or NaN.
 
 // CircleArea returns the area of a circle of diameter d: A = π·d²/4 (a bore
 // or rod section).
@@ -21,10 +23,11 @@ func (p Pressure) TimesArea(a Area) Force { return Force(float64(p) * float64(a)
 // PerArea returns the pressure that force f needs on area a: p = F/A.
 // It fails with ErrRange unless a is finite and > 0 and the quotient finite.
 func (f Force) PerArea(a Area) (Pressure, error) {
-	if err := positive("units.Force.PerArea", "a", a); err != nil {
+	const fn = "units.Force.PerArea"
+	if err := validate.Positive(fn, "a", a); err != nil {
 		return 0, err
 	}
-	return quotient[Pressure]("units.Force.PerArea", float64(f)/float64(a), f, a)
+	return quotient[Pressure](fn, float64(f)/float64(a))
 }
 
 // TimesLength returns the volume swept by area a over length l: V = A·l.
@@ -36,10 +39,11 @@ func (v Velocity) TimesArea(a Area) Flow { return Flow(float64(v) * float64(a)) 
 // PerArea returns the mean velocity of flow q through area a: v = Q/A.
 // It fails with ErrRange unless a is finite and > 0 and the quotient finite.
 func (q Flow) PerArea(a Area) (Velocity, error) {
-	if err := positive("units.Flow.PerArea", "a", a); err != nil {
+	const fn = "units.Flow.PerArea"
+	if err := validate.Positive(fn, "a", a); err != nil {
 		return 0, err
 	}
-	return quotient[Velocity]("units.Flow.PerArea", float64(q)/float64(a), q, a)
+	return quotient[Velocity](fn, float64(q)/float64(a))
 }
 
 // TimesDuration returns the volume that flow q delivers in d: V = Q·t.
@@ -48,14 +52,11 @@ func (q Flow) TimesDuration(d time.Duration) Volume { return Volume(float64(q) *
 // PerDuration returns the mean flow that moves volume v in d: Q = V/t.
 // It fails with ErrRange unless d > 0 and the quotient is finite.
 func (v Volume) PerDuration(d time.Duration) (Flow, error) {
-	if d <= 0 {
-		return 0, &RangeError{Func: "units.Volume.PerDuration", Param: "d", Value: d.String(), Valid: "> 0"}
+	const fn = "units.Volume.PerDuration"
+	if err := validate.PositiveDuration(fn, "d", d); err != nil {
+		return 0, err
 	}
-	x := float64(v) / d.Seconds()
-	if x-x != 0 { // a NaN or infinite v, or an overflow
-		return 0, &RangeError{Func: "units.Volume.PerDuration", Param: "result", Value: v.String() + " / " + d.String(), Valid: "finite"}
-	}
-	return Flow(x), nil
+	return quotient[Flow](fn, float64(v)/d.Seconds())
 }
 
 // TimesSpeed returns the geometric flow of displacement d at speed n:
@@ -66,10 +67,11 @@ func (d Displacement) TimesSpeed(n RotationalSpeed) Flow { return Flow(float64(d
 // D = Q/n. It fails with ErrRange unless n is finite and > 0
 // and the quotient finite.
 func (q Flow) PerSpeed(n RotationalSpeed) (Displacement, error) {
-	if err := positive("units.Flow.PerSpeed", "n", n); err != nil {
+	const fn = "units.Flow.PerSpeed"
+	if err := validate.Positive(fn, "n", n); err != nil {
 		return 0, err
 	}
-	return quotient[Displacement]("units.Flow.PerSpeed", float64(q)/float64(n), q, n)
+	return quotient[Displacement](fn, float64(q)/float64(n))
 }
 
 // TimesPressure returns the ideal torque of displacement d at pressure
@@ -93,10 +95,11 @@ func (t Torque) TimesSpeed(n RotationalSpeed) Power {
 // T = P/(2π·n). It fails with ErrRange unless n is finite and > 0
 // and the quotient finite.
 func (p Power) PerSpeed(n RotationalSpeed) (Torque, error) {
-	if err := positive("units.Power.PerSpeed", "n", n); err != nil {
+	const fn = "units.Power.PerSpeed"
+	if err := validate.Positive(fn, "n", n); err != nil {
 		return 0, err
 	}
-	return quotient[Torque]("units.Power.PerSpeed", float64(p)/(revRad*float64(n)), p, n)
+	return quotient[Torque](fn, float64(p)/(revRad*float64(n)))
 }
 
 // TimesDuration returns the energy of power p over d: E = P·t.
@@ -116,27 +119,12 @@ func (v KinematicViscosity) TimesDensity(rho Density) DynamicViscosity {
 // F = m·a (weight when a is StandardGravity).
 func (m Mass) TimesAcceleration(a Acceleration) Force { return Force(float64(m) * float64(a)) }
 
-// quotient returns x, the quotient of num and den, as an R; or ErrRange
-// when it is not finite: a NaN or infinite dividend, or a finite one over a
-// divisor so small that the quotient overflows.
-func quotient[R, N, D interface {
-	~float64
-	String() string
-}](fn string, x float64, num N, den D) (R, error) {
-	if x-x != 0 {
-		return 0, &RangeError{Func: fn, Param: "result", Value: num.String() + " / " + den.String(), Valid: "finite"}
+// quotient returns the quotient x as an R, or ErrRange when it is not
+// finite: a NaN or infinite dividend, or a finite one over a divisor so small
+// that the quotient overflows.
+func quotient[R ~float64](fn string, x float64) (R, error) {
+	if err := validate.Result(fn, "result", R(x)); err != nil {
+		return 0, err
 	}
 	return R(x), nil
-}
-
-// positive checks that a divisor is finite and > 0.
-func positive[T interface {
-	~float64
-	String() string
-}](fn, param string, v T) error {
-	f := float64(v)
-	if f > 0 && !math.IsInf(f, 0) {
-		return nil
-	}
-	return &RangeError{Func: fn, Param: param, Value: v.String(), Valid: "> 0 and finite"}
 }

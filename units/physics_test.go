@@ -1,10 +1,11 @@
 package units
 
 import (
-	"errors"
 	"math"
 	"testing"
 	"time"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
 func near(got, want, rel float64) bool {
@@ -132,25 +133,48 @@ func TestProductsAndQuotients(t *testing.T) {
 	}
 }
 
-func TestQuotientsRejectBadDivisors(t *testing.T) {
+// TestQuotientsRefuse: a quotient refuses a divisor that is zero, negative,
+// NaN or infinite, and a result that is not finite (a finite dividend over a
+// tiny divisor used to return +Inf, a NaN dividend NaN); it returns 0 with a
+// *RangeError that names the divisor or "result".
+func TestQuotientsRefuse(t *testing.T) {
 	for _, c := range []struct {
-		name string
-		err  error
+		name  string
+		v     float64
+		err   error
+		fn    string
+		param string
 	}{
-		{"force/0", second(Force(1).PerArea(0))},
-		{"force/-1", second(Force(1).PerArea(-1))},
-		{"force/NaN", second(Force(1).PerArea(Area(math.NaN())))},
-		{"flow/Inf", second(Flow(1).PerArea(Area(math.Inf(1))))},
-		{"flow/0 speed", second(Flow(1).PerSpeed(0))},
-		{"power/0 speed", second(Power(1).PerSpeed(0))},
-		{"volume/0 s", second(Volume(1).PerDuration(0))},
-		{"volume/-1 s", second(Volume(1).PerDuration(-time.Second))},
+		// Divisors.
+		{"force/0", float64(first(Force(1).PerArea(0))), second(Force(1).PerArea(0)), "units.Force.PerArea", "a"},
+		{"force/-1", float64(first(Force(1).PerArea(-1))), second(Force(1).PerArea(-1)), "units.Force.PerArea", "a"},
+		{"force/NaN", float64(first(Force(1).PerArea(Area(math.NaN())))), second(Force(1).PerArea(Area(math.NaN()))), "units.Force.PerArea", "a"},
+		{"flow/Inf", float64(first(Flow(1).PerArea(Area(math.Inf(1))))), second(Flow(1).PerArea(Area(math.Inf(1)))), "units.Flow.PerArea", "a"},
+		{"flow/0 speed", float64(first(Flow(1).PerSpeed(0))), second(Flow(1).PerSpeed(0)), "units.Flow.PerSpeed", "n"},
+		{"power/0 speed", float64(first(Power(1).PerSpeed(0))), second(Power(1).PerSpeed(0)), "units.Power.PerSpeed", "n"},
+		{"volume/0 s", float64(first(Volume(1).PerDuration(0))), second(Volume(1).PerDuration(0)), "units.Volume.PerDuration", "d"},
+		{"volume/-1 s", float64(first(Volume(1).PerDuration(-time.Second))), second(Volume(1).PerDuration(-time.Second)), "units.Volume.PerDuration", "d"},
+		// Results that are not finite.
+		{"force 1e300/1e-10", float64(first(Force(1e300).PerArea(1e-10))), second(Force(1e300).PerArea(1e-10)), "units.Force.PerArea", "result"},
+		{"force NaN/1", float64(first(Force(math.NaN()).PerArea(1))), second(Force(math.NaN()).PerArea(1)), "units.Force.PerArea", "result"},
+		{"flow -1e300/1e-10", float64(first(Flow(-1e300).PerArea(1e-10))), second(Flow(-1e300).PerArea(1e-10)), "units.Flow.PerArea", "result"},
+		{"flow 1e300/1e-10 speed", float64(first(Flow(1e300).PerSpeed(1e-10))), second(Flow(1e300).PerSpeed(1e-10)), "units.Flow.PerSpeed", "result"},
+		{"power 1e308/1e-3 speed", float64(first(Power(1e308).PerSpeed(1e-3))), second(Power(1e308).PerSpeed(1e-3)), "units.Power.PerSpeed", "result"},
+		{"power Inf/1 speed", float64(first(Power(math.Inf(1)).PerSpeed(1))), second(Power(math.Inf(1)).PerSpeed(1)), "units.Power.PerSpeed", "result"},
+		{"volume 1e308/1 ns", float64(first(Volume(1e308).PerDuration(time.Nanosecond))), second(Volume(1e308).PerDuration(time.Nanosecond)), "units.Volume.PerDuration", "result"},
 	} {
-		if !errors.Is(c.err, ErrRange) {
-			t.Errorf("%s: err = %v, want ErrRange", c.name, c.err)
+		if c.v != 0 {
+			t.Errorf("%s = %g beside its error, want 0", c.name, c.v)
 		}
+		checktest.RangeErrorIn(t, c.err, c.fn, c.param)
+	}
+	// Large but finite quotients still work.
+	if p, err := Force(1e300).PerArea(1e-5); err != nil || p != 1e305 {
+		t.Errorf("Force(1e300).PerArea(1e-5) = %v, %v; want 1e305 Pa", float64(p), err)
 	}
 }
+
+func first[T any](v T, _ error) T { return v }
 
 func second[T any](_ T, err error) error { return err }
 

@@ -78,7 +78,8 @@ func (q Length) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Length) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricLength], &typeLength)
 }
@@ -86,7 +87,7 @@ func (q Length) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseLength accepts.
 func (q *Length) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeLength)
+	v, err := parseTyped("units.Length.UnmarshalText", string(text), &typeLength)
 	if err != nil {
 		return err
 	}
@@ -98,7 +99,7 @@ func (q *Length) UnmarshalText(text []byte) error {
 // then a unit of length such as mm, in, m, cm (see the package doc
 // for the grammar and every spelling).
 func ParseLength(s string) (Length, error) {
-	v, err := parseTyped("ParseLength", s, &typeLength)
+	v, err := parseTyped("units.ParseLength", s, &typeLength)
 	return Length(v), err
 }
 
@@ -107,18 +108,6 @@ func ParseLength(s string) (Length, error) {
 func (d Quantity) Length() (Length, error) {
 	v, err := d.as(&typeLength)
 	return Length(v), err
-}
-
-// AppendLength appends q in the system's unit for Length to b.
-// It does not allocate when b has room.
-func (s *System) AppendLength(b []byte, q Length) []byte {
-	return appendIn(b, float64(q), s.unit(s.Length, &typeLength, metricLength), s.digits())
-}
-
-// FormatLength formats q in the system's unit for Length.
-func (s *System) FormatLength(q Length) string {
-	var buf [40]byte
-	return string(s.AppendLength(buf[:0], q))
 }
 
 // Area is an area in square metres (m²): piston and annulus areas, flow sections.
@@ -190,7 +179,8 @@ func (q Area) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Area) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricArea], &typeArea)
 }
@@ -198,7 +188,7 @@ func (q Area) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseArea accepts.
 func (q *Area) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeArea)
+	v, err := parseTyped("units.Area.UnmarshalText", string(text), &typeArea)
 	if err != nil {
 		return err
 	}
@@ -210,7 +200,7 @@ func (q *Area) UnmarshalText(text []byte) error {
 // then a unit of area such as cm², in², m², mm² (see the package doc
 // for the grammar and every spelling).
 func ParseArea(s string) (Area, error) {
-	v, err := parseTyped("ParseArea", s, &typeArea)
+	v, err := parseTyped("units.ParseArea", s, &typeArea)
 	return Area(v), err
 }
 
@@ -219,18 +209,6 @@ func ParseArea(s string) (Area, error) {
 func (d Quantity) Area() (Area, error) {
 	v, err := d.as(&typeArea)
 	return Area(v), err
-}
-
-// AppendArea appends q in the system's unit for Area to b.
-// It does not allocate when b has room.
-func (s *System) AppendArea(b []byte, q Area) []byte {
-	return appendIn(b, float64(q), s.unit(s.Area, &typeArea, metricArea), s.digits())
-}
-
-// FormatArea formats q in the system's unit for Area.
-func (s *System) FormatArea(q Area) string {
-	var buf [40]byte
-	return string(s.AppendArea(buf[:0], q))
 }
 
 // Volume is a volume in cubic metres (m³): reservoirs, accumulators, swept volumes.
@@ -312,7 +290,8 @@ func (q Volume) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Volume) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVolume], &typeVolume)
 }
@@ -320,7 +299,7 @@ func (q Volume) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseVolume accepts.
 func (q *Volume) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeVolume)
+	v, err := parseTyped("units.Volume.UnmarshalText", string(text), &typeVolume)
 	if err != nil {
 		return err
 	}
@@ -332,7 +311,7 @@ func (q *Volume) UnmarshalText(text []byte) error {
 // then a unit of volume such as L, gal, m³, mL (see the package doc
 // for the grammar and every spelling).
 func ParseVolume(s string) (Volume, error) {
-	v, err := parseTyped("ParseVolume", s, &typeVolume)
+	v, err := parseTyped("units.ParseVolume", s, &typeVolume)
 	return Volume(v), err
 }
 
@@ -341,18 +320,6 @@ func ParseVolume(s string) (Volume, error) {
 func (d Quantity) Volume() (Volume, error) {
 	v, err := d.as(&typeVolume)
 	return Volume(v), err
-}
-
-// AppendVolume appends q in the system's unit for Volume to b.
-// It does not allocate when b has room.
-func (s *System) AppendVolume(b []byte, q Volume) []byte {
-	return appendIn(b, float64(q), s.unit(s.Volume, &typeVolume, metricVolume), s.digits())
-}
-
-// FormatVolume formats q in the system's unit for Volume.
-func (s *System) FormatVolume(q Volume) string {
-	var buf [40]byte
-	return string(s.AppendVolume(buf[:0], q))
 }
 
 // Mass is a mass in kilograms (kg): payloads, moving parts, oil charges.
@@ -419,7 +386,8 @@ func (q Mass) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Mass) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricMass], &typeMass)
 }
@@ -427,7 +395,7 @@ func (q Mass) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseMass accepts.
 func (q *Mass) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeMass)
+	v, err := parseTyped("units.Mass.UnmarshalText", string(text), &typeMass)
 	if err != nil {
 		return err
 	}
@@ -439,7 +407,7 @@ func (q *Mass) UnmarshalText(text []byte) error {
 // then a unit of mass such as kg, lbm, g, t (see the package doc
 // for the grammar and every spelling).
 func ParseMass(s string) (Mass, error) {
-	v, err := parseTyped("ParseMass", s, &typeMass)
+	v, err := parseTyped("units.ParseMass", s, &typeMass)
 	return Mass(v), err
 }
 
@@ -448,18 +416,6 @@ func ParseMass(s string) (Mass, error) {
 func (d Quantity) Mass() (Mass, error) {
 	v, err := d.as(&typeMass)
 	return Mass(v), err
-}
-
-// AppendMass appends q in the system's unit for Mass to b.
-// It does not allocate when b has room.
-func (s *System) AppendMass(b []byte, q Mass) []byte {
-	return appendIn(b, float64(q), s.unit(s.Mass, &typeMass, metricMass), s.digits())
-}
-
-// FormatMass formats q in the system's unit for Mass.
-func (s *System) FormatMass(q Mass) string {
-	var buf [40]byte
-	return string(s.AppendMass(buf[:0], q))
 }
 
 // Force is a force in newtons (N): loads, cylinder thrust and pull.
@@ -526,7 +482,8 @@ func (q Force) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Force) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricForce], &typeForce)
 }
@@ -534,7 +491,7 @@ func (q Force) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseForce accepts.
 func (q *Force) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeForce)
+	v, err := parseTyped("units.Force.UnmarshalText", string(text), &typeForce)
 	if err != nil {
 		return err
 	}
@@ -546,7 +503,7 @@ func (q *Force) UnmarshalText(text []byte) error {
 // then a unit of force such as kN, lbf, N, kgf (see the package doc
 // for the grammar and every spelling).
 func ParseForce(s string) (Force, error) {
-	v, err := parseTyped("ParseForce", s, &typeForce)
+	v, err := parseTyped("units.ParseForce", s, &typeForce)
 	return Force(v), err
 }
 
@@ -555,18 +512,6 @@ func ParseForce(s string) (Force, error) {
 func (d Quantity) Force() (Force, error) {
 	v, err := d.as(&typeForce)
 	return Force(v), err
-}
-
-// AppendForce appends q in the system's unit for Force to b.
-// It does not allocate when b has room.
-func (s *System) AppendForce(b []byte, q Force) []byte {
-	return appendIn(b, float64(q), s.unit(s.Force, &typeForce, metricForce), s.digits())
-}
-
-// FormatForce formats q in the system's unit for Force.
-func (s *System) FormatForce(q Force) string {
-	var buf [40]byte
-	return string(s.AppendForce(buf[:0], q))
 }
 
 // Pressure is a gauge or differential pressure in pascals (Pa): a pressure
@@ -670,7 +615,8 @@ func (q Pressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bar when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Pressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPressure], &typePressure)
 }
@@ -678,7 +624,7 @@ func (q Pressure) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParsePressure accepts.
 func (q *Pressure) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typePressure)
+	v, err := parseTyped("units.Pressure.UnmarshalText", string(text), &typePressure)
 	if err != nil {
 		return err
 	}
@@ -690,7 +636,7 @@ func (q *Pressure) UnmarshalText(text []byte) error {
 // then a unit of pressure such as bar, psi, Pa, kPa (see the package doc
 // for the grammar and every spelling).
 func ParsePressure(s string) (Pressure, error) {
-	v, err := parseTyped("ParsePressure", s, &typePressure)
+	v, err := parseTyped("units.ParsePressure", s, &typePressure)
 	return Pressure(v), err
 }
 
@@ -700,18 +646,6 @@ func ParsePressure(s string) (Pressure, error) {
 func (d Quantity) Pressure() (Pressure, error) {
 	v, err := d.as(&typePressure)
 	return Pressure(v), err
-}
-
-// AppendPressure appends q in the system's unit for Pressure to b.
-// It does not allocate when b has room.
-func (s *System) AppendPressure(b []byte, q Pressure) []byte {
-	return appendIn(b, float64(q), s.unit(s.Pressure, &typePressure, metricPressure), s.digits())
-}
-
-// FormatPressure formats q in the system's unit for Pressure.
-func (s *System) FormatPressure(q Pressure) string {
-	var buf [40]byte
-	return string(s.AppendPressure(buf[:0], q))
 }
 
 // AbsolutePressure is a pressure above absolute vacuum, in pascals (Pa):
@@ -791,7 +725,9 @@ func (q AbsolutePressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bara when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 Pa (absolute vacuum).
 func (q AbsolutePressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAbsolutePressure], &typeAbsolutePressure)
 }
@@ -799,7 +735,7 @@ func (q AbsolutePressure) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseAbsolutePressure accepts.
 func (q *AbsolutePressure) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeAbsolutePressure)
+	v, err := parseTyped("units.AbsolutePressure.UnmarshalText", string(text), &typeAbsolutePressure)
 	if err != nil {
 		return err
 	}
@@ -811,7 +747,7 @@ func (q *AbsolutePressure) UnmarshalText(text []byte) error {
 // then a unit of absolute pressure such as bara, psia, Pa(a), kPa(a) (see the package doc
 // for the grammar and every spelling).
 func ParseAbsolutePressure(s string) (AbsolutePressure, error) {
-	v, err := parseTyped("ParseAbsolutePressure", s, &typeAbsolutePressure)
+	v, err := parseTyped("units.ParseAbsolutePressure", s, &typeAbsolutePressure)
 	return AbsolutePressure(v), err
 }
 
@@ -821,18 +757,6 @@ func ParseAbsolutePressure(s string) (AbsolutePressure, error) {
 func (d Quantity) AbsolutePressure() (AbsolutePressure, error) {
 	v, err := d.as(&typeAbsolutePressure)
 	return AbsolutePressure(v), err
-}
-
-// AppendAbsolutePressure appends q in the system's unit for AbsolutePressure to b.
-// It does not allocate when b has room.
-func (s *System) AppendAbsolutePressure(b []byte, q AbsolutePressure) []byte {
-	return appendIn(b, float64(q), s.unit(s.AbsolutePressure, &typeAbsolutePressure, metricAbsolutePressure), s.digits())
-}
-
-// FormatAbsolutePressure formats q in the system's unit for AbsolutePressure.
-func (s *System) FormatAbsolutePressure(q AbsolutePressure) string {
-	var buf [40]byte
-	return string(s.AppendAbsolutePressure(buf[:0], q))
 }
 
 // Flow is a volume flow rate in cubic metres per second (m³/s): pump delivery, cylinder and line flows.
@@ -909,7 +833,8 @@ func (q Flow) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L/min when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Flow) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFlow], &typeFlow)
 }
@@ -917,7 +842,7 @@ func (q Flow) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseFlow accepts.
 func (q *Flow) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeFlow)
+	v, err := parseTyped("units.Flow.UnmarshalText", string(text), &typeFlow)
 	if err != nil {
 		return err
 	}
@@ -929,7 +854,7 @@ func (q *Flow) UnmarshalText(text []byte) error {
 // then a unit of volume flow such as L/min, gpm, m³/s, L/s (see the package doc
 // for the grammar and every spelling).
 func ParseFlow(s string) (Flow, error) {
-	v, err := parseTyped("ParseFlow", s, &typeFlow)
+	v, err := parseTyped("units.ParseFlow", s, &typeFlow)
 	return Flow(v), err
 }
 
@@ -938,18 +863,6 @@ func ParseFlow(s string) (Flow, error) {
 func (d Quantity) Flow() (Flow, error) {
 	v, err := d.as(&typeFlow)
 	return Flow(v), err
-}
-
-// AppendFlow appends q in the system's unit for Flow to b.
-// It does not allocate when b has room.
-func (s *System) AppendFlow(b []byte, q Flow) []byte {
-	return appendIn(b, float64(q), s.unit(s.Flow, &typeFlow, metricFlow), s.digits())
-}
-
-// FormatFlow formats q in the system's unit for Flow.
-func (s *System) FormatFlow(q Flow) string {
-	var buf [40]byte
-	return string(s.AppendFlow(buf[:0], q))
 }
 
 // Velocity is a speed in metres per second (m/s): piston speeds and fluid velocities in lines.
@@ -1021,7 +934,8 @@ func (q Velocity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Velocity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVelocity], &typeVelocity)
 }
@@ -1029,7 +943,7 @@ func (q Velocity) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseVelocity accepts.
 func (q *Velocity) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeVelocity)
+	v, err := parseTyped("units.Velocity.UnmarshalText", string(text), &typeVelocity)
 	if err != nil {
 		return err
 	}
@@ -1041,7 +955,7 @@ func (q *Velocity) UnmarshalText(text []byte) error {
 // then a unit of velocity such as m/s, ft/s, mm/s, in/s (see the package doc
 // for the grammar and every spelling).
 func ParseVelocity(s string) (Velocity, error) {
-	v, err := parseTyped("ParseVelocity", s, &typeVelocity)
+	v, err := parseTyped("units.ParseVelocity", s, &typeVelocity)
 	return Velocity(v), err
 }
 
@@ -1050,18 +964,6 @@ func ParseVelocity(s string) (Velocity, error) {
 func (d Quantity) Velocity() (Velocity, error) {
 	v, err := d.as(&typeVelocity)
 	return Velocity(v), err
-}
-
-// AppendVelocity appends q in the system's unit for Velocity to b.
-// It does not allocate when b has room.
-func (s *System) AppendVelocity(b []byte, q Velocity) []byte {
-	return appendIn(b, float64(q), s.unit(s.Velocity, &typeVelocity, metricVelocity), s.digits())
-}
-
-// FormatVelocity formats q in the system's unit for Velocity.
-func (s *System) FormatVelocity(q Velocity) string {
-	var buf [40]byte
-	return string(s.AppendVelocity(buf[:0], q))
 }
 
 // Displacement is the volume a pump or motor moves per revolution, in cubic
@@ -1127,7 +1029,8 @@ func (q Displacement) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm³/rev when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Displacement) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDisplacement], &typeDisplacement)
 }
@@ -1135,7 +1038,7 @@ func (q Displacement) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseDisplacement accepts.
 func (q *Displacement) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeDisplacement)
+	v, err := parseTyped("units.Displacement.UnmarshalText", string(text), &typeDisplacement)
 	if err != nil {
 		return err
 	}
@@ -1147,7 +1050,7 @@ func (q *Displacement) UnmarshalText(text []byte) error {
 // then a unit of displacement such as cm³/rev, in³/rev, m³/rev (see the package doc
 // for the grammar and every spelling).
 func ParseDisplacement(s string) (Displacement, error) {
-	v, err := parseTyped("ParseDisplacement", s, &typeDisplacement)
+	v, err := parseTyped("units.ParseDisplacement", s, &typeDisplacement)
 	return Displacement(v), err
 }
 
@@ -1156,18 +1059,6 @@ func ParseDisplacement(s string) (Displacement, error) {
 func (d Quantity) Displacement() (Displacement, error) {
 	v, err := d.as(&typeDisplacement)
 	return Displacement(v), err
-}
-
-// AppendDisplacement appends q in the system's unit for Displacement to b.
-// It does not allocate when b has room.
-func (s *System) AppendDisplacement(b []byte, q Displacement) []byte {
-	return appendIn(b, float64(q), s.unit(s.Displacement, &typeDisplacement, metricDisplacement), s.digits())
-}
-
-// FormatDisplacement formats q in the system's unit for Displacement.
-func (s *System) FormatDisplacement(q Displacement) string {
-	var buf [40]byte
-	return string(s.AppendDisplacement(buf[:0], q))
 }
 
 // RotationalSpeed is a shaft speed in revolutions per second (rev/s).
@@ -1229,7 +1120,8 @@ func (q RotationalSpeed) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in rpm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q RotationalSpeed) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricRotationalSpeed], &typeRotationalSpeed)
 }
@@ -1237,7 +1129,7 @@ func (q RotationalSpeed) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseRotationalSpeed accepts.
 func (q *RotationalSpeed) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeRotationalSpeed)
+	v, err := parseTyped("units.RotationalSpeed.UnmarshalText", string(text), &typeRotationalSpeed)
 	if err != nil {
 		return err
 	}
@@ -1249,7 +1141,7 @@ func (q *RotationalSpeed) UnmarshalText(text []byte) error {
 // then a unit of rotational speed such as rpm, rev/s, rad/s (see the package doc
 // for the grammar and every spelling).
 func ParseRotationalSpeed(s string) (RotationalSpeed, error) {
-	v, err := parseTyped("ParseRotationalSpeed", s, &typeRotationalSpeed)
+	v, err := parseTyped("units.ParseRotationalSpeed", s, &typeRotationalSpeed)
 	return RotationalSpeed(v), err
 }
 
@@ -1258,18 +1150,6 @@ func ParseRotationalSpeed(s string) (RotationalSpeed, error) {
 func (d Quantity) RotationalSpeed() (RotationalSpeed, error) {
 	v, err := d.as(&typeRotationalSpeed)
 	return RotationalSpeed(v), err
-}
-
-// AppendRotationalSpeed appends q in the system's unit for RotationalSpeed to b.
-// It does not allocate when b has room.
-func (s *System) AppendRotationalSpeed(b []byte, q RotationalSpeed) []byte {
-	return appendIn(b, float64(q), s.unit(s.RotationalSpeed, &typeRotationalSpeed, metricRotationalSpeed), s.digits())
-}
-
-// FormatRotationalSpeed formats q in the system's unit for RotationalSpeed.
-func (s *System) FormatRotationalSpeed(q RotationalSpeed) string {
-	var buf [40]byte
-	return string(s.AppendRotationalSpeed(buf[:0], q))
 }
 
 // Torque is a moment in newton metres (N·m): pump shaft, motor and slew torques.
@@ -1336,7 +1216,8 @@ func (q Torque) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in N·m when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Torque) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTorque], &typeTorque)
 }
@@ -1344,7 +1225,7 @@ func (q Torque) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseTorque accepts.
 func (q *Torque) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeTorque)
+	v, err := parseTyped("units.Torque.UnmarshalText", string(text), &typeTorque)
 	if err != nil {
 		return err
 	}
@@ -1356,7 +1237,7 @@ func (q *Torque) UnmarshalText(text []byte) error {
 // then a unit of torque such as N·m, lbf·ft, kN·m, lbf·in (see the package doc
 // for the grammar and every spelling).
 func ParseTorque(s string) (Torque, error) {
-	v, err := parseTyped("ParseTorque", s, &typeTorque)
+	v, err := parseTyped("units.ParseTorque", s, &typeTorque)
 	return Torque(v), err
 }
 
@@ -1365,18 +1246,6 @@ func ParseTorque(s string) (Torque, error) {
 func (d Quantity) Torque() (Torque, error) {
 	v, err := d.as(&typeTorque)
 	return Torque(v), err
-}
-
-// AppendTorque appends q in the system's unit for Torque to b.
-// It does not allocate when b has room.
-func (s *System) AppendTorque(b []byte, q Torque) []byte {
-	return appendIn(b, float64(q), s.unit(s.Torque, &typeTorque, metricTorque), s.digits())
-}
-
-// FormatTorque formats q in the system's unit for Torque.
-func (s *System) FormatTorque(q Torque) string {
-	var buf [40]byte
-	return string(s.AppendTorque(buf[:0], q))
 }
 
 // Power is a power in watts (W): hydraulic, shaft and electrical power, and heat flows.
@@ -1448,7 +1317,8 @@ func (q Power) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kW when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Power) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPower], &typePower)
 }
@@ -1456,7 +1326,7 @@ func (q Power) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParsePower accepts.
 func (q *Power) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typePower)
+	v, err := parseTyped("units.Power.UnmarshalText", string(text), &typePower)
 	if err != nil {
 		return err
 	}
@@ -1468,7 +1338,7 @@ func (q *Power) UnmarshalText(text []byte) error {
 // then a unit of power such as kW, hp, W, PS (see the package doc
 // for the grammar and every spelling).
 func ParsePower(s string) (Power, error) {
-	v, err := parseTyped("ParsePower", s, &typePower)
+	v, err := parseTyped("units.ParsePower", s, &typePower)
 	return Power(v), err
 }
 
@@ -1477,18 +1347,6 @@ func ParsePower(s string) (Power, error) {
 func (d Quantity) Power() (Power, error) {
 	v, err := d.as(&typePower)
 	return Power(v), err
-}
-
-// AppendPower appends q in the system's unit for Power to b.
-// It does not allocate when b has room.
-func (s *System) AppendPower(b []byte, q Power) []byte {
-	return appendIn(b, float64(q), s.unit(s.Power, &typePower, metricPower), s.digits())
-}
-
-// FormatPower formats q in the system's unit for Power.
-func (s *System) FormatPower(q Power) string {
-	var buf [40]byte
-	return string(s.AppendPower(buf[:0], q))
 }
 
 // Energy is an energy or quantity of heat in joules (J): stored accumulator energy, heat per cycle.
@@ -1560,7 +1418,8 @@ func (q Energy) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Energy) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricEnergy], &typeEnergy)
 }
@@ -1568,7 +1427,7 @@ func (q Energy) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseEnergy accepts.
 func (q *Energy) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeEnergy)
+	v, err := parseTyped("units.Energy.UnmarshalText", string(text), &typeEnergy)
 	if err != nil {
 		return err
 	}
@@ -1580,7 +1439,7 @@ func (q *Energy) UnmarshalText(text []byte) error {
 // then a unit of energy such as kJ, BTU, J, MJ (see the package doc
 // for the grammar and every spelling).
 func ParseEnergy(s string) (Energy, error) {
-	v, err := parseTyped("ParseEnergy", s, &typeEnergy)
+	v, err := parseTyped("units.ParseEnergy", s, &typeEnergy)
 	return Energy(v), err
 }
 
@@ -1589,18 +1448,6 @@ func ParseEnergy(s string) (Energy, error) {
 func (d Quantity) Energy() (Energy, error) {
 	v, err := d.as(&typeEnergy)
 	return Energy(v), err
-}
-
-// AppendEnergy appends q in the system's unit for Energy to b.
-// It does not allocate when b has room.
-func (s *System) AppendEnergy(b []byte, q Energy) []byte {
-	return appendIn(b, float64(q), s.unit(s.Energy, &typeEnergy, metricEnergy), s.digits())
-}
-
-// FormatEnergy formats q in the system's unit for Energy.
-func (s *System) FormatEnergy(q Energy) string {
-	var buf [40]byte
-	return string(s.AppendEnergy(buf[:0], q))
 }
 
 // Temperature is a thermodynamic (absolute) temperature in kelvins (K).
@@ -1660,7 +1507,9 @@ func (q Temperature) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in °C when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 K (absolute zero).
 func (q Temperature) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperature], &typeTemperature)
 }
@@ -1668,7 +1517,7 @@ func (q Temperature) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseTemperature accepts.
 func (q *Temperature) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeTemperature)
+	v, err := parseTyped("units.Temperature.UnmarshalText", string(text), &typeTemperature)
 	if err != nil {
 		return err
 	}
@@ -1680,7 +1529,7 @@ func (q *Temperature) UnmarshalText(text []byte) error {
 // then a unit of temperature such as °C, °F, K, °R (see the package doc
 // for the grammar and every spelling).
 func ParseTemperature(s string) (Temperature, error) {
-	v, err := parseTyped("ParseTemperature", s, &typeTemperature)
+	v, err := parseTyped("units.ParseTemperature", s, &typeTemperature)
 	return Temperature(v), err
 }
 
@@ -1690,18 +1539,6 @@ func ParseTemperature(s string) (Temperature, error) {
 func (d Quantity) Temperature() (Temperature, error) {
 	v, err := d.as(&typeTemperature)
 	return Temperature(v), err
-}
-
-// AppendTemperature appends q in the system's unit for Temperature to b.
-// It does not allocate when b has room.
-func (s *System) AppendTemperature(b []byte, q Temperature) []byte {
-	return appendIn(b, float64(q), s.unit(s.Temperature, &typeTemperature, metricTemperature), s.digits())
-}
-
-// FormatTemperature formats q in the system's unit for Temperature.
-func (s *System) FormatTemperature(q Temperature) string {
-	var buf [40]byte
-	return string(s.AppendTemperature(buf[:0], q))
 }
 
 // TemperatureDifference is a temperature interval in kelvins (K): a rise
@@ -1767,7 +1604,8 @@ func (q TemperatureDifference) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in K when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q TemperatureDifference) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperatureDifference], &typeTemperatureDifference)
 }
@@ -1775,7 +1613,7 @@ func (q TemperatureDifference) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseTemperatureDifference accepts.
 func (q *TemperatureDifference) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeTemperatureDifference)
+	v, err := parseTyped("units.TemperatureDifference.UnmarshalText", string(text), &typeTemperatureDifference)
 	if err != nil {
 		return err
 	}
@@ -1787,7 +1625,7 @@ func (q *TemperatureDifference) UnmarshalText(text []byte) error {
 // then a unit of temperature difference such as K, °F, ΔK, Δ°C (see the package doc
 // for the grammar and every spelling).
 func ParseTemperatureDifference(s string) (TemperatureDifference, error) {
-	v, err := parseTyped("ParseTemperatureDifference", s, &typeTemperatureDifference)
+	v, err := parseTyped("units.ParseTemperatureDifference", s, &typeTemperatureDifference)
 	return TemperatureDifference(v), err
 }
 
@@ -1797,18 +1635,6 @@ func ParseTemperatureDifference(s string) (TemperatureDifference, error) {
 func (d Quantity) TemperatureDifference() (TemperatureDifference, error) {
 	v, err := d.as(&typeTemperatureDifference)
 	return TemperatureDifference(v), err
-}
-
-// AppendTemperatureDifference appends q in the system's unit for TemperatureDifference to b.
-// It does not allocate when b has room.
-func (s *System) AppendTemperatureDifference(b []byte, q TemperatureDifference) []byte {
-	return appendIn(b, float64(q), s.unit(s.TemperatureDifference, &typeTemperatureDifference, metricTemperatureDifference), s.digits())
-}
-
-// FormatTemperatureDifference formats q in the system's unit for TemperatureDifference.
-func (s *System) FormatTemperatureDifference(q TemperatureDifference) string {
-	var buf [40]byte
-	return string(s.AppendTemperatureDifference(buf[:0], q))
 }
 
 // KinematicViscosity is a kinematic viscosity in square metres per second (m²/s); oils are quoted in mm²/s (cSt).
@@ -1879,7 +1705,8 @@ func (q KinematicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm²/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q KinematicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricKinematicViscosity], &typeKinematicViscosity)
 }
@@ -1887,7 +1714,7 @@ func (q KinematicViscosity) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseKinematicViscosity accepts.
 func (q *KinematicViscosity) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeKinematicViscosity)
+	v, err := parseTyped("units.KinematicViscosity.UnmarshalText", string(text), &typeKinematicViscosity)
 	if err != nil {
 		return err
 	}
@@ -1899,7 +1726,7 @@ func (q *KinematicViscosity) UnmarshalText(text []byte) error {
 // then a unit of kinematic viscosity such as mm²/s, cSt, m²/s, St (see the package doc
 // for the grammar and every spelling).
 func ParseKinematicViscosity(s string) (KinematicViscosity, error) {
-	v, err := parseTyped("ParseKinematicViscosity", s, &typeKinematicViscosity)
+	v, err := parseTyped("units.ParseKinematicViscosity", s, &typeKinematicViscosity)
 	return KinematicViscosity(v), err
 }
 
@@ -1908,18 +1735,6 @@ func ParseKinematicViscosity(s string) (KinematicViscosity, error) {
 func (d Quantity) KinematicViscosity() (KinematicViscosity, error) {
 	v, err := d.as(&typeKinematicViscosity)
 	return KinematicViscosity(v), err
-}
-
-// AppendKinematicViscosity appends q in the system's unit for KinematicViscosity to b.
-// It does not allocate when b has room.
-func (s *System) AppendKinematicViscosity(b []byte, q KinematicViscosity) []byte {
-	return appendIn(b, float64(q), s.unit(s.KinematicViscosity, &typeKinematicViscosity, metricKinematicViscosity), s.digits())
-}
-
-// FormatKinematicViscosity formats q in the system's unit for KinematicViscosity.
-func (s *System) FormatKinematicViscosity(q KinematicViscosity) string {
-	var buf [40]byte
-	return string(s.AppendKinematicViscosity(buf[:0], q))
 }
 
 // DynamicViscosity is an absolute (dynamic) viscosity in pascal seconds (Pa·s).
@@ -1986,7 +1801,8 @@ func (q DynamicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mPa·s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q DynamicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDynamicViscosity], &typeDynamicViscosity)
 }
@@ -1994,7 +1810,7 @@ func (q DynamicViscosity) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseDynamicViscosity accepts.
 func (q *DynamicViscosity) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeDynamicViscosity)
+	v, err := parseTyped("units.DynamicViscosity.UnmarshalText", string(text), &typeDynamicViscosity)
 	if err != nil {
 		return err
 	}
@@ -2006,7 +1822,7 @@ func (q *DynamicViscosity) UnmarshalText(text []byte) error {
 // then a unit of dynamic viscosity such as mPa·s, cP, Pa·s, P (see the package doc
 // for the grammar and every spelling).
 func ParseDynamicViscosity(s string) (DynamicViscosity, error) {
-	v, err := parseTyped("ParseDynamicViscosity", s, &typeDynamicViscosity)
+	v, err := parseTyped("units.ParseDynamicViscosity", s, &typeDynamicViscosity)
 	return DynamicViscosity(v), err
 }
 
@@ -2015,18 +1831,6 @@ func ParseDynamicViscosity(s string) (DynamicViscosity, error) {
 func (d Quantity) DynamicViscosity() (DynamicViscosity, error) {
 	v, err := d.as(&typeDynamicViscosity)
 	return DynamicViscosity(v), err
-}
-
-// AppendDynamicViscosity appends q in the system's unit for DynamicViscosity to b.
-// It does not allocate when b has room.
-func (s *System) AppendDynamicViscosity(b []byte, q DynamicViscosity) []byte {
-	return appendIn(b, float64(q), s.unit(s.DynamicViscosity, &typeDynamicViscosity, metricDynamicViscosity), s.digits())
-}
-
-// FormatDynamicViscosity formats q in the system's unit for DynamicViscosity.
-func (s *System) FormatDynamicViscosity(q DynamicViscosity) string {
-	var buf [40]byte
-	return string(s.AppendDynamicViscosity(buf[:0], q))
 }
 
 // Density is a mass density in kilograms per cubic metre (kg/m³).
@@ -2098,7 +1902,8 @@ func (q Density) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg/m³ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Density) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDensity], &typeDensity)
 }
@@ -2106,7 +1911,7 @@ func (q Density) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseDensity accepts.
 func (q *Density) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeDensity)
+	v, err := parseTyped("units.Density.UnmarshalText", string(text), &typeDensity)
 	if err != nil {
 		return err
 	}
@@ -2118,7 +1923,7 @@ func (q *Density) UnmarshalText(text []byte) error {
 // then a unit of density such as kg/m³, lbm/ft³, g/cm³, kg/L (see the package doc
 // for the grammar and every spelling).
 func ParseDensity(s string) (Density, error) {
-	v, err := parseTyped("ParseDensity", s, &typeDensity)
+	v, err := parseTyped("units.ParseDensity", s, &typeDensity)
 	return Density(v), err
 }
 
@@ -2127,18 +1932,6 @@ func ParseDensity(s string) (Density, error) {
 func (d Quantity) Density() (Density, error) {
 	v, err := d.as(&typeDensity)
 	return Density(v), err
-}
-
-// AppendDensity appends q in the system's unit for Density to b.
-// It does not allocate when b has room.
-func (s *System) AppendDensity(b []byte, q Density) []byte {
-	return appendIn(b, float64(q), s.unit(s.Density, &typeDensity, metricDensity), s.digits())
-}
-
-// FormatDensity formats q in the system's unit for Density.
-func (s *System) FormatDensity(q Density) string {
-	var buf [40]byte
-	return string(s.AppendDensity(buf[:0], q))
 }
 
 // SpecificHeatCapacity is a specific heat capacity in joules per kilogram kelvin (J/(kg·K)).
@@ -2208,7 +2001,8 @@ func (q SpecificHeatCapacity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ/(kg·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q SpecificHeatCapacity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricSpecificHeatCapacity], &typeSpecificHeatCapacity)
 }
@@ -2216,7 +2010,7 @@ func (q SpecificHeatCapacity) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseSpecificHeatCapacity accepts.
 func (q *SpecificHeatCapacity) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeSpecificHeatCapacity)
+	v, err := parseTyped("units.SpecificHeatCapacity.UnmarshalText", string(text), &typeSpecificHeatCapacity)
 	if err != nil {
 		return err
 	}
@@ -2228,7 +2022,7 @@ func (q *SpecificHeatCapacity) UnmarshalText(text []byte) error {
 // then a unit of specific heat capacity such as kJ/(kg·K), BTU/(lbm·°F), J/(kg·K) (see the package doc
 // for the grammar and every spelling).
 func ParseSpecificHeatCapacity(s string) (SpecificHeatCapacity, error) {
-	v, err := parseTyped("ParseSpecificHeatCapacity", s, &typeSpecificHeatCapacity)
+	v, err := parseTyped("units.ParseSpecificHeatCapacity", s, &typeSpecificHeatCapacity)
 	return SpecificHeatCapacity(v), err
 }
 
@@ -2237,18 +2031,6 @@ func ParseSpecificHeatCapacity(s string) (SpecificHeatCapacity, error) {
 func (d Quantity) SpecificHeatCapacity() (SpecificHeatCapacity, error) {
 	v, err := d.as(&typeSpecificHeatCapacity)
 	return SpecificHeatCapacity(v), err
-}
-
-// AppendSpecificHeatCapacity appends q in the system's unit for SpecificHeatCapacity to b.
-// It does not allocate when b has room.
-func (s *System) AppendSpecificHeatCapacity(b []byte, q SpecificHeatCapacity) []byte {
-	return appendIn(b, float64(q), s.unit(s.SpecificHeatCapacity, &typeSpecificHeatCapacity, metricSpecificHeatCapacity), s.digits())
-}
-
-// FormatSpecificHeatCapacity formats q in the system's unit for SpecificHeatCapacity.
-func (s *System) FormatSpecificHeatCapacity(q SpecificHeatCapacity) string {
-	var buf [40]byte
-	return string(s.AppendSpecificHeatCapacity(buf[:0], q))
 }
 
 // HeatTransferCoefficient is a surface heat transfer coefficient in watts per square metre kelvin (W/(m²·K)): reservoir walls, coolers.
@@ -2311,7 +2093,8 @@ func (q HeatTransferCoefficient) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m²·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q HeatTransferCoefficient) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricHeatTransferCoefficient], &typeHeatTransferCoefficient)
 }
@@ -2319,7 +2102,7 @@ func (q HeatTransferCoefficient) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseHeatTransferCoefficient accepts.
 func (q *HeatTransferCoefficient) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeHeatTransferCoefficient)
+	v, err := parseTyped("units.HeatTransferCoefficient.UnmarshalText", string(text), &typeHeatTransferCoefficient)
 	if err != nil {
 		return err
 	}
@@ -2331,7 +2114,7 @@ func (q *HeatTransferCoefficient) UnmarshalText(text []byte) error {
 // then a unit of heat transfer coefficient such as W/(m²·K), BTU/(h·ft²·°F) (see the package doc
 // for the grammar and every spelling).
 func ParseHeatTransferCoefficient(s string) (HeatTransferCoefficient, error) {
-	v, err := parseTyped("ParseHeatTransferCoefficient", s, &typeHeatTransferCoefficient)
+	v, err := parseTyped("units.ParseHeatTransferCoefficient", s, &typeHeatTransferCoefficient)
 	return HeatTransferCoefficient(v), err
 }
 
@@ -2340,18 +2123,6 @@ func ParseHeatTransferCoefficient(s string) (HeatTransferCoefficient, error) {
 func (d Quantity) HeatTransferCoefficient() (HeatTransferCoefficient, error) {
 	v, err := d.as(&typeHeatTransferCoefficient)
 	return HeatTransferCoefficient(v), err
-}
-
-// AppendHeatTransferCoefficient appends q in the system's unit for HeatTransferCoefficient to b.
-// It does not allocate when b has room.
-func (s *System) AppendHeatTransferCoefficient(b []byte, q HeatTransferCoefficient) []byte {
-	return appendIn(b, float64(q), s.unit(s.HeatTransferCoefficient, &typeHeatTransferCoefficient, metricHeatTransferCoefficient), s.digits())
-}
-
-// FormatHeatTransferCoefficient formats q in the system's unit for HeatTransferCoefficient.
-func (s *System) FormatHeatTransferCoefficient(q HeatTransferCoefficient) string {
-	var buf [40]byte
-	return string(s.AppendHeatTransferCoefficient(buf[:0], q))
 }
 
 // ThermalConductivity is a thermal conductivity in watts per metre kelvin (W/(m·K)).
@@ -2412,7 +2183,8 @@ func (q ThermalConductivity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q ThermalConductivity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricThermalConductivity], &typeThermalConductivity)
 }
@@ -2420,7 +2192,7 @@ func (q ThermalConductivity) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseThermalConductivity accepts.
 func (q *ThermalConductivity) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeThermalConductivity)
+	v, err := parseTyped("units.ThermalConductivity.UnmarshalText", string(text), &typeThermalConductivity)
 	if err != nil {
 		return err
 	}
@@ -2432,7 +2204,7 @@ func (q *ThermalConductivity) UnmarshalText(text []byte) error {
 // then a unit of thermal conductivity such as W/(m·K), BTU/(h·ft·°F) (see the package doc
 // for the grammar and every spelling).
 func ParseThermalConductivity(s string) (ThermalConductivity, error) {
-	v, err := parseTyped("ParseThermalConductivity", s, &typeThermalConductivity)
+	v, err := parseTyped("units.ParseThermalConductivity", s, &typeThermalConductivity)
 	return ThermalConductivity(v), err
 }
 
@@ -2441,18 +2213,6 @@ func ParseThermalConductivity(s string) (ThermalConductivity, error) {
 func (d Quantity) ThermalConductivity() (ThermalConductivity, error) {
 	v, err := d.as(&typeThermalConductivity)
 	return ThermalConductivity(v), err
-}
-
-// AppendThermalConductivity appends q in the system's unit for ThermalConductivity to b.
-// It does not allocate when b has room.
-func (s *System) AppendThermalConductivity(b []byte, q ThermalConductivity) []byte {
-	return appendIn(b, float64(q), s.unit(s.ThermalConductivity, &typeThermalConductivity, metricThermalConductivity), s.digits())
-}
-
-// FormatThermalConductivity formats q in the system's unit for ThermalConductivity.
-func (s *System) FormatThermalConductivity(q ThermalConductivity) string {
-	var buf [40]byte
-	return string(s.AppendThermalConductivity(buf[:0], q))
 }
 
 // Stiffness is a spring rate in newtons per metre (N/m): the hydraulic stiffness of a cylinder's oil columns.
@@ -2519,7 +2279,8 @@ func (q Stiffness) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN/mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Stiffness) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricStiffness], &typeStiffness)
 }
@@ -2527,7 +2288,7 @@ func (q Stiffness) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseStiffness accepts.
 func (q *Stiffness) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeStiffness)
+	v, err := parseTyped("units.Stiffness.UnmarshalText", string(text), &typeStiffness)
 	if err != nil {
 		return err
 	}
@@ -2539,7 +2300,7 @@ func (q *Stiffness) UnmarshalText(text []byte) error {
 // then a unit of stiffness such as kN/mm, lbf/in, N/m, N/mm (see the package doc
 // for the grammar and every spelling).
 func ParseStiffness(s string) (Stiffness, error) {
-	v, err := parseTyped("ParseStiffness", s, &typeStiffness)
+	v, err := parseTyped("units.ParseStiffness", s, &typeStiffness)
 	return Stiffness(v), err
 }
 
@@ -2548,18 +2309,6 @@ func ParseStiffness(s string) (Stiffness, error) {
 func (d Quantity) Stiffness() (Stiffness, error) {
 	v, err := d.as(&typeStiffness)
 	return Stiffness(v), err
-}
-
-// AppendStiffness appends q in the system's unit for Stiffness to b.
-// It does not allocate when b has room.
-func (s *System) AppendStiffness(b []byte, q Stiffness) []byte {
-	return appendIn(b, float64(q), s.unit(s.Stiffness, &typeStiffness, metricStiffness), s.digits())
-}
-
-// FormatStiffness formats q in the system's unit for Stiffness.
-func (s *System) FormatStiffness(q Stiffness) string {
-	var buf [40]byte
-	return string(s.AppendStiffness(buf[:0], q))
 }
 
 // Frequency is a frequency in hertz (Hz, 1/s): natural frequencies, supply frequency, cycle rates.
@@ -2616,7 +2365,8 @@ func (q Frequency) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in Hz when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Frequency) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFrequency], &typeFrequency)
 }
@@ -2624,7 +2374,7 @@ func (q Frequency) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseFrequency accepts.
 func (q *Frequency) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeFrequency)
+	v, err := parseTyped("units.Frequency.UnmarshalText", string(text), &typeFrequency)
 	if err != nil {
 		return err
 	}
@@ -2636,7 +2386,7 @@ func (q *Frequency) UnmarshalText(text []byte) error {
 // then a unit of frequency such as Hz, cpm (see the package doc
 // for the grammar and every spelling).
 func ParseFrequency(s string) (Frequency, error) {
-	v, err := parseTyped("ParseFrequency", s, &typeFrequency)
+	v, err := parseTyped("units.ParseFrequency", s, &typeFrequency)
 	return Frequency(v), err
 }
 
@@ -2645,18 +2395,6 @@ func ParseFrequency(s string) (Frequency, error) {
 func (d Quantity) Frequency() (Frequency, error) {
 	v, err := d.as(&typeFrequency)
 	return Frequency(v), err
-}
-
-// AppendFrequency appends q in the system's unit for Frequency to b.
-// It does not allocate when b has room.
-func (s *System) AppendFrequency(b []byte, q Frequency) []byte {
-	return appendIn(b, float64(q), s.unit(s.Frequency, &typeFrequency, metricFrequency), s.digits())
-}
-
-// FormatFrequency formats q in the system's unit for Frequency.
-func (s *System) FormatFrequency(q Frequency) string {
-	var buf [40]byte
-	return string(s.AppendFrequency(buf[:0], q))
 }
 
 // Acceleration is an acceleration in metres per second squared (m/s²).
@@ -2718,7 +2456,8 @@ func (q Acceleration) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Acceleration) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAcceleration], &typeAcceleration)
 }
@@ -2726,7 +2465,7 @@ func (q Acceleration) MarshalText() ([]byte, error) {
 // UnmarshalText implements encoding.TextUnmarshaler. It accepts any text
 // that ParseAcceleration accepts.
 func (q *Acceleration) UnmarshalText(text []byte) error {
-	v, err := parseTyped("UnmarshalText", string(text), &typeAcceleration)
+	v, err := parseTyped("units.Acceleration.UnmarshalText", string(text), &typeAcceleration)
 	if err != nil {
 		return err
 	}
@@ -2738,7 +2477,7 @@ func (q *Acceleration) UnmarshalText(text []byte) error {
 // then a unit of acceleration such as m/s², ft/s², g₀ (see the package doc
 // for the grammar and every spelling).
 func ParseAcceleration(s string) (Acceleration, error) {
-	v, err := parseTyped("ParseAcceleration", s, &typeAcceleration)
+	v, err := parseTyped("units.ParseAcceleration", s, &typeAcceleration)
 	return Acceleration(v), err
 }
 
@@ -2747,398 +2486,4 @@ func ParseAcceleration(s string) (Acceleration, error) {
 func (d Quantity) Acceleration() (Acceleration, error) {
 	v, err := d.as(&typeAcceleration)
 	return Acceleration(v), err
-}
-
-// AppendAcceleration appends q in the system's unit for Acceleration to b.
-// It does not allocate when b has room.
-func (s *System) AppendAcceleration(b []byte, q Acceleration) []byte {
-	return appendIn(b, float64(q), s.unit(s.Acceleration, &typeAcceleration, metricAcceleration), s.digits())
-}
-
-// FormatAcceleration formats q in the system's unit for Acceleration.
-func (s *System) FormatAcceleration(q Acceleration) string {
-	var buf [40]byte
-	return string(s.AppendAcceleration(buf[:0], q))
-}
-
-// System is a presentation system: for each quantity type, the spelling of
-// the unit that reports use. Copy Metric or USCustomary and change the fields
-// you need; an empty or unknown field falls back to the metric unit (Check
-// reports such fields).
-type System struct {
-	Name                    string // a label, e.g. "metric"
-	Digits                  int    // significant digits; 0 means 4
-	Length                  string
-	Area                    string
-	Volume                  string
-	Mass                    string
-	Force                   string
-	Pressure                string
-	AbsolutePressure        string
-	Flow                    string
-	Velocity                string
-	Displacement            string
-	RotationalSpeed         string
-	Torque                  string
-	Power                   string
-	Energy                  string
-	Temperature             string
-	TemperatureDifference   string
-	KinematicViscosity      string
-	DynamicViscosity        string
-	Density                 string
-	SpecificHeatCapacity    string
-	HeatTransferCoefficient string
-	ThermalConductivity     string
-	Stiffness               string
-	Frequency               string
-	Acceleration            string
-}
-
-// Metric is the metric trade system: bar, L/min, kN, mm, cm³/rev, kW, °C, mm²/s.
-var Metric = System{Name: "metric", Digits: 4,
-	Length:                  "mm",
-	Area:                    "cm²",
-	Volume:                  "L",
-	Mass:                    "kg",
-	Force:                   "kN",
-	Pressure:                "bar",
-	AbsolutePressure:        "bara",
-	Flow:                    "L/min",
-	Velocity:                "m/s",
-	Displacement:            "cm³/rev",
-	RotationalSpeed:         "rpm",
-	Torque:                  "N·m",
-	Power:                   "kW",
-	Energy:                  "kJ",
-	Temperature:             "°C",
-	TemperatureDifference:   "K",
-	KinematicViscosity:      "mm²/s",
-	DynamicViscosity:        "mPa·s",
-	Density:                 "kg/m³",
-	SpecificHeatCapacity:    "kJ/(kg·K)",
-	HeatTransferCoefficient: "W/(m²·K)",
-	ThermalConductivity:     "W/(m·K)",
-	Stiffness:               "kN/mm",
-	Frequency:               "Hz",
-	Acceleration:            "m/s²",
-}
-
-// USCustomary is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
-var USCustomary = System{Name: "US customary", Digits: 4,
-	Length:                  "in",
-	Area:                    "in²",
-	Volume:                  "gal",
-	Mass:                    "lbm",
-	Force:                   "lbf",
-	Pressure:                "psi",
-	AbsolutePressure:        "psia",
-	Flow:                    "gpm",
-	Velocity:                "ft/s",
-	Displacement:            "in³/rev",
-	RotationalSpeed:         "rpm",
-	Torque:                  "lbf·ft",
-	Power:                   "hp",
-	Energy:                  "BTU",
-	Temperature:             "°F",
-	TemperatureDifference:   "°F",
-	KinematicViscosity:      "cSt",
-	DynamicViscosity:        "cP",
-	Density:                 "lbm/ft³",
-	SpecificHeatCapacity:    "BTU/(lbm·°F)",
-	HeatTransferCoefficient: "BTU/(h·ft²·°F)",
-	ThermalConductivity:     "BTU/(h·ft·°F)",
-	Stiffness:               "lbf/in",
-	Frequency:               "Hz",
-	Acceleration:            "ft/s²",
-}
-
-// Check reports the first field of s whose unit is unknown or of the wrong
-// dimension or reference.
-func (s *System) Check() error {
-	if err := s.checkField("Length", s.Length, &typeLength); err != nil {
-		return err
-	}
-	if err := s.checkField("Area", s.Area, &typeArea); err != nil {
-		return err
-	}
-	if err := s.checkField("Volume", s.Volume, &typeVolume); err != nil {
-		return err
-	}
-	if err := s.checkField("Mass", s.Mass, &typeMass); err != nil {
-		return err
-	}
-	if err := s.checkField("Force", s.Force, &typeForce); err != nil {
-		return err
-	}
-	if err := s.checkField("Pressure", s.Pressure, &typePressure); err != nil {
-		return err
-	}
-	if err := s.checkField("AbsolutePressure", s.AbsolutePressure, &typeAbsolutePressure); err != nil {
-		return err
-	}
-	if err := s.checkField("Flow", s.Flow, &typeFlow); err != nil {
-		return err
-	}
-	if err := s.checkField("Velocity", s.Velocity, &typeVelocity); err != nil {
-		return err
-	}
-	if err := s.checkField("Displacement", s.Displacement, &typeDisplacement); err != nil {
-		return err
-	}
-	if err := s.checkField("RotationalSpeed", s.RotationalSpeed, &typeRotationalSpeed); err != nil {
-		return err
-	}
-	if err := s.checkField("Torque", s.Torque, &typeTorque); err != nil {
-		return err
-	}
-	if err := s.checkField("Power", s.Power, &typePower); err != nil {
-		return err
-	}
-	if err := s.checkField("Energy", s.Energy, &typeEnergy); err != nil {
-		return err
-	}
-	if err := s.checkField("Temperature", s.Temperature, &typeTemperature); err != nil {
-		return err
-	}
-	if err := s.checkField("TemperatureDifference", s.TemperatureDifference, &typeTemperatureDifference); err != nil {
-		return err
-	}
-	if err := s.checkField("KinematicViscosity", s.KinematicViscosity, &typeKinematicViscosity); err != nil {
-		return err
-	}
-	if err := s.checkField("DynamicViscosity", s.DynamicViscosity, &typeDynamicViscosity); err != nil {
-		return err
-	}
-	if err := s.checkField("Density", s.Density, &typeDensity); err != nil {
-		return err
-	}
-	if err := s.checkField("SpecificHeatCapacity", s.SpecificHeatCapacity, &typeSpecificHeatCapacity); err != nil {
-		return err
-	}
-	if err := s.checkField("HeatTransferCoefficient", s.HeatTransferCoefficient, &typeHeatTransferCoefficient); err != nil {
-		return err
-	}
-	if err := s.checkField("ThermalConductivity", s.ThermalConductivity, &typeThermalConductivity); err != nil {
-		return err
-	}
-	if err := s.checkField("Stiffness", s.Stiffness, &typeStiffness); err != nil {
-		return err
-	}
-	if err := s.checkField("Frequency", s.Frequency, &typeFrequency); err != nil {
-		return err
-	}
-	if err := s.checkField("Acceleration", s.Acceleration, &typeAcceleration); err != nil {
-		return err
-	}
-	return nil
-}
-
-// Type descriptions used by parsing and conversion.
-var (
-	typeLength                  = typeInfo{name: "Length", kind: "length", dim: dim(1, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "mm, in, m, cm"}
-	typeArea                    = typeInfo{name: "Area", kind: "area", dim: dim(2, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "cm², in², m², mm²"}
-	typeVolume                  = typeInfo{name: "Volume", kind: "volume", dim: dim(3, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "L, gal, m³, mL"}
-	typeMass                    = typeInfo{name: "Mass", kind: "mass", dim: dim(0, 1, 0, 0, 0), accept: refNone, useOffset: false, examples: "kg, lbm, g, t"}
-	typeForce                   = typeInfo{name: "Force", kind: "force", dim: dim(1, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kN, lbf, N, kgf"}
-	typePressure                = typeInfo{name: "Pressure", kind: "pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refGauge, useOffset: false, examples: "bar, psi, Pa, kPa"}
-	typeAbsolutePressure        = typeInfo{name: "AbsolutePressure", kind: "absolute pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refAbsolute, useOffset: false, hasMin: true, min: 0, minText: "≥ 0 Pa (absolute vacuum)", examples: "bara, psia, Pa(a), kPa(a)"}
-	typeFlow                    = typeInfo{name: "Flow", kind: "volume flow", dim: dim(3, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "L/min, gpm, m³/s, L/s"}
-	typeVelocity                = typeInfo{name: "Velocity", kind: "velocity", dim: dim(1, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "m/s, ft/s, mm/s, in/s"}
-	typeDisplacement            = typeInfo{name: "Displacement", kind: "displacement", dim: dim(3, 0, 0, 0, -1), accept: refNone, useOffset: false, examples: "cm³/rev, in³/rev, m³/rev"}
-	typeRotationalSpeed         = typeInfo{name: "RotationalSpeed", kind: "rotational speed", dim: dim(0, 0, -1, 0, 1), accept: refNone, useOffset: false, examples: "rpm, rev/s, rad/s"}
-	typeTorque                  = typeInfo{name: "Torque", kind: "torque", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "N·m, lbf·ft, kN·m, lbf·in"}
-	typePower                   = typeInfo{name: "Power", kind: "power", dim: dim(2, 1, -3, 0, 0), accept: refNone, useOffset: false, examples: "kW, hp, W, PS"}
-	typeEnergy                  = typeInfo{name: "Energy", kind: "energy", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kJ, BTU, J, MJ"}
-	typeTemperature             = typeInfo{name: "Temperature", kind: "temperature", dim: dim(0, 0, 0, 1, 0), accept: refPoint, useOffset: true, hasMin: true, min: 0, minText: "≥ 0 K (absolute zero)", examples: "°C, °F, K, °R"}
-	typeTemperatureDifference   = typeInfo{name: "TemperatureDifference", kind: "temperature difference", dim: dim(0, 0, 0, 1, 0), accept: refNone | refPoint, useOffset: false, examples: "K, °F, ΔK, Δ°C"}
-	typeKinematicViscosity      = typeInfo{name: "KinematicViscosity", kind: "kinematic viscosity", dim: dim(2, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "mm²/s, cSt, m²/s, St"}
-	typeDynamicViscosity        = typeInfo{name: "DynamicViscosity", kind: "dynamic viscosity", dim: dim(-1, 1, -1, 0, 0), accept: refNone, useOffset: false, examples: "mPa·s, cP, Pa·s, P"}
-	typeDensity                 = typeInfo{name: "Density", kind: "density", dim: dim(-3, 1, 0, 0, 0), accept: refNone, useOffset: false, examples: "kg/m³, lbm/ft³, g/cm³, kg/L"}
-	typeSpecificHeatCapacity    = typeInfo{name: "SpecificHeatCapacity", kind: "specific heat capacity", dim: dim(2, 0, -2, -1, 0), accept: refNone, useOffset: false, examples: "kJ/(kg·K), BTU/(lbm·°F), J/(kg·K)"}
-	typeHeatTransferCoefficient = typeInfo{name: "HeatTransferCoefficient", kind: "heat transfer coefficient", dim: dim(0, 1, -3, -1, 0), accept: refNone, useOffset: false, examples: "W/(m²·K), BTU/(h·ft²·°F)"}
-	typeThermalConductivity     = typeInfo{name: "ThermalConductivity", kind: "thermal conductivity", dim: dim(1, 1, -3, -1, 0), accept: refNone, useOffset: false, examples: "W/(m·K), BTU/(h·ft·°F)"}
-	typeStiffness               = typeInfo{name: "Stiffness", kind: "stiffness", dim: dim(0, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kN/mm, lbf/in, N/m, N/mm"}
-	typeFrequency               = typeInfo{name: "Frequency", kind: "frequency", dim: dim(0, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "Hz, cpm"}
-	typeAcceleration            = typeInfo{name: "Acceleration", kind: "acceleration", dim: dim(1, 0, -2, 0, 0), accept: refNone, useOffset: false, examples: "m/s², ft/s², g₀"}
-)
-
-// allTypes lists every quantity type, in declaration order.
-var allTypes = [...]*typeInfo{
-	&typeLength,
-	&typeArea,
-	&typeVolume,
-	&typeMass,
-	&typeForce,
-	&typePressure,
-	&typeAbsolutePressure,
-	&typeFlow,
-	&typeVelocity,
-	&typeDisplacement,
-	&typeRotationalSpeed,
-	&typeTorque,
-	&typePower,
-	&typeEnergy,
-	&typeTemperature,
-	&typeTemperatureDifference,
-	&typeKinematicViscosity,
-	&typeDynamicViscosity,
-	&typeDensity,
-	&typeSpecificHeatCapacity,
-	&typeHeatTransferCoefficient,
-	&typeThermalConductivity,
-	&typeStiffness,
-	&typeFrequency,
-	&typeAcceleration,
-}
-
-// Indices into unitTable of each type's metric unit.
-const (
-	metricLength                  = 1
-	metricArea                    = 8
-	metricVolume                  = 12
-	metricMass                    = 18
-	metricForce                   = 23
-	metricPressure                = 30
-	metricAbsolutePressure        = 39
-	metricFlow                    = 43
-	metricVelocity                = 48
-	metricDisplacement            = 54
-	metricRotationalSpeed         = 57
-	metricTorque                  = 59
-	metricPower                   = 64
-	metricEnergy                  = 69
-	metricTemperature             = 75
-	metricTemperatureDifference   = 77
-	metricKinematicViscosity      = 84
-	metricDynamicViscosity        = 88
-	metricDensity                 = 91
-	metricSpecificHeatCapacity    = 97
-	metricHeatTransferCoefficient = 99
-	metricThermalConductivity     = 101
-	metricStiffness               = 105
-	metricFrequency               = 107
-	metricAcceleration            = 109
-)
-
-// unitTable lists every unit: canonical symbol, factor to SI, offset, dimension, reference.
-var unitTable = [...]unitDef{
-	{sym: "m", factor: 1, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"metre", "meter"}},
-	{sym: "mm", factor: 1e-3, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "cm", factor: 1e-2, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "µm", factor: 1e-6, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"μm", "um", "micron"}},
-	{sym: "in", factor: inchM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"inch", "inches"}},
-	{sym: "ft", factor: footM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"foot", "feet"}},
-	{sym: "m²", factor: 1, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"m2", "m^2", "sq m"}},
-	{sym: "mm²", factor: 1e-6, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"mm2", "mm^2", "sq mm"}},
-	{sym: "cm²", factor: 1e-4, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"cm2", "cm^2", "sq cm"}},
-	{sym: "in²", factor: inchM * inchM, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"in2", "in^2", "sq in"}},
-	{sym: "ft²", factor: footM * footM, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"ft2", "ft^2", "sq ft"}},
-	{sym: "m³", factor: 1, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3", "m^3", "cu m"}},
-	{sym: "L", factor: 1e-3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"l", "litre", "liter", "dm³", "dm3"}},
-	{sym: "mL", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"ml"}},
-	{sym: "cm³", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"cm3", "cm^3", "cc", "ccm"}},
-	{sym: "in³", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"in3", "in^3", "cu in", "cuin", "cid"}},
-	{sym: "gal", factor: usGallonM3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"US gal", "USgal", "usgal", "gal(US)"}},
-	{sym: "UK gal", factor: ukGallonM3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"UKgal", "imp gal", "gal(UK)"}},
-	{sym: "kg", factor: 1, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "g", factor: 1e-3, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "t", factor: 1e3, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"tonne"}},
-	{sym: "lbm", factor: lbmKg, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"lb"}},
-	{sym: "N", factor: 1, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kN", factor: 1e3, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "lbf", factor: lbfN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kgf", factor: kgfN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"kp"}},
-	{sym: "Pa", factor: 1, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kPa", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "MPa", factor: 1e6, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"N/mm²", "N/mm2"}},
-	{sym: "GPa", factor: 1e9, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "bar", factor: barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"barg", "bar(g)", "bar g"}},
-	{sym: "mbar", factor: 1e-3 * barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "psi", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}},
-	{sym: "ksi", factor: 1e3 * psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kgf/cm²", factor: kgfN * 1e4, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"kgf/cm2", "at"}},
-	{sym: "inHg", factor: inHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"in Hg", "\"Hg"}},
-	{sym: "Pa(a)", factor: 1, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"Pa abs"}},
-	{sym: "kPa(a)", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"kPaa", "kPa abs"}},
-	{sym: "MPa(a)", factor: 1e6, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"MPa abs"}},
-	{sym: "bara", factor: barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"bar(a)", "bar a", "bar abs"}},
-	{sym: "psia", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"psi(a)", "psi abs"}},
-	{sym: "atm", factor: atmPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{}},
-	{sym: "m³/s", factor: 1, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3/s", "m^3/s"}},
-	{sym: "L/min", factor: 1e-3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"l/min", "lpm", "LPM"}},
-	{sym: "L/s", factor: 1e-3, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"l/s"}},
-	{sym: "m³/h", factor: 1.0 / hourS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3/h", "m^3/h"}},
-	{sym: "gpm", factor: usGallonM3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"GPM", "US gpm", "gal/min"}},
-	{sym: "in³/s", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"in3/s", "in^3/s"}},
-	{sym: "m/s", factor: 1, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "mm/s", factor: 1e-3, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "ft/s", factor: footM, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"fps"}},
-	{sym: "in/s", factor: inchM, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"ips"}},
-	{sym: "ft/min", factor: footM / minuteS, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"fpm"}},
-	{sym: "m³/rev", factor: 1, offset: 0, dim: dim(3, 0, 0, 0, -1), ref: refNone, noReg: false, aliases: []string{"m3/rev", "m^3/rev"}},
-	{sym: "cm³/rev", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, -1), ref: refNone, noReg: false, aliases: []string{"cm3/rev", "cm^3/rev", "cc/rev", "ccm/rev", "mL/rev", "ml/rev"}},
-	{sym: "in³/rev", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, 0, 0, -1), ref: refNone, noReg: false, aliases: []string{"in3/rev", "in^3/rev", "cir", "cu in/rev"}},
-	{sym: "rev/s", factor: 1, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{"rps", "r/s"}},
-	{sym: "rpm", factor: 1.0 / minuteS, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "1/min"}},
-	{sym: "rad/s", factor: 1 / revRad, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "N·m", factor: 1, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"Nm", "N*m", "N.m", "N m", "N-m", "N⋅m"}},
-	{sym: "kN·m", factor: 1e3, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"kNm", "kN*m", "kN.m", "kN m"}},
-	{sym: "lbf·ft", factor: lbfN * footM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft"}},
-	{sym: "lbf·in", factor: lbfN * inchM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin"}},
-	{sym: "W", factor: 1, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kW", factor: 1e3, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "hp", factor: hpW, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{"HP"}},
-	{sym: "PS", factor: metricHpW, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{"CV", "hp(M)"}},
-	{sym: "BTU/h", factor: btuJ / hourS, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{"Btu/h", "BTU/hr", "Btu/hr", "BTUH"}},
-	{sym: "J", factor: 1, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kJ", factor: 1e3, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "MJ", factor: 1e6, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kWh", factor: 1e3 * hourS, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"kW·h", "kW*h", "kW h"}},
-	{sym: "BTU", factor: btuJ, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"Btu", "btu"}},
-	{sym: "K", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"kelvin"}},
-	{sym: "°R", factor: fahrenheitK, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degR", "R"}},
-	{sym: "°C", factor: 1, offset: celsiusZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degC", "℃", "C", "deg C", "celsius"}},
-	{sym: "°F", factor: fahrenheitK, offset: fahrenheitZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit"}},
-	{sym: "K", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},
-	{sym: "°C", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},
-	{sym: "°F", factor: fahrenheitK, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},
-	{sym: "ΔK", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: false, aliases: []string{"delta K", "deltaK"}},
-	{sym: "Δ°C", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: false, aliases: []string{"delta degC", "deltaC", "ΔC", "delta C"}},
-	{sym: "Δ°F", factor: fahrenheitK, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: false, aliases: []string{"delta degF", "deltaF", "ΔF", "delta F"}},
-	{sym: "m²/s", factor: 1, offset: 0, dim: dim(2, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"m2/s", "m^2/s"}},
-	{sym: "mm²/s", factor: 1e-6, offset: 0, dim: dim(2, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"mm2/s", "mm^2/s"}},
-	{sym: "cSt", factor: 1e-6, offset: 0, dim: dim(2, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"cst", "CST"}},
-	{sym: "St", factor: 1e-4, offset: 0, dim: dim(2, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "Pa·s", factor: 1, offset: 0, dim: dim(-1, 1, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"Pa*s", "Pa.s", "Pa s", "Pas"}},
-	{sym: "mPa·s", factor: 1e-3, offset: 0, dim: dim(-1, 1, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"mPa*s", "mPa.s", "mPa s", "mPas"}},
-	{sym: "cP", factor: 1e-3, offset: 0, dim: dim(-1, 1, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"cp", "cps"}},
-	{sym: "P", factor: 1e-1, offset: 0, dim: dim(-1, 1, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kg/m³", factor: 1, offset: 0, dim: dim(-3, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"kg/m3", "kg/m^3"}},
-	{sym: "g/cm³", factor: 1e3, offset: 0, dim: dim(-3, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"g/cm3", "g/cc", "g/mL", "g/ml"}},
-	{sym: "kg/L", factor: 1e3, offset: 0, dim: dim(-3, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"kg/l"}},
-	{sym: "lbm/ft³", factor: lbmKg / (footM * footM * footM), offset: 0, dim: dim(-3, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbm/ft3", "lb/ft³", "lb/ft3", "pcf"}},
-	{sym: "lbm/gal", factor: lbmKg / usGallonM3, offset: 0, dim: dim(-3, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"lb/gal", "ppg"}},
-	{sym: "J/(kg·K)", factor: 1, offset: 0, dim: dim(2, 0, -2, -1, 0), ref: refNone, noReg: false, aliases: []string{"J/kg/K", "J/(kg*K)", "J/kgK"}},
-	{sym: "kJ/(kg·K)", factor: 1e3, offset: 0, dim: dim(2, 0, -2, -1, 0), ref: refNone, noReg: false, aliases: []string{"kJ/kg/K", "kJ/(kg*K)", "kJ/kgK"}},
-	{sym: "BTU/(lbm·°F)", factor: btuJ / (lbmKg * fahrenheitK), offset: 0, dim: dim(2, 0, -2, -1, 0), ref: refNone, noReg: false, aliases: []string{"BTU/(lbm*°F)", "BTU/lbm/°F", "Btu/(lb·°F)", "Btu/lb/F", "BTU/lb/F"}},
-	{sym: "W/(m²·K)", factor: 1, offset: 0, dim: dim(0, 1, -3, -1, 0), ref: refNone, noReg: false, aliases: []string{"W/m²/K", "W/(m2*K)", "W/m2/K", "W/m2K", "W/(m^2*K)"}},
-	{sym: "BTU/(h·ft²·°F)", factor: btuJ / (hourS * footM * footM * fahrenheitK), offset: 0, dim: dim(0, 1, -3, -1, 0), ref: refNone, noReg: false, aliases: []string{"BTU/(h*ft2*F)", "Btu/(h·ft²·°F)", "BTU/h/ft2/F"}},
-	{sym: "W/(m·K)", factor: 1, offset: 0, dim: dim(1, 1, -3, -1, 0), ref: refNone, noReg: false, aliases: []string{"W/m/K", "W/(m*K)", "W/mK"}},
-	{sym: "BTU/(h·ft·°F)", factor: btuJ / (hourS * footM * fahrenheitK), offset: 0, dim: dim(1, 1, -3, -1, 0), ref: refNone, noReg: false, aliases: []string{"BTU/(h*ft*F)", "Btu/(h·ft·°F)", "BTU/h/ft/F"}},
-	{sym: "N/m", factor: 1, offset: 0, dim: dim(0, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "N/mm", factor: 1e3, offset: 0, dim: dim(0, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kN/mm", factor: 1e6, offset: 0, dim: dim(0, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "lbf/in", factor: lbfN / inchM, offset: 0, dim: dim(0, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lb/in"}},
-	{sym: "Hz", factor: 1, offset: 0, dim: dim(0, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"1/s", "s⁻¹", "s^-1"}},
-	{sym: "cpm", factor: 1.0 / minuteS, offset: 0, dim: dim(0, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"cycles/min"}},
-	{sym: "m/s²", factor: 1, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"m/s2", "m/s^2"}},
-	{sym: "g₀", factor: gravity, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"gn"}},
-	{sym: "ft/s²", factor: footM, offset: 0, dim: dim(1, 0, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"ft/s2", "ft/s^2"}},
-	{sym: "s", factor: 1, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{"sec"}},
-	{sym: "ms", factor: 1e-3, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "min", factor: minuteS, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "h", factor: hourS, offset: 0, dim: dim(0, 0, 1, 0, 0), ref: refNone, noReg: false, aliases: []string{"hr"}},
-	{sym: "rev", factor: 1, offset: 0, dim: dim(0, 0, 0, 0, 1), ref: refNone, noReg: false, aliases: []string{"r", "revolution"}},
-	{sym: "rad", factor: 1 / revRad, offset: 0, dim: dim(0, 0, 0, 0, 1), ref: refNone, noReg: false, aliases: []string{}},
 }

@@ -3,6 +3,8 @@ package units
 import (
 	"math"
 	"strconv"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
 )
 
 // Quantity is a value with a run-time dimension, for units that arrive as
@@ -21,41 +23,31 @@ type Quantity struct {
 }
 
 // Parse reads a number followed by a unit expression, such as "1.3 gal/min",
-// "750 in^3/rev", "12 kW/(m²·K)" or "55 barg".
-//
-// Grammar: optional spaces, a decimal number ([+-] digits [. digits]
-// [e [+-] digits]; no hex, underscores, NaN or Inf), optional spaces, then a
-// unit expression:
-//
-//	expr    = product { "/" product }
-//	product = power { ("*" | "·" | "⋅" | "." | "-" | space) power }
-//	power   = primary [ "^" [+-] digits | superscript digits | digits ]
-//	primary = "(" expr ")" | "1" | registered unit name
-//
-// Everything after the first "/" at one level divides, as engineers read
-// W/m²·K. A lone registered spelling keeps its meaning: °C and °F are points
-// on their scales, psia and bara absolute, psi and bar gauge. Inside a longer
+// "750 in^3/rev", "12 kW/(m²·K)" or "55 barg", by the grammar in the package
+// documentation (under Parsing), where every spelling is listed. A lone
+// registered spelling keeps its meaning: °C and °F are points on their
+// scales, psia and bara absolute, psi and bar gauge; inside a longer
 // expression, temperature units count as intervals (BTU/(lbm·°F)).
-// Every spelling is listed in the package documentation.
 func Parse(s string) (Quantity, error) {
+	const fn = "units.Parse"
 	in := trimRight(s)
 	num, at, f := splitNumber(in)
 	if f.err != nil {
-		return Quantity{}, f.at("Parse", s, 0)
+		return Quantity{}, f.at(fn, s, 0)
 	}
 	if at == len(in) {
-		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: at, Err: ErrSyntax, Detail: "missing unit"}
+		return Quantity{}, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax, Detail: "missing unit"}
 	}
 	r, f := resolveUnit(in[at:])
 	if f.err != nil {
-		return Quantity{}, f.at("Parse", s, at)
+		return Quantity{}, f.at(fn, s, at)
 	}
 	q := quantityOf(num, r)
 	if math.IsInf(q.value, 0) || math.IsNaN(q.value) {
-		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: 0, Err: ErrRange, Detail: "value is not finite"}
+		return Quantity{}, &ParseError{Func: fn, Input: s, Pos: 0, Err: ErrRange, Detail: "value is not finite"}
 	}
 	if t := belowZero(q.value, r.ref); t != nil {
-		return Quantity{}, &ParseError{Func: "Parse", Input: s, Pos: at, Err: ErrRange, Detail: "want " + t.kind + " " + t.minText}
+		return Quantity{}, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrRange, Detail: "want " + t.kind + " " + t.minText}
 	}
 	return q, nil
 }
@@ -100,9 +92,10 @@ func (q Quantity) String() string {
 // temperature below absolute zero or an absolute pressure below vacuum is
 // ErrRange.
 func (q Quantity) In(unit string) (float64, error) {
-	v, bound, err := q.in("Quantity.In", unit)
+	const fn = "units.Quantity.In"
+	v, bound, err := q.in(fn, unit)
 	if bound != nil {
-		return 0, &RangeError{Func: "units.Quantity.In", Param: "q", Value: q.String(), Valid: bound.kind + " " + bound.minText}
+		return 0, &RangeError{Func: fn, Param: "q", Value: q.String(), Valid: bound.valid()}
 	}
 	return v, err
 }
@@ -117,24 +110,25 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 		return 0, nil, &ParseError{Func: fn, Input: unit, Pos: f.pos, Err: f.err, Detail: f.detail}
 	}
 	if r.dim != q.dim {
-		return 0, nil, &ConversionError{From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
+		return 0, nil, &ConversionError{Func: fn, From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
+	}
+	switch {
+	case q.ref|r.ref == refGauge|refAbsolute:
+		return 0, nil, &ConversionError{Func: fn, From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
+	case q.ref == refNone && r.ref == refPoint:
+		return 0, nil, &ConversionError{Func: fn, From: "temperature difference", To: "temperature " + unit, Err: ErrReference}
 	}
 	if t := belowZero(q.value, q.ref|r.ref); t != nil {
 		return 0, t, nil
 	}
 	v := q.value
-	switch {
-	case q.ref == refPoint && r.ref == refPoint:
+	if q.ref == refPoint && r.ref == refPoint {
 		v = convertScale(q.reading, q.scale, scaleOf(r))
-	case q.ref|r.ref == refGauge|refAbsolute:
-		return 0, nil, &ConversionError{From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
-	case q.ref == refNone && r.ref == refPoint:
-		return 0, nil, &ConversionError{From: "temperature difference", To: "temperature " + unit, Err: ErrReference}
-	default:
+	} else {
 		v = (v - q.offset) / r.factor
 	}
 	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return 0, nil, &ConversionError{From: q.String(), To: unit, Err: ErrRange}
+		return 0, nil, &ConversionError{Func: fn, From: q.String(), To: unit, Err: ErrRange}
 	}
 	return v, nil, nil
 }
@@ -149,17 +143,17 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 // absolute zero or an absolute pressure below vacuum, given or asked for, is
 // ErrRange.
 func Convert(value float64, from, to string) (float64, error) {
-	if math.IsInf(value, 0) || math.IsNaN(value) {
-		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64), Valid: "finite"}
+	const fn = "units.Convert"
+	if err := validate.Finite(fn, "value", value); err != nil {
+		return 0, err
 	}
 	r, f := resolveUnit(trimRight(from))
 	if f.err != nil {
-		return 0, &ParseError{Func: "Convert", Input: from, Pos: f.pos, Err: f.err, Detail: f.detail}
+		return 0, &ParseError{Func: fn, Input: from, Pos: f.pos, Err: f.err, Detail: f.detail}
 	}
-	v, bound, err := quantityOf(value, r).in("Convert", to)
+	v, bound, err := quantityOf(value, r).in(fn, to)
 	if bound != nil {
-		return 0, &RangeError{Func: "units.Convert", Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from,
-			Valid: bound.kind + " " + bound.minText}
+		return 0, &RangeError{Func: fn, Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from, Valid: bound.valid()}
 	}
 	return v, err
 }
@@ -189,13 +183,14 @@ func refName(r reference) string {
 	return "difference"
 }
 
-// as converts q to the SI value of type t.
+// as converts q to the SI value of type t, for the method Quantity.<t.name>.
 func (q Quantity) as(t *typeInfo) (float64, error) {
+	fn := "units.Quantity." + t.name
 	if q.dim != t.dim {
-		return 0, &ConversionError{From: q.dim.String() + " (" + dimName(q.dim) + ")", To: t.name + " (" + t.dim.String() + ")", Err: ErrDimension}
+		return 0, &ConversionError{Func: fn, From: q.dim.String() + " (" + dimName(q.dim) + ")", To: t.name + " (" + t.dim.String() + ")", Err: ErrDimension}
 	}
 	if q.ref&t.accept == 0 {
-		return 0, &ConversionError{From: refName(q.ref), To: t.name, Err: ErrReference}
+		return 0, &ConversionError{Func: fn, From: refName(q.ref), To: t.name, Err: ErrReference}
 	}
 	v := q.value
 	if !t.useOffset {
@@ -203,7 +198,7 @@ func (q Quantity) as(t *typeInfo) (float64, error) {
 	}
 	v, f := checkValue(v, t)
 	if f.err != nil {
-		return 0, &RangeError{Func: "units.Quantity." + t.name, Param: "q", Value: q.String(), Valid: f.detail}
+		return 0, &RangeError{Func: fn, Param: "q", Value: q.String(), Valid: t.valid()}
 	}
 	return v, nil
 }

@@ -2,6 +2,7 @@ package units
 
 import (
 	"errors"
+	"strconv"
 	"strings"
 	"testing"
 )
@@ -63,5 +64,21 @@ func TestEditDistance(t *testing.T) {
 		if got := editDistance(c.a, c.b); got != c.want {
 			t.Errorf("editDistance(%q, %q) = %d, want %d", c.a, c.b, got, c.want)
 		}
+	}
+}
+
+// BenchmarkParseUnknownUnit measures the error path for an unknown unit,
+// whose message suggests the nearest spellings. Its cost grows with the
+// length of the unknown word times the size of the registry (see the
+// report on nearestSpellings): untrusted text should be bounded in length.
+func BenchmarkParseUnknownUnit(b *testing.B) {
+	for _, n := range []int{8, 1000} {
+		s := "55 " + strings.Repeat("x", n)
+		b.Run(strconv.Itoa(n)+"_letters", func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				sinkPressure, sinkErr = ParsePressure(s)
+			}
+		})
 	}
 }

@@ -1,0 +1,339 @@
+package units
+
+// The unit expression parser: a unit that is not one registered spelling is
+// read as an expression of registered names (the grammar is in the package
+// documentation, under Parsing).
+
+import (
+	"math"
+	"strings"
+	"unicode/utf8"
+)
+
+// resolved is a unit expression reduced to SI: factor, offset, dimension and
+// the reference of a lone pressure or temperature spelling.
+type resolved struct {
+	factor float64
+	offset float64
+	dim    Dimension
+	ref    reference
+}
+
+// maxDepth bounds parenthesis nesting in unit expressions.
+const maxDepth = 16
+
+// maxExp bounds the magnitude of any dimension exponent.
+const maxExp = 24
+
+// resolveUnit reduces a unit expression. A whole registered spelling keeps
+// its offset and reference; anything else is parsed as an expression of
+// registered units, in which temperatures count as intervals. On failure it
+// returns the byte offset within u and the sentinel, with detail text.
+func resolveUnit(u string) (resolved, failure) {
+	if i, ok := spellings[u]; ok {
+		d := &unitTable[i]
+		return resolved{d.factor, d.offset, d.dim, d.ref}, failure{}
+	}
+	p := exprParser{s: u}
+	f, dm, err := p.expr(0)
+	if err == nil && p.i < len(p.s) {
+		err = p.fail(ErrSyntax, "unexpected "+quoteRune(p.s, p.i))
+	}
+	if err != nil {
+		return resolved{}, failure{pos: p.errPos, err: err, detail: p.detail, word: p.word}
+	}
+	if f == 0 || math.IsInf(f, 0) || math.IsNaN(f) {
+		return resolved{}, failure{err: ErrRange, detail: "unit factor is not a finite non-zero number"}
+	}
+	return resolved{factor: f, dim: dm, ref: refNone}, failure{}
+}
+
+// exprParser is a recursive-descent parser for unit expressions, one method
+// per production of the grammar in the package documentation (expr,
+// product, power, primary). It allocates nothing unless it fails.
+type exprParser struct {
+	s      string
+	i      int
+	errPos int
+	detail string
+	word   string // an unknown name, when the parse failed on one
+}
+
+func (p *exprParser) fail(err error, detail string) error {
+	p.errPos, p.detail = p.i, detail
+	return err
+}
+
+// expr parses a quotient. Following the way engineers write W/m²·K, every
+// factor after the first "/" at one parenthesis level is in the denominator.
+func (p *exprParser) expr(depth int) (float64, Dimension, error) {
+	f, d, err := p.product(depth)
+	if err != nil {
+		return 0, d, err
+	}
+	for p.skipSpace(); p.i < len(p.s) && p.s[p.i] == '/'; p.skipSpace() {
+		p.i++
+		p.skipSpace()
+		g, e, err := p.product(depth)
+		if err != nil {
+			return 0, d, err
+		}
+		f /= g
+		if d, err = p.combine(d, e, -1); err != nil {
+			return 0, d, err
+		}
+	}
+	return f, d, nil
+}
+
+func (p *exprParser) product(depth int) (float64, Dimension, error) {
+	f, d, err := p.power(depth)
+	if err != nil {
+		return 0, d, err
+	}
+	for {
+		save := p.i
+		if !p.multiplySign() {
+			p.i = save
+			return f, d, nil
+		}
+		g, e, err := p.power(depth)
+		if err != nil {
+			return 0, d, err
+		}
+		f *= g
+		if d, err = p.combine(d, e, 1); err != nil {
+			return 0, d, err
+		}
+	}
+}
+
+// multiplySign consumes a multiplication sign, or the spaces that stand for
+// one, and reports whether another factor follows.
+func (p *exprParser) multiplySign() bool {
+	spaces := p.skipSpace()
+	if p.i >= len(p.s) {
+		return false
+	}
+	switch {
+	case p.s[p.i] == '*' || p.s[p.i] == '.':
+		p.i++
+	case strings.HasPrefix(p.s[p.i:], "·"), strings.HasPrefix(p.s[p.i:], "⋅"):
+		_, n := utf8.DecodeRuneInString(p.s[p.i:])
+		p.i += n
+	case p.s[p.i] == '-' && p.i+1 < len(p.s) && isNameStart(p.s[p.i+1:]):
+		p.i++
+	case spaces > 0 && (isNameStart(p.s[p.i:]) || p.s[p.i] == '('):
+		return true
+	default:
+		return false
+	}
+	p.skipSpace()
+	return true
+}
+
+func (p *exprParser) combine(d, e Dimension, sign int8) (Dimension, error) {
+	for k := range d.e {
+		n := int(d.e[k]) + int(sign)*int(e.e[k])
+		if n > maxExp || n < -maxExp {
+			return d, p.fail(ErrRange, "dimension exponent too large")
+		}
+		d.e[k] = int8(n)
+	}
+	return d, nil
+}
+
+func (p *exprParser) power(depth int) (float64, Dimension, error) {
+	f, d, err := p.primary(depth)
+	if err != nil {
+		return 0, d, err
+	}
+	n, ok, err := p.exponent()
+	if err != nil || !ok {
+		return f, d, err
+	}
+	for k := range d.e {
+		m := int(d.e[k]) * n
+		if m > maxExp || m < -maxExp {
+			return 0, d, p.fail(ErrRange, "dimension exponent too large")
+		}
+		d.e[k] = int8(m)
+	}
+	return math.Pow(f, float64(n)), d, nil
+}
+
+var superscripts = map[rune]int{'⁰': 0, '¹': 1, '²': 2, '³': 3, '⁴': 4, '⁵': 5, '⁶': 6, '⁷': 7, '⁸': 8, '⁹': 9}
+
+// exponent reads "^n", "^-n", superscript digits (with ⁻), or plain digits
+// written straight after a name (in3, mm2). It reports whether one was there.
+func (p *exprParser) exponent() (int, bool, error) {
+	if p.i >= len(p.s) {
+		return 0, false, nil
+	}
+	if p.s[p.i] == '^' {
+		p.i++
+		neg := false
+		if p.i < len(p.s) && (p.s[p.i] == '-' || p.s[p.i] == '+') {
+			neg = p.s[p.i] == '-'
+			p.i++
+		}
+		n, ok := p.digits()
+		if !ok {
+			return 0, false, p.fail(ErrSyntax, "want an integer exponent after ^")
+		}
+		if n > maxExp {
+			return 0, false, p.fail(ErrRange, "exponent too large")
+		}
+		if neg {
+			n = -n
+		}
+		return n, true, nil
+	}
+	if c := p.s[p.i]; c >= '0' && c <= '9' {
+		n, _ := p.digits()
+		if n > maxExp {
+			return 0, false, p.fail(ErrRange, "exponent too large")
+		}
+		return n, true, nil
+	}
+	neg := false
+	if strings.HasPrefix(p.s[p.i:], "⁻") {
+		neg = true
+		p.i += len("⁻")
+	}
+	n, found := 0, false
+	for p.i < len(p.s) {
+		r, size := utf8.DecodeRuneInString(p.s[p.i:])
+		v, ok := superscripts[r]
+		if !ok {
+			break
+		}
+		n, found = n*10+v, true
+		p.i += size
+		if n > maxExp {
+			return 0, false, p.fail(ErrRange, "exponent too large")
+		}
+	}
+	if !found {
+		if neg {
+			return 0, false, p.fail(ErrSyntax, "want superscript digits after ⁻")
+		}
+		return 0, false, nil
+	}
+	if neg {
+		n = -n
+	}
+	return n, true, nil
+}
+
+func (p *exprParser) digits() (int, bool) {
+	n, start := 0, p.i
+	for p.i < len(p.s) && p.s[p.i] >= '0' && p.s[p.i] <= '9' {
+		n = n*10 + int(p.s[p.i]-'0')
+		p.i++
+		if n > maxExp {
+			n = maxExp + 1 // caught by the exponent range check
+		}
+	}
+	return n, p.i > start
+}
+
+func (p *exprParser) primary(depth int) (float64, Dimension, error) {
+	if p.i >= len(p.s) {
+		return 0, Dimension{}, p.fail(ErrSyntax, "missing unit")
+	}
+	switch c := p.s[p.i]; {
+	case c == '(':
+		if depth >= maxDepth {
+			return 0, Dimension{}, p.fail(ErrSyntax, "parentheses nested too deeply")
+		}
+		p.i++
+		p.skipSpace()
+		f, d, err := p.expr(depth + 1)
+		if err != nil {
+			return 0, d, err
+		}
+		p.skipSpace()
+		if p.i >= len(p.s) || p.s[p.i] != ')' {
+			return 0, d, p.fail(ErrSyntax, "missing )")
+		}
+		p.i++
+		return f, d, nil
+	case c == '1' && (p.i+1 == len(p.s) || p.s[p.i+1] < '0' || p.s[p.i+1] > '9'):
+		p.i++
+		return 1, Dimension{}, nil
+	}
+	return p.name()
+}
+
+// name reads a registered unit name: a run of letters, °, µ, Δ and ℃-like
+// signs. A following space and name are joined when the pair is registered
+// (US gal, cu in, delta degC).
+func (p *exprParser) name() (float64, Dimension, error) {
+	start := p.i
+	p.i += nameLen(p.s[p.i:])
+	if p.i == start {
+		return 0, Dimension{}, p.fail(ErrSyntax, "unexpected "+quoteRune(p.s, p.i))
+	}
+	word := p.s[start:p.i]
+	if j := p.i; j < len(p.s) && p.s[j] == ' ' {
+		if n := nameLen(p.s[j+1:]); n > 0 {
+			if _, ok := spellings[p.s[start:j+1+n]]; ok {
+				p.i = j + 1 + n
+				word = p.s[start:p.i]
+			}
+		}
+	}
+	k, ok := spellings[word]
+	if !ok {
+		p.i = start
+		p.word = word
+		return 0, Dimension{}, p.fail(ErrUnknownUnit, unknownDetail(word, nil))
+	}
+	return unitTable[k].factor, unitTable[k].dim, nil
+}
+
+// nameLen returns the length of the unit name at the start of s.
+func nameLen(s string) int {
+	n := 0
+	for n < len(s) {
+		r, size := utf8.DecodeRuneInString(s[n:])
+		if !isNameRune(r) {
+			break
+		}
+		n += size
+	}
+	return n
+}
+
+func isNameStart(s string) bool {
+	r, _ := utf8.DecodeRuneInString(s)
+	return isNameRune(r)
+}
+
+func isNameRune(r rune) bool {
+	switch {
+	case r >= 'a' && r <= 'z', r >= 'A' && r <= 'Z':
+		return true
+	case r == '°', r == 'µ', r == 'μ', r == 'Δ', r == '℃', r == '℉', r == '₀', r == '"', r == 'Ω':
+		return true
+	}
+	return false
+}
+
+func (p *exprParser) skipSpace() int {
+	n := 0
+	for p.i < len(p.s) && p.s[p.i] == ' ' {
+		p.i++
+		n++
+	}
+	return n
+}
+
+func quoteRune(s string, i int) string {
+	if i >= len(s) {
+		return "end of text"
+	}
+	r, _ := utf8.DecodeRuneInString(s[i:])
+	return "'" + string(r) + "'"
+}
