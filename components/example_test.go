@@ -25,8 +25,9 @@ func ExampleFinding_Text() {
 	f := components.NewFinding(components.Danger, components.StoredEnergy, "demo.accumulator",
 		components.StandardRule("ISO 4413:2010"),
 		"the accumulator holds %v after shutdown; vent it or isolate it automatically", 180*units.Bar)
-	fmt.Println(f.Text(&units.Metric))
-	fmt.Println(f.Text(&units.USCustomary))
+	metric, us := units.Metric(), units.USCustomary()
+	fmt.Println(f.Text(&metric))
+	fmt.Println(f.Text(&us))
 	fmt.Println(f.Severity, f.Hazard, f.Rule)
 	// Output:
 	// the accumulator holds 180 bar after shutdown; vent it or isolate it automatically

@@ -114,7 +114,7 @@ func NewFinding(sev Severity, hz Hazard, topic string, rule Rule, format string,
 func (f Finding) Args() []any { return slices.Clone(f.args) }
 
 // Text writes the sentence with every quantity in the units of sys
-// (units.Metric, units.USCustomary, or a caller's own system); a nil sys
+// (units.Metric(), units.USCustomary(), or a caller's own system); a nil sys
 // means metric.
 func (f Finding) Text(sys *units.System) string {
 	if sys == nil {

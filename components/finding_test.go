@@ -13,16 +13,17 @@ func TestFindingText(t *testing.T) {
 	f := NewFinding(Warning, Cavitation, "pump.inlet", StandardRule("ISO 4413:2010"),
 		"the inlet sees %v against a minimum of %v", units.AbsolutePressure(72000), units.AbsolutePressure(80000))
 	// 72 000 Pa = 0.72 bar = 10.44 psi (psi = 6894.757 Pa, NIST SP 811).
-	if got, want := f.Text(&units.Metric), "the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
+	metric, us := units.Metric(), units.USCustomary()
+	if got, want := f.Text(&metric), "the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
 		t.Errorf("metric text = %q; want %q", got, want)
 	}
-	if got, want := f.Text(&units.USCustomary), "the inlet sees 10.44 psia against a minimum of 11.6 psia"; got != want {
+	if got, want := f.Text(&us), "the inlet sees 10.44 psia against a minimum of 11.6 psia"; got != want {
 		t.Errorf("US text = %q; want %q", got, want)
 	}
 	if got, want := f.String(), "warning (cavitation): the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
 		t.Errorf("String = %q; want %q", got, want)
 	}
-	if got := f.Text(nil); got != f.Text(&units.Metric) {
+	if got := f.Text(nil); got != f.Text(&metric) {
 		t.Errorf("nil system = %q; want the metric text", got)
 	}
 }
@@ -33,7 +34,8 @@ func TestFindingArgsCopied(t *testing.T) {
 	args[0] = units.Pressure(2e5)
 	a := f.Args()
 	a[0] = units.Pressure(3e5)
-	if got := f.Text(&units.Metric); got != "1 bar" {
+	metric := units.Metric()
+	if got := f.Text(&metric); got != "1 bar" {
 		t.Errorf("Text = %q after changing the caller's slices; want 1 bar", got)
 	}
 }

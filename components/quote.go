@@ -7,7 +7,7 @@ import (
 )
 
 // metric is the metric trade system findings are written in by default.
-func metric() *units.System { return &units.Metric }
+func metric() *units.System { s := units.Metric(); return &s }
 
 // quote formats a finding's value: a typed quantity in the units of sys,
 // anything else with fmt's %v.

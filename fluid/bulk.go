@@ -7,14 +7,6 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// Pressure limits for the property models: from −1 bar gauge (a suction line
-// near vacuum) to 2000 bar, beyond hydraulic service and beyond the typical
-// data the models are fitted to. Our choice, not a standard's.
-const (
-	minModelPressure = -1 * units.Bar
-	maxModelPressure = 2000 * units.Bar
-)
-
 // BulkKind selects a bulk modulus: tangent (local slope, K = −V·dp/dV) or
 // secant (average from atmospheric, K̄ = −p·V₀/(V − V₀)), isothermal (slow
 // compression) or isentropic (fast: pressure waves, valve and pump
@@ -63,17 +55,20 @@ type BulkModel struct {
 	Gamma float64        // c_p/c_v, isentropic over isothermal
 }
 
-func (m BulkModel) validate(fn string) error {
-	if err := validate.Positive(fn, "Bulk.K0", m.K0); err != nil {
+// validate checks the model's fields, naming each as prefix+field: "K0"
+// when the model is the caller's argument, "Bulk.K0" when it is a fluid's
+// or a data sheet's field.
+func (m BulkModel) validate(fn, prefix string) error {
+	if err := validate.Positive(fn, prefix+"K0", m.K0); err != nil {
 		return err
 	}
-	if err := validate.InRange(fn, "Bulk.M", m.M, 0.1, 30); err != nil {
+	if err := validate.InRange(fn, prefix+"M", m.M, minBulkM, maxBulkM); err != nil {
 		return err
 	}
-	if err := validate.InRange(fn, "Bulk.C", m.C, 0, 0.05); err != nil {
+	if err := validate.InRange(fn, prefix+"C", m.C, 0, maxBulkC); err != nil {
 		return err
 	}
-	return validate.InRange(fn, "Bulk.Gamma", m.Gamma, 1, 2)
+	return validate.InRange(fn, prefix+"Gamma", m.Gamma, minBulkGamma, maxBulkGamma)
 }
 
 // k0 is the isothermal tangent modulus at 0 bar gauge and t, in Pa.
@@ -88,12 +83,18 @@ func (m BulkModel) k0(t units.Temperature) float64 {
 //	tangent: K = K₀(t) + M·p
 //	secant:  K̄ = p / (1 − (1 + M·p/K₀(t))^(−1/M))   (→ K₀(t) as p → 0)
 //
-// times Gamma for the isentropic forms.
+// times Gamma for the isentropic forms. Errors name the model's own fields
+// (K0, M, C, Gamma) or the arguments.
 func (m BulkModel) Modulus(kind BulkKind, t units.Temperature, p units.Pressure) (units.Pressure, error) {
 	const fn = "fluid.BulkModel.Modulus"
-	if err := m.validate(fn); err != nil {
+	if err := m.validate(fn, ""); err != nil {
 		return 0, err
 	}
+	return m.modulus(fn, kind, t, p)
+}
+
+// modulus is Modulus for a checked model.
+func (m BulkModel) modulus(fn string, kind BulkKind, t units.Temperature, p units.Pressure) (units.Pressure, error) {
 	if err := checkPropertyInputs(fn, t, p); err != nil {
 		return 0, err
 	}
@@ -114,7 +115,7 @@ func (m BulkModel) Modulus(kind BulkKind, t units.Temperature, p units.Pressure)
 	if kind >= IsentropicTangent {
 		k *= m.Gamma
 	}
-	if err := validate.Result(fn, "K", k); err != nil {
+	if err := validate.PositiveResult(fn, "K", k); err != nil {
 		return 0, err
 	}
 	return units.Pressure(k), nil
@@ -179,7 +180,8 @@ type EffectiveBulk struct {
 // tenths of a percent of air lower Bₑ sharply at low pressure; the effect
 // fades with pressure as the air shrinks and dissolves (dissolution is not
 // modelled). Compressed oil and air store energy: release pressure before
-// opening a circuit (ISO 4413).
+// opening a circuit (ISO 4413). A result that under- or overflows (a
+// subnormal Liquid or Container modulus) is an error, never 0.
 func (e EffectiveBulk) At(p units.AbsolutePressure) (units.Pressure, error) {
 	const fn = "fluid.EffectiveBulk.At"
 	if err := validate.Positive(fn, "Liquid", e.Liquid); err != nil {
@@ -188,10 +190,10 @@ func (e EffectiveBulk) At(p units.AbsolutePressure) (units.Pressure, error) {
 	if err := validate.NonNegative(fn, "Container", e.Container); err != nil {
 		return 0, err
 	}
-	if err := validate.InRange(fn, "Air.Fraction", e.Air.Fraction, 0, 0.5); err != nil {
+	if err := validate.InRange(fn, "Air.Fraction", e.Air.Fraction, 0, maxAirFraction); err != nil {
 		return 0, err
 	}
-	if err := validate.InRange(fn, "p", p, 1000*units.PascalAbsolute, units.AbsolutePressure(maxModelPressure)); err != nil {
+	if err := validate.InRange(fn, "p", p, minEffectivePressure, units.AbsolutePressure(maxModelPressure)); err != nil {
 		return 0, err
 	}
 	inv := 1 / float64(e.Liquid)
@@ -199,13 +201,17 @@ func (e EffectiveBulk) At(p units.AbsolutePressure) (units.Pressure, error) {
 		inv += 1 / float64(e.Container)
 	}
 	if e.Air.Fraction > 0 {
-		if err := validate.InRange(fn, "Air.N", e.Air.N, 1, 1.4); err != nil {
+		if err := validate.InRange(fn, "Air.N", e.Air.N, minAirN, maxAirN); err != nil {
 			return 0, err
 		}
 		x := airShare(e.Air.Fraction, e.Air.N, float64(p))
 		inv += x / (e.Air.N * float64(p))
 	}
-	return units.Pressure(1 / inv), nil
+	b := units.Pressure(1 / inv)
+	if err := validate.PositiveResult(fn, "Bₑ", b); err != nil {
+		return 0, err
+	}
+	return b, nil
 }
 
 // airShare is V_a/V_t at absolute pressure p (Pa) for air fraction x0 at
@@ -231,7 +237,8 @@ func airShare(x0, n, p float64) float64 {
 // for thin steel walls, 5 % at r_o = 2r_i), which errs on the safe side for
 // stiffness.
 // Steel tube: E ≈ 206 GPa, ν ≈ 0.3 (typical, from memory). Hoses are far
-// softer: use the hose maker's volumetric expansion.
+// softer: use the hose maker's volumetric expansion. A result that
+// underflows to 0 (a subnormal e) is an error, never 0.
 func TubeBulkModulus(di, do units.Length, e units.Pressure, nu float64) (units.Pressure, error) {
 	const fn = "fluid.TubeBulkModulus"
 	if err := validate.Positive(fn, "di", di); err != nil {
@@ -243,12 +250,12 @@ func TubeBulkModulus(di, do units.Length, e units.Pressure, nu float64) (units.P
 	if err := validate.Positive(fn, "e", e); err != nil {
 		return 0, err
 	}
-	if err := validate.InRange(fn, "nu", nu, 0, 0.5); err != nil {
+	if err := validate.InRange(fn, "nu", nu, 0, maxPoisson); err != nil {
 		return 0, err
 	}
 	q := float64(di/do) * float64(di/do) // r_i²/r_o², in (0, 1): no under- or overflow
 	b := float64(e) / (2 * ((1+q)/(1-q) + nu))
-	if err := validate.Result(fn, "B", b); err != nil {
+	if err := validate.PositiveResult(fn, "B", b); err != nil {
 		return 0, err
 	}
 	return units.Pressure(b), nil

@@ -13,7 +13,10 @@ var testBulk = BulkModel{K0: 1500 * units.Megapascal, M: 10, C: 0.0055, Gamma: 1
 // against a central difference of the isothermal density at pressure.
 // Tolerance 1e-6: the difference quotient's truncation and round-off.
 func TestBulkTangentIsDefinition(t *testing.T) {
-	f := Fluid{Density15: 870, Expansion: 6.5e-4, Bulk: testBulk}
+	f, err := FromDataSheet(DataSheet{Class: HM, V40: mm2s(46), V100: mm2s(6.8), Density15: 870, Expansion: 6.5e-4, Bulk: testBulk})
+	if err != nil {
+		t.Fatal(err)
+	}
 	for _, tc := range []float64{0, 40, 90} {
 		for _, pb := range []float64{0, 50, 200, 400} {
 			tt, p := celsius(tc), units.Pressure(pb)*units.Bar
@@ -90,7 +93,7 @@ func TestBulkForms(t *testing.T) {
 		t.Errorf("modulus does not fall with temperature: %v at 80 °C", hot)
 	}
 	// Mineral oil typical preset, isentropic at 40 °C and 0 bar: 1.4–1.8 GPa
-	// (common practice, CHECKS.md).
+	// (common practice).
 	f, _ := Typical(HM, VG46)
 	k, _ := f.BulkModulus(IsentropicTangent, tt, 0)
 	if k < 1400*units.Megapascal || k > 1800*units.Megapascal {
@@ -135,7 +138,7 @@ func TestEffectiveBulkAir(t *testing.T) {
 		t.Errorf("container: %v, want %g", got, want)
 	}
 	// With 0.5 % air at 100 bar and a hose-like container, the result lies in
-	// the common-practice effective range 0.7–1.4 GPa (CHECKS.md).
+	// the common-practice effective range 0.7–1.4 GPa.
 	e.Air = EntrainedAir{0.005, 1.4}
 	got, _ := e.At((100 * units.Bar).Absolute(units.StandardAtmosphere))
 	if got < 700*units.Megapascal || got > 1400*units.Megapascal {
@@ -169,12 +172,13 @@ func TestBulkBadInput(t *testing.T) {
 	wantRangeError(t, err, "t")
 	_, err = testBulk.Modulus(BulkKind(9), tt, 0)
 	wantRangeError(t, err, "kind")
+	// A model called directly names its own fields.
 	_, err = BulkModel{}.Modulus(IsothermalTangent, tt, 0)
-	wantRangeError(t, err, "Bulk.K0")
+	wantRangeError(t, err, "K0")
 	bad := testBulk
 	bad.Gamma = math.NaN()
 	_, err = bad.Modulus(IsentropicTangent, tt, 0)
-	wantRangeError(t, err, "Bulk.Gamma")
+	wantRangeError(t, err, "Gamma")
 
 	ok := EffectiveBulk{Liquid: 1500 * units.Megapascal, Air: EntrainedAir{0.01, 1.4}}
 	p := 50 * units.BarAbsolute
@@ -189,21 +193,104 @@ func TestBulkBadInput(t *testing.T) {
 		{"Air.N", EffectiveBulk{Liquid: 1e9, Air: EntrainedAir{0.01, 2}}, p},
 		{"p", ok, 0},
 		{"p", ok, units.AbsolutePressure(math.NaN())},
+		// A subnormal modulus made 1/Bₑ overflow and Bₑ = 0 with a nil
+		// error: a result that must be > 0 and underflows is an error.
+		{"Bₑ", EffectiveBulk{Liquid: 5e-324}, p},
+		{"Bₑ", EffectiveBulk{Liquid: 1e9, Container: 5e-324}, p},
 	} {
-		_, err := c.e.At(c.p)
+		b, err := c.e.At(c.p)
 		wantRangeError(t, err, c.param)
+		if b != 0 {
+			t.Errorf("%+v.At(%v) = %v with an error, want 0", c.e, c.p, b)
+		}
 	}
 	for _, c := range []struct {
 		param  string
 		di, do units.Length
+		e      units.Pressure
 		nu     float64
 	}{
-		{"di", 0, 0.02, 0.3}, {"do", 0.02, 0.01, 0.3}, {"nu", 0.01, 0.02, 0.7},
+		{"di", 0, 0.02, 2e11, 0.3}, {"do", 0.02, 0.01, 2e11, 0.3}, {"nu", 0.01, 0.02, 2e11, 0.7},
+		{"e", 0.01, 0.02, 0, 0.3},
+		// A subnormal E gave B = 0 with a nil error.
+		{"B", 0.01, 0.02, 5e-324, 0.3},
 	} {
-		_, err := TubeBulkModulus(c.di, c.do, 2e11, c.nu)
+		b, err := TubeBulkModulus(c.di, c.do, c.e, c.nu)
 		wantRangeError(t, err, c.param)
+		if b != 0 {
+			t.Errorf("TubeBulkModulus = %v with an error, want 0", b)
+		}
 	}
 	if got := IsentropicSecant.String(); got != "isentropic secant" {
 		t.Errorf("String = %q", got)
+	}
+}
+
+// BulkModel.Modulus returned a negative tangent modulus (−4.97 bar) with a
+// nil error where the linear model K₀(t) + M·p passes through zero: a hot
+// fluid with a steep temperature coefficient (C = 0.05/K, 200 °C) under
+// suction (−1 bar gauge). The secant form and Fluid.Density returned NaN
+// there, caught only as "inputs too extreme". All three now refuse p with
+// the model's lower bound.
+func TestBulkModelBelowZeroModulus(t *testing.T) {
+	m := BulkModel{K0: 1.5 * units.Gigapascal, M: 10, C: 0.05, Gamma: 1.15}
+	hot := celsius(200)
+	for _, kind := range []BulkKind{IsothermalTangent, IsothermalSecant, IsentropicTangent, IsentropicSecant} {
+		k, err := m.Modulus(kind, hot, -1*units.Bar)
+		wantRangeError(t, err, "p")
+		if k != 0 {
+			t.Errorf("%v: K = %v with an error, want 0", kind, k)
+		}
+	}
+	f, err := FromDataSheet(DataSheet{Class: HM, V40: mm2s(46), V100: mm2s(6.8), Density15: 870, Bulk: m})
+	if err != nil {
+		t.Fatal(err)
+	}
+	rho, err := f.Density(hot, -1*units.Bar)
+	wantRangeError(t, err, "p")
+	if rho != 0 {
+		t.Errorf("ρ = %v with an error, want 0", rho)
+	}
+	// Just inside the model's bound the modulus is positive.
+	limit := -float64(m.K0) * math.Exp(-m.C*160) / m.M
+	k, err := m.Modulus(IsothermalTangent, hot, units.Pressure(0.99*limit))
+	if err != nil || !(k > 0) {
+		t.Errorf("inside the bound: K = %v, %v", k, err)
+	}
+}
+
+// TubeBulkModulus failed on diameters whose squares under- or overflow
+// (with an error naming the result, not an input), though B_c depends only
+// on the diameter ratio. It now uses the ratio: a wall far thicker than
+// the bore tends to the shear modulus E/(2(1 + ν)) (Lamé, r_o → ∞).
+func TestTubeBulkModulusRatio(t *testing.T) {
+	e := 206 * units.Gigapascal
+	ref, err := TubeBulkModulus(10*units.Millimetre, 20*units.Millimetre, e, 0.3)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// (r_o² + r_i²)/(r_o² − r_i²) = 5/3 at r_o = 2r_i.
+	if want := float64(e) / (2 * (5.0/3 + 0.3)); !near(float64(ref), want, 1e-15) {
+		t.Errorf("B_c = %v, want %g", ref, want)
+	}
+	tiny, err := TubeBulkModulus(1e-200, 2e-200, e, 0.3)
+	if err != nil || !near(float64(tiny), float64(ref), 1e-15) {
+		t.Errorf("scaled to 1e-200 m: %v, %v; want %v", tiny, err, ref)
+	}
+	thick, err := TubeBulkModulus(0.01, 1e300, e, 0.3)
+	if want := float64(e) / (2 * 1.3); err != nil || !near(float64(thick), want, 1e-15) {
+		t.Errorf("bore in an unbounded wall: %v, %v; want %g", thick, err, want)
+	}
+}
+
+// BulkModel.Modulus and TubeBulkModulus returned NaN beside their error;
+// a failed call now returns 0, as every other function does. (The
+// TubeBulkModulus input, diameters of 1e-200 m, no longer fails at all:
+// see TestTubeBulkModulusRatio.)
+func TestBulkNaNBesideError(t *testing.T) {
+	m := BulkModel{K0: 1, M: 10, C: 0, Gamma: 1.1} // 1 Pa: 1 + M·p/K₀ < 0 at −0.5 bar
+	k, err := m.Modulus(IsothermalSecant, celsius(40), -0.5*units.Bar)
+	if err == nil || k != 0 {
+		t.Errorf("Modulus = %v, %v; want 0 and an error", k, err)
 	}
 }

@@ -12,7 +12,24 @@
 // thousands of times a second. A Fluid
 // bundles a Curve with density, thermal and bulk-modulus data; presets give
 // typical values for the ISO 6743-4 families HM, HV, HFC, HFDU and HEES, and
-// FromDataSheet builds a Fluid from a supplier's figures.
+// FromDataSheet builds a Fluid from a supplier's figures. A Fluid's figures
+// are read through methods and change only by building it again from its
+// DataSheet, so they never contradict each other.
+//
+// SelectGrades picks the grades that keep a site's duty within a pump's
+// viscosity Window. Its results speak the vocabulary of package components:
+// each Candidate holds its two ends as components.Check values (the
+// viscosity against the window's limit, with the rule the limit comes from)
+// and carries components.Findings (a margin under MinTemperatureMargin, a
+// running viscosity outside the optimum band); Site.Findings gives the
+// cautions of the duty itself. Findings have a severity, a hazard kind and a
+// stable topic key (TopicColdMargin, …) a program can act on, and quote
+// their numbers as typed quantities, so they read in metric or US customary
+// units.
+//
+// The limits of every model (the D341 viscosity span, the temperature and
+// pressure range of the property models, the accepted ranges of a data
+// sheet) are gathered, with their sources, in limits.go.
 //
 // Typical values are typical: the supplier's data sheet for the actual fluid
 // governs. Where a correlation or value is recalled rather than read from the
@@ -26,8 +43,11 @@
 // practice.
 //
 // Every function validates its input and returns an error matching
-// units.ErrRange (with the parameter, the value and the valid range) for
-// non-finite, non-positive or out-of-range values; no function panics on
-// caller input or returns NaN or ±Inf. All functions are safe for concurrent
-// use.
+// units.ErrRange (a *units.RangeError with the function, the parameter or
+// field, the value and the valid range) for non-finite, non-positive or
+// out-of-range values; the package's own sentinels ErrNoGrade and
+// ErrNoPreset match units.ErrRange too. On error the result is the zero
+// value; no function panics on caller input or returns NaN or ±Inf, and a
+// result that must be positive but underflows to 0 is an error. All
+// functions are safe for concurrent use.
 package fluid

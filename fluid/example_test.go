@@ -4,6 +4,7 @@ import (
 	"errors"
 	"fmt"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/fluid"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -11,7 +12,8 @@ import (
 // An outdoor log loader starts at −20 °C and runs up to 70 °C. With the
 // common-practice window no HV grade spans the duty; the pump maker allows
 // 1600 mm²/s at a low-speed cold start, and with that limit VG 32 fits,
-// with a few kelvins of margin at either end.
+// with a few kelvins of margin at either end: too few at the cold end, so
+// the candidate carries a caution a report can show in either unit system.
 func ExampleSelectGrades() {
 	site := fluid.Site{
 		MinStart:   units.TemperatureFromCelsius(-20),
@@ -20,6 +22,7 @@ func ExampleSelectGrades() {
 	const vi = 160 // HV oil from the data sheet
 	_, err := fluid.SelectGrades(site, vi, fluid.DefaultWindow())
 	fmt.Println(errors.Is(err, fluid.ErrNoGrade))
+	fmt.Println(err)
 
 	w := fluid.DefaultWindow()
 	w.Max = 1600 * units.SquareMillimetrePerSecond // pump maker's cold-start limit
@@ -28,12 +31,23 @@ func ExampleSelectGrades() {
 		fmt.Println(err)
 		return
 	}
+	us := units.USCustomary()
 	for _, c := range cs {
-		fmt.Println(c.Reason)
+		fmt.Printf("%v: start %v (≤ %v), running %v (≥ %v)\n",
+			c.Grade, c.Start.Value, c.Start.Limit, c.Running.Value, c.Running.Limit)
+		for _, f := range c.Findings {
+			fmt.Println(f)
+			fmt.Println(f.Text(&us))
+		}
 	}
 	// Output:
 	// true
-	// VG 32: start 1259 mm²/s (max 1600 mm²/s, 2.6 K margin), running 11.52 mm²/s (min 10 mm²/s, 5.7 K margin); running viscosity below the optimum band (more leakage and wear)
+	// fluid.SelectGrades: no grade VG 10–150 of VI 160 stays in the viscosity window from -20 °C start to 70 °C running; the nearest, VG 32, misses the start by 2.567 K: no matching ISO 3448 viscosity grade
+	// VG 32: start 1259 mm²/s (≤ 1600 mm²/s), running 11.52 mm²/s (≥ 10 mm²/s)
+	// caution (cold start): The -20 °C start is only 2.567 K above the temperature at which VG 32 reaches the cold-start limit of 1600 mm²/s.
+	// The -4 °F start is only 4.62 °F above the temperature at which VG 32 reaches the cold-start limit of 1600 cSt.
+	// notice: At 70 °C running, VG 32 is at 11.52 mm²/s, below the optimum band of 16 mm²/s to 36 mm²/s: expect more leakage and wear.
+	// At 158 °F running, VG 32 is at 11.52 cSt, below the optimum band of 16 cSt to 36 cSt: expect more leakage and wear.
 }
 
 // A service beside a PLC reads the tank temperature and needs the oil's
@@ -159,16 +173,44 @@ func ExampleEffectiveBulk_At() {
 }
 
 // A log loader parked outdoors starts at −20 °C and its oil runs at 70 °C in
-// summer; the site's cautions go on the report beside the grade.
-func ExampleSite_Cautions() {
+// summer; the site's findings go on the report beside the grade, and a
+// program can act on their hazard kinds without reading the text.
+func ExampleSite_Findings() {
 	site := fluid.Site{
 		MinStart:   units.TemperatureFromCelsius(-20),
 		MaxRunning: units.TemperatureFromCelsius(70),
 	}
-	for _, c := range site.Cautions() {
-		fmt.Println(c)
+	fs := site.Findings()
+	for _, f := range fs {
+		fmt.Println(f)
 	}
+	fmt.Println(len(fs.Hazard(components.HotSurface)), fs[0].Rule)
 	// Output:
-	// running oil at 70 °C is above the 60 °C pump inlet limit of ISO 4413: add cooling or confirm the pump maker's limit; hot oil and surfaces burn
-	// starting at -20 °C: warm the oil at low speed and pressure before full load (cavitation and seal risk on a cold start)
+	// caution (hot surface): Oil running at 70 °C is above the 60 °C pump inlet limit: add cooling or confirm the pump maker's limit, and guard against burns from hot oil, tank and lines.
+	// caution (cold start): A start at -20 °C needs a warm-up at low speed and pressure before full load, against pump cavitation and seal damage.
+	// 1 standard: ISO 4413:2010, fluid temperature at the pump inlet
+}
+
+// A test-rig clamp's oil is a typical HV 46 whose supplier states a pour
+// point of −39 °C: the fluid is rebuilt from its data sheet with that
+// figure, so its span can never disagree with it.
+func ExampleFluid_DataSheet() {
+	f, _ := fluid.Typical(fluid.HV, fluid.VG46)
+	d := f.DataSheet()
+	d.Name, d.PourPoint = "test-rig clamp oil", units.TemperatureFromCelsius(-39)
+	f, err := fluid.FromDataSheet(d)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	s, _ := f.Span(fluid.DefaultWindow())
+	g, _ := f.Grade()
+	fmt.Printf("%s, %v, pour point %v: start from %v, run up to %v\n", f.Name(), g, f.PourPoint(), s.Cold, s.Hot)
+
+	d.PourPoint = units.TemperatureFromCelsius(45) // a slip: above 40 °C
+	_, err = fluid.FromDataSheet(d)
+	fmt.Println(err)
+	// Output:
+	// test-rig clamp oil, VG 46, pour point -39 °C: start from -11.7 °C, run up to 90.24 °C
+	// fluid.FromDataSheet: PourPoint = 45 °C is out of range: want 0 (not known), or above 0 K and below 40 °C (V40 is measured on the flowing fluid)
 }

@@ -7,16 +7,6 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// Temperature limits for the density, heat and bulk-modulus models: −60 °C
-// to 200 °C, wider than hydraulic service (ISO 4413 asks for pump inlet oil
-// at or below 60 °C) but not so wide that the linear models mislead. Our
-// choice, not a standard's.
-var (
-	minModelTemperature = units.TemperatureFromCelsius(-60)
-	maxModelTemperature = units.TemperatureFromCelsius(200)
-	t15                 = units.TemperatureFromCelsius(15)
-)
-
 // Class is a family of hydraulic fluid per ISO 6743-4.
 type Class uint8
 
@@ -48,7 +38,8 @@ func (c Class) String() string {
 
 // ThermalModel gives specific heat and thermal conductivity linear in
 // temperature about 40 °C: c(t) = C40 + CSlope·(t − 40 °C), k(t) = K40 +
-// KSlope·(t − 40 °C).
+// KSlope·(t − 40 °C). A fluid's model must keep c and k > 0 from −60 °C to
+// 200 °C (the model's temperature range).
 type ThermalModel struct {
 	C40    units.SpecificHeatCapacity // at 40 °C
 	CSlope float64                    // J/(kg·K) per K
@@ -56,19 +47,92 @@ type ThermalModel struct {
 	KSlope float64                    // W/(m·K) per K
 }
 
+// validate checks that c and k are finite and > 0 across the model's
+// temperature range, naming the fields as prefix+field.
+func (m ThermalModel) validate(fn, prefix string) error {
+	if err := validate.Positive(fn, prefix+"C40", m.C40); err != nil {
+		return err
+	}
+	if err := validate.Positive(fn, prefix+"K40", m.K40); err != nil {
+		return err
+	}
+	for _, t := range []units.Temperature{minModelTemperature, maxModelTemperature} {
+		dt := t.Celsius() - 40
+		if c := float64(m.C40) + m.CSlope*dt; !(c > 0) || math.IsInf(c, 0) {
+			return validate.Fail(fn, prefix+"CSlope", m.CSlope, "a slope that keeps c > 0 from −60 °C to 200 °C")
+		}
+		if k := float64(m.K40) + m.KSlope*dt; !(k > 0) || math.IsInf(k, 0) {
+			return validate.Fail(fn, prefix+"KSlope", m.KSlope, "a slope that keeps k > 0 from −60 °C to 200 °C")
+		}
+	}
+	return nil
+}
+
 // Fluid bundles the properties of one hydraulic fluid. Build it with
-// Typical or FromDataSheet; the exported fields may then be overridden with
-// the supplier's figures, which govern over the typical values here.
+// Typical or FromDataSheet; its figures are read through methods and cannot
+// be changed one by one, so they never contradict each other (the viscosity
+// curve always passes through V40 and V100, Grade and Viscosity(40 °C)
+// agree, the pour point lies below 40 °C). To adjust a fluid, change its
+// DataSheet and build it again:
+//
+//	d := f.DataSheet()
+//	d.PourPoint = units.TemperatureFromCelsius(-36) // the supplier's figure
+//	f, err := fluid.FromDataSheet(d)
+//
+// The zero Fluid has no data: its methods return errors.
 type Fluid struct {
-	Name      string
-	Class     Class
-	Curve     Curve // ASTM D341 viscosity–temperature curve
-	V40, V100 units.KinematicViscosity
-	PourPoint units.Temperature // viscosity is refused below it; 0 if unknown
-	Density15 units.Density     // at 15 °C and atmospheric pressure
-	Expansion float64           // volumetric thermal expansion coefficient, 1/K
-	Bulk      BulkModel
-	Thermal   ThermalModel
+	name      string
+	class     Class
+	curve     Curve // ASTM D341 curve through v40 at 40 °C and v100 at 100 °C
+	v40, v100 units.KinematicViscosity
+	pourPoint units.Temperature // viscosity is refused below it; 0 if unknown
+	density15 units.Density     // at 15 °C and atmospheric pressure
+	expansion float64           // volumetric thermal expansion coefficient, 1/K
+	bulk      BulkModel
+	thermal   ThermalModel
+}
+
+// Name returns the fluid's name: the data sheet's, or "HM VG 46 (typical)"
+// for a preset.
+func (f Fluid) Name() string { return f.name }
+
+// Class returns the fluid's ISO 6743-4 class.
+func (f Fluid) Class() Class { return f.class }
+
+// Curve returns the fluid's ASTM D341 viscosity–temperature curve, through
+// V40 at 40 °C and V100 at 100 °C.
+func (f Fluid) Curve() Curve { return f.curve }
+
+// V40 returns the kinematic viscosity at 40 °C the fluid was built from.
+func (f Fluid) V40() units.KinematicViscosity { return f.v40 }
+
+// V100 returns the kinematic viscosity at 100 °C the fluid was built from.
+func (f Fluid) V100() units.KinematicViscosity { return f.v100 }
+
+// PourPoint returns the pour point, below which Viscosity refuses to answer,
+// or 0 when it is not known.
+func (f Fluid) PourPoint() units.Temperature { return f.pourPoint }
+
+// Density15 returns the density at 15 °C and atmospheric pressure.
+func (f Fluid) Density15() units.Density { return f.density15 }
+
+// Expansion returns the volumetric thermal expansion coefficient, 1/K.
+func (f Fluid) Expansion() float64 { return f.expansion }
+
+// Bulk returns the fluid's bulk-modulus model.
+func (f Fluid) Bulk() BulkModel { return f.bulk }
+
+// Thermal returns the fluid's specific heat and conductivity model.
+func (f Fluid) Thermal() ThermalModel { return f.thermal }
+
+// DataSheet returns the figures that build f again with FromDataSheet, with
+// V100 given (VI 0) and the class's typical values written out, so that a
+// caller can change one figure and rebuild the fluid.
+func (f Fluid) DataSheet() DataSheet {
+	return DataSheet{
+		Name: f.name, Class: f.class, V40: f.v40, V100: f.v100, Density15: f.density15,
+		PourPoint: f.pourPoint, Expansion: f.expansion, Bulk: f.bulk, Thermal: f.thermal,
+	}
 }
 
 func checkPropertyInputs(fn string, t units.Temperature, p units.Pressure) error {
@@ -80,19 +144,19 @@ func checkPropertyInputs(fn string, t units.Temperature, p units.Pressure) error
 
 // Grade returns the ISO 3448 grade of the fluid's 40 °C viscosity, or an
 // error matching ErrNoGrade when it lies between grades.
-func (f Fluid) Grade() (Grade, error) { return GradeOf(f.V40) }
+func (f Fluid) Grade() (Grade, error) { return GradeOf(f.v40) }
 
 // VI returns the viscosity index (ASTM D2270, unrounded) of V40 and V100.
-func (f Fluid) VI() (float64, error) { return ViscosityIndex(f.V40, f.V100) }
+func (f Fluid) VI() (float64, error) { return ViscosityIndex(f.v40, f.v100) }
 
 // Viscosity returns the kinematic viscosity at temperature t from the D341
 // curve. Below the pour point (when known) it fails: the oil no longer flows
 // as the curve says.
 func (f Fluid) Viscosity(t units.Temperature) (units.KinematicViscosity, error) {
-	if f.PourPoint > 0 && t < f.PourPoint {
-		return 0, validate.Fail("fluid.Fluid.Viscosity", "t", t, "≥ pour point "+f.PourPoint.String())
+	if f.pourPoint > 0 && t < f.pourPoint {
+		return 0, validate.Fail("fluid.Fluid.Viscosity", "t", t, "≥ pour point "+f.pourPoint.String())
 	}
-	return f.Curve.At(t)
+	return f.curve.At(t)
 }
 
 // Density returns the density at temperature t and gauge pressure p:
@@ -110,29 +174,31 @@ func (f Fluid) Density(t units.Temperature, p units.Pressure) (units.Density, er
 	if err := checkPropertyInputs(fn, t, p); err != nil {
 		return 0, err
 	}
-	if err := f.Bulk.checkPressure(fn, t, p); err != nil {
+	if err := f.bulk.checkPressure(fn, t, p); err != nil {
 		return 0, err
 	}
 	rho := f.density(t, p)
-	if err := validate.Result(fn, "density", rho); err != nil {
+	if err := validate.PositiveResult(fn, "density", rho); err != nil {
 		return 0, err
 	}
 	return rho, nil
 }
 
+// checkDensity refuses the zero Fluid (and any fluid whose data a future
+// change lets through unchecked), naming the field.
 func (f Fluid) checkDensity(fn string) error {
-	if err := validate.Positive(fn, "Density15", f.Density15); err != nil {
+	if err := validate.InRange(fn, "Density15", f.density15, minDensity15, maxDensity15); err != nil {
 		return err
 	}
-	if err := validate.InRange(fn, "Expansion", f.Expansion, 0, 2e-3); err != nil {
+	if err := validate.InRange(fn, "Expansion", f.expansion, 0, maxExpansion); err != nil {
 		return err
 	}
-	return f.Bulk.validate(fn)
+	return f.bulk.validate(fn, "Bulk.")
 }
 
 func (f Fluid) density(t units.Temperature, p units.Pressure) units.Density {
-	rho := float64(f.Density15) / (1 + f.Expansion*float64(t.Sub(t15)))
-	return units.Density(rho * f.Bulk.compression(t, p))
+	rho := float64(f.density15) / (1 + f.expansion*float64(t.Sub(t15)))
+	return units.Density(rho * f.bulk.compression(t, p))
 }
 
 // DynamicViscosity returns μ = ν·ρ at temperature t and gauge pressure p
@@ -162,7 +228,7 @@ func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, er
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
-	c, err := linearFrom40(fn, "c", float64(f.Thermal.C40), f.Thermal.CSlope, t)
+	c, err := linearFrom40(fn, "c", float64(f.thermal.C40), f.thermal.CSlope, t)
 	return units.SpecificHeatCapacity(c), err
 }
 
@@ -173,7 +239,7 @@ func (f Fluid) ThermalConductivity(t units.Temperature) (units.ThermalConductivi
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
-	k, err := linearFrom40(fn, "k", float64(f.Thermal.K40), f.Thermal.KSlope, t)
+	k, err := linearFrom40(fn, "k", float64(f.thermal.K40), f.thermal.KSlope, t)
 	return units.ThermalConductivity(k), err
 }
 
@@ -188,9 +254,14 @@ func linearFrom40(fn, name string, at40, slope float64, t units.Temperature) (fl
 }
 
 // BulkModulus returns the bulk modulus of the given kind at temperature t
-// and gauge pressure p (see BulkModel.Modulus).
+// and gauge pressure p (see BulkModel.Modulus); errors name the fluid's
+// fields as Bulk.K0, ….
 func (f Fluid) BulkModulus(kind BulkKind, t units.Temperature, p units.Pressure) (units.Pressure, error) {
-	return f.Bulk.Modulus(kind, t, p)
+	const fn = "fluid.Fluid.BulkModulus"
+	if err := f.bulk.validate(fn, "Bulk."); err != nil {
+		return 0, err
+	}
+	return f.bulk.modulus(fn, kind, t, p)
 }
 
 // CragoeSpecificHeat returns the specific heat of a petroleum oil of
@@ -203,7 +274,7 @@ func (f Fluid) BulkModulus(kind BulkKind, t units.Temperature, p units.Pressure)
 // It is meant for mineral oils (sg about 0.75–0.96), not water-glycols or esters.
 func CragoeSpecificHeat(sg float64, t units.Temperature) (units.SpecificHeatCapacity, error) {
 	const fn = "fluid.CragoeSpecificHeat"
-	if err := validate.InRange(fn, "sg", sg, 0.6, 1.1); err != nil {
+	if err := validate.InRange(fn, "sg", sg, minCragoeSG, maxCragoeSG); err != nil {
 		return 0, err
 	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
@@ -220,7 +291,7 @@ func CragoeSpecificHeat(sg float64, t units.Temperature) (units.SpecificHeatCapa
 //	k = (0.0677/sg)·(1 − 0.0003·(t_°F − 32))  BTU/(h·ft·°F)
 func CragoeConductivity(sg float64, t units.Temperature) (units.ThermalConductivity, error) {
 	const fn = "fluid.CragoeConductivity"
-	if err := validate.InRange(fn, "sg", sg, 0.6, 1.1); err != nil {
+	if err := validate.InRange(fn, "sg", sg, minCragoeSG, maxCragoeSG); err != nil {
 		return 0, err
 	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {

@@ -1,7 +1,6 @@
 package fluid
 
 import (
-	"errors"
 	"strconv"
 	"strings"
 
@@ -11,8 +10,9 @@ import (
 
 // ErrNoGrade reports that no ISO 3448 grade fits: a 40 °C viscosity between
 // two grades' limits, a grade number that ISO 3448 does not define, or no
-// grade whose window covers a site.
-var ErrNoGrade = errors.New("no matching ISO 3448 viscosity grade")
+// grade whose window covers a site. It also matches units.ErrRange: the
+// value given lies outside what the function accepts.
+var ErrNoGrade error = validate.Sentinel("no matching ISO 3448 viscosity grade")
 
 // Grade is an ISO 3448 viscosity grade, identified by its number: VG46 is
 // ISO VG 46. The zero Grade is not a grade (Valid reports false).
@@ -156,7 +156,8 @@ func GradeOf(v40 units.KinematicViscosity) (Grade, error) {
 const limitSlack = 1e-12
 
 // GradeError reports a 40 °C viscosity that lies in no ISO 3448 grade. It
-// unwraps to ErrNoGrade.
+// unwraps to ErrNoGrade and to a *units.RangeError naming v40, so it
+// matches units.ErrRange.
 type GradeError struct {
 	V40   units.KinematicViscosity
 	below *gradeRow
@@ -178,8 +179,10 @@ func (e *GradeError) Error() string {
 	return s + ": " + ErrNoGrade.Error()
 }
 
-// Unwrap returns ErrNoGrade.
-func (e *GradeError) Unwrap() error { return ErrNoGrade }
+// Unwrap returns ErrNoGrade and the range error for v40.
+func (e *GradeError) Unwrap() []error {
+	return []error{ErrNoGrade, validate.Fail("fluid.GradeOf", "v40", e.V40, "within the limits of an ISO 3448 grade")}
+}
 
 func (g Grade) next() Grade {
 	for i, r := range iso3448[:len(iso3448)-1] {

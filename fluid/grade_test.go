@@ -10,7 +10,7 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// ISO 3448:1992 Table 1 [S] (CHECKS.md): min / mid / max at 40 °C, mm²/s.
+// ISO 3448:1992 Table 1 [S]: min / mid / max at 40 °C, mm²/s.
 // Compared exactly: the package stores the printed figures.
 func TestGradesISO3448(t *testing.T) {
 	want := []struct {
@@ -179,4 +179,64 @@ func FuzzParseGrade(f *testing.F) {
 			t.Fatalf("round trip %v: %v, %v", g, back, err)
 		}
 	})
+}
+
+// ISO 3448:1992 [S]: VG 2 starts at 1.98 mm²/s and VG 1500
+// ends at 1650 mm²/s; the limits belong to the grade, beyond them no grade.
+func TestGradeOfEnds(t *testing.T) {
+	for _, c := range []struct {
+		v    units.KinematicViscosity
+		want Grade
+	}{
+		{mm2s(1.98), VG2}, {mm2s(1650), VG1500},
+		{mm2s(1.98 * (1 - 1e-9)), 0}, {mm2s(1650 * (1 + 1e-9)), 0},
+	} {
+		g, err := GradeOf(c.v)
+		if g != c.want || (c.want == 0) != errors.Is(err, ErrNoGrade) {
+			t.Errorf("GradeOf(%v) = %v, %v; want %v", c.v, g, err, c.want)
+		}
+	}
+}
+
+// ISO 3448 designates a grade "ISO VG 46"; ParseGrade read that form but
+// nothing wrote it.
+func TestGradeDesignation(t *testing.T) {
+	for _, g := range Grades() {
+		s := g.Designation()
+		if s != "ISO "+g.String() {
+			t.Errorf("%v: Designation %q", g, s)
+		}
+		if back, err := ParseGrade(s); err != nil || back != g {
+			t.Errorf("ParseGrade(%q) = %v, %v", s, back, err)
+		}
+	}
+	if s := Grade(47).Designation(); s != "Grade(47)" {
+		t.Errorf("invalid grade: %q", s)
+	}
+}
+
+// GradeOf put the upper limit of nine grades in the gap above them when the
+// viscosity was written in m²/s: 50.6e-6 m²/s is 50.60000000000001 mm²/s in
+// float64. ISO 3448:1992, Table 1: limits are midpoint ± 10 % and belong to
+// the grade [S].
+func TestGradeLimitsInSI(t *testing.T) {
+	for _, r := range iso3448 {
+		for _, x := range []float64{r.min, r.max} {
+			for _, v := range []units.KinematicViscosity{
+				units.KinematicViscosity(x * 1e-6),
+				units.KinematicViscosity(x / 1e6),
+				units.KinematicViscosity(x) * units.Centistokes,
+			} {
+				if g, err := GradeOf(v); g != r.g || err != nil {
+					t.Errorf("GradeOf(%v m²/s) = %v, %v; want %v", float64(v), g, err, r.g)
+				}
+			}
+		}
+	}
+	// Just outside a limit (1 part in 10⁹) is still in the gap.
+	for _, v := range []float64{35.2 * (1 + 1e-9), 41.4 * (1 - 1e-9)} {
+		if g, err := GradeOf(units.KinematicViscosity(v) * units.SquareMillimetrePerSecond); !errors.Is(err, ErrNoGrade) {
+			t.Errorf("GradeOf(%v mm²/s) = %v, %v; want ErrNoGrade", v, g, err)
+		}
+	}
 }

@@ -1,11 +1,10 @@
 package fluid
 
 import (
-	"errors"
 	"math"
-	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -16,17 +15,21 @@ func near(got, want, rel float64) bool {
 	return math.Abs(got-want) <= rel*math.Abs(want)
 }
 
-// wantRangeError checks that err matches units.ErrRange and names param.
+// wantRangeError checks that err is a range error for param, with the
+// shared checks of internal/checktest (matches units.ErrRange, errors.As
+// finds a *units.RangeError, a qualified function, the value and the valid
+// range), and stops the test when there is none.
 func wantRangeError(t *testing.T, err error, param string) {
 	t.Helper()
-	if !errors.Is(err, units.ErrRange) {
-		t.Fatalf("err = %v, want units.ErrRange", err)
+	if checktest.RangeError(t, err, param) == nil {
+		t.FailNow()
 	}
-	var re *units.RangeError
-	if !errors.As(err, &re) || re.Param != param {
-		t.Fatalf("err = %v, want a *units.RangeError for %q", err, param)
-	}
-	if !strings.Contains(err.Error(), param) || re.Valid == "" {
-		t.Fatalf("err = %q does not name %q and its valid range", err, param)
-	}
+}
+
+func up(v units.KinematicViscosity) units.KinematicViscosity {
+	return units.KinematicViscosity(math.Nextafter(float64(v), math.Inf(1)))
+}
+
+func down(v units.KinematicViscosity) units.KinematicViscosity {
+	return units.KinematicViscosity(math.Nextafter(float64(v), math.Inf(-1)))
 }

@@ -1,14 +1,15 @@
 package fluid
 
 import (
-	"errors"
+	"strings"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// ErrNoPreset reports a class and grade for which Typical has no data.
-var ErrNoPreset = errors.New("no typical data for this class and grade")
+// ErrNoPreset reports a class and grade for which Typical has no data. It
+// also matches units.ErrRange.
+var ErrNoPreset error = validate.Sentinel("no typical data for this class and grade")
 
 // family holds the typical figures of one ISO 6743-4 class. All values are
 // typical of the class as recalled from suppliers' literature in general
@@ -66,7 +67,7 @@ func gradeStep(g Grade) int {
 // cragoeThermal is Cragoe's linear correlations (see CragoeSpecificHeat and
 // CragoeConductivity) written about 40 °C for specific gravity sg.
 func cragoeThermal(sg float64) ThermalModel {
-	t40, t41 := units.TemperatureFromCelsius(40), units.TemperatureFromCelsius(41)
+	t41 := t40.Add(units.DeltaKelvin)
 	c40, _ := CragoeSpecificHeat(sg, t40)
 	c41, _ := CragoeSpecificHeat(sg, t41)
 	k40, _ := CragoeConductivity(sg, t40)
@@ -103,8 +104,8 @@ func Typical(c Class, g Grade) (Fluid, error) {
 	if err != nil {
 		return Fluid{}, err
 	}
-	return build(c.String()+" "+g.String()+" (typical)", c, g.Mid(), v100,
-		units.Density(fam.density(g)), units.TemperatureFromCelsius(fam.pourPoint(g)))
+	return build(DataSheet{Name: c.String() + " " + g.String() + " (typical)", Class: c, V40: g.Mid(),
+		Density15: units.Density(fam.density(g)), PourPoint: units.TemperatureFromCelsius(fam.pourPoint(g))}, v100)
 }
 
 func hasGrade(gs []Grade, g Grade) bool {
@@ -117,7 +118,9 @@ func hasGrade(gs []Grade, g Grade) bool {
 }
 
 // PresetError reports a class and grade without typical data. It unwraps
-// to ErrNoPreset.
+// to ErrNoPreset and to a *units.RangeError naming the parameter (c for an
+// unknown class, g for a grade the class has no data for), so it matches
+// units.ErrRange.
 type PresetError struct {
 	Class Class
 	Grade Grade
@@ -128,12 +131,27 @@ func (e *PresetError) Error() string {
 	return "fluid.Typical: " + e.Class.String() + " " + e.Grade.String() + ": " + ErrNoPreset.Error()
 }
 
-// Unwrap returns ErrNoPreset.
-func (e *PresetError) Unwrap() error { return ErrNoPreset }
+// Unwrap returns ErrNoPreset and the range error.
+func (e *PresetError) Unwrap() []error { return []error{ErrNoPreset, e.rangeError()} }
+
+func (e *PresetError) rangeError() error {
+	const fn = "fluid.Typical"
+	fam, ok := families[e.Class]
+	if !ok {
+		return validate.Fail(fn, "c", float64(e.Class), "HM, HV, HFC, HFDU or HEES")
+	}
+	names := make([]string, len(fam.grades))
+	for i, g := range fam.grades {
+		names[i] = g.String()
+	}
+	return &units.RangeError{Func: fn, Param: "g", Value: e.Grade.String(),
+		Valid: "a grade with typical " + e.Class.String() + " data: " + strings.Join(names, ", ")}
+}
 
 // DataSheet holds the figures a supplier prints for a hydraulic fluid.
 // Give V100, or leave it 0 and give VI (then V100 = V100ForVI(V40, VI)).
-// PourPoint may be 0 when not known.
+// PourPoint may be 0 when not known. Expansion, Bulk and Thermal, which a
+// data sheet rarely gives, take the typical values of Class when left zero.
 type DataSheet struct {
 	Name      string
 	Class     Class // for the properties a data sheet rarely gives (bulk modulus, heat)
@@ -141,25 +159,23 @@ type DataSheet struct {
 	VI        float64 // used only when V100 is 0
 	Density15 units.Density
 	PourPoint units.Temperature
+	Expansion float64      // volumetric thermal expansion, 1/K; 0 for the class's typical value
+	Bulk      BulkModel    // the zero BulkModel for the class's typical model
+	Thermal   ThermalModel // the zero ThermalModel for the class's typical model
 }
 
 // FromDataSheet builds a Fluid from a data sheet: the D341 curve through
-// V40 at 40 °C and V100 at 100 °C, the density at 15 °C, and for the rest
-// (expansion, bulk modulus, heat) the typical values of the class, which
-// the caller may override. V40 and V100 must lie within [MinViscosity,
-// MaxViscosity], V100 below V40; errors name the DataSheet field.
+// V40 at 40 °C and V100 at 100 °C, the density at 15 °C, the pour point, and
+// for the figures left zero (expansion, bulk modulus, heat) the typical
+// values of the class. V40 and V100 must lie within [MinViscosity,
+// MaxViscosity], V100 below V40; Density15 from 500 to 2000 kg/m³; PourPoint
+// 0 (not known) or above 0 K and below 40 °C; Expansion from 0 to
+// 2·10⁻³ 1/K; Bulk and Thermal within the limits of BulkModel and
+// ThermalModel. Errors match units.ErrRange and name the DataSheet field
+// (Bulk.K0 for a field of Bulk); the Fluid is then the zero Fluid.
 func FromDataSheet(d DataSheet) (Fluid, error) {
 	const fn = "fluid.FromDataSheet"
-	if _, ok := families[d.Class]; !ok {
-		return Fluid{}, validate.Fail(fn, "Class", float64(d.Class), "HM, HV, HFC, HFDU or HEES")
-	}
-	if err := validate.InRange(fn, "Density15", d.Density15, 500, 2000); err != nil {
-		return Fluid{}, err
-	}
-	if err := validate.NonNegative(fn, "PourPoint", d.PourPoint); err != nil {
-		return Fluid{}, err
-	}
-	if err := validate.InRange(fn, "V40", d.V40, MinViscosity, MaxViscosity); err != nil {
+	if err := checkSheet(fn, d); err != nil {
 		return Fluid{}, err
 	}
 	v100 := d.V100
@@ -171,12 +187,41 @@ func FromDataSheet(d DataSheet) (Fluid, error) {
 	} else if err := checkV100(fn, d.V40, v100); err != nil {
 		return Fluid{}, err
 	}
-	f, err := build(d.Name, d.Class, d.V40, v100, d.Density15, d.PourPoint)
+	f, err := build(d, v100)
 	if err != nil { // V100 so close to V40 that the curve is nearly flat
 		return Fluid{}, validate.Fail(fn, "V100", v100,
 			"below V40 = "+d.V40.String()+" by enough that the D341 curve spans 0.21–2·10⁷ mm²/s at finite temperatures")
 	}
 	return f, nil
+}
+
+// checkSheet checks every field of a data sheet but V100 and VI.
+func checkSheet(fn string, d DataSheet) error {
+	if _, ok := families[d.Class]; !ok {
+		return validate.Fail(fn, "Class", float64(d.Class), "HM, HV, HFC, HFDU or HEES")
+	}
+	if err := validate.InRange(fn, "Density15", d.Density15, minDensity15, maxDensity15); err != nil {
+		return err
+	}
+	if pp := d.PourPoint; pp != 0 && !(pp > 0 && pp < maxPourPoint) {
+		return validate.Fail(fn, "PourPoint", pp, "0 (not known), or above 0 K and below 40 °C (V40 is measured on the flowing fluid)")
+	}
+	if d.Expansion != 0 {
+		if err := validate.InRange(fn, "Expansion", d.Expansion, 0, maxExpansion); err != nil {
+			return err
+		}
+	}
+	if d.Bulk != (BulkModel{}) {
+		if err := d.Bulk.validate(fn, "Bulk."); err != nil {
+			return err
+		}
+	}
+	if d.Thermal != (ThermalModel{}) {
+		if err := d.Thermal.validate(fn, "Thermal."); err != nil {
+			return err
+		}
+	}
+	return validate.InRange(fn, "V40", d.V40, MinViscosity, MaxViscosity)
 }
 
 // checkV100 checks a data sheet's 100 °C viscosity against D341's limits
@@ -191,18 +236,30 @@ func checkV100(fn string, v40, v100 units.KinematicViscosity) error {
 	return nil
 }
 
-func build(name string, c Class, v40, v100 units.KinematicViscosity, rho units.Density, pour units.Temperature) (Fluid, error) {
-	curve, err := CurveThrough(t40, v40, t100, v100)
+// build makes the fluid of a checked data sheet with 100 °C viscosity v100,
+// filling the zero figures from the class.
+func build(d DataSheet, v100 units.KinematicViscosity) (Fluid, error) {
+	curve, err := CurveThrough(t40, d.V40, t100, v100)
 	if err != nil {
 		return Fluid{}, err
 	}
-	fam := families[c]
-	sg := float64(rho) / 999.0 // water at 60 °F: 999.0 kg/m³ (ρ₁₅ stands in for ρ at 60 °F)
-	if sg < 0.6 || sg > 1.1 {
-		sg = min(max(sg, 0.6), 1.1) // Cragoe's range; only mineral classes use sg
+	fam := families[d.Class]
+	f := Fluid{
+		name: d.Name, class: d.Class, curve: curve, v40: d.V40, v100: v100, pourPoint: d.PourPoint,
+		density15: d.Density15, expansion: d.Expansion, bulk: d.Bulk, thermal: d.Thermal,
 	}
-	return Fluid{
-		Name: name, Class: c, Curve: curve, V40: v40, V100: v100, PourPoint: pour,
-		Density15: rho, Expansion: fam.expansion, Bulk: fam.bulk, Thermal: fam.thermal(sg),
-	}, nil
+	if f.expansion == 0 {
+		f.expansion = fam.expansion
+	}
+	if f.bulk == (BulkModel{}) {
+		f.bulk = fam.bulk
+	}
+	if f.thermal == (ThermalModel{}) {
+		// Specific gravity against water at 60 °F, 999.0 kg/m³ (ρ₁₅ stands
+		// in for ρ at 60 °F), kept in Cragoe's range; only mineral classes
+		// use it.
+		sg := float64(d.Density15) / 999.0
+		f.thermal = fam.thermal(min(max(sg, minCragoeSG), maxCragoeSG))
+	}
+	return f, nil
 }

@@ -242,38 +242,42 @@ func TestPropertyWindowAndSelect(t *testing.T) {
 		what := fmt.Sprintf("SelectGrades(%+v, %v, %+v)", s, vi, w)
 		noPanic(t, what, func() { cs, err = SelectGrades(s, vi, w) })
 		for _, c := range cs {
-			finite(t, what, err, float64(c.AtStart), float64(c.AtRunning),
+			finite(t, what, err, float64(c.Start.Value), float64(c.Running.Value),
 				float64(c.ColdMargin), float64(c.HotMargin))
 		}
 	}
 }
 
-// randomFluid returns a preset or data-sheet fluid with some exported
-// fields overwritten by wide random values, as a caller may do.
+// randomFluid returns a preset or data-sheet fluid, or one rebuilt from a
+// preset's data sheet with some figures replaced by wide random values, as
+// a caller may do (a refused sheet gives the zero Fluid, whose methods must
+// fail cleanly too).
 func randomFluid(r *rand.Rand) Fluid {
-	var f Fluid
+	var d DataSheet
 	if r.IntN(2) == 0 {
-		f, _ = Typical(HM, VG46)
+		f, _ := Typical(HM, VG46)
+		d = f.DataSheet()
 	} else {
-		f, _ = FromDataSheet(DataSheet{Class: Class(r.IntN(7)), V40: wideNu(r), V100: wideNu(r),
-			VI: wide(r, -50, 350), Density15: units.Density(wide(r, 500, 2000)), PourPoint: wideT(r)})
+		d = DataSheet{Class: Class(r.IntN(7)), V40: wideNu(r), V100: wideNu(r),
+			VI: wide(r, -50, 350), Density15: units.Density(wide(r, 500, 2000)), PourPoint: wideT(r)}
 	}
 	if r.IntN(2) == 0 {
-		f.Density15 = units.Density(wide(r, 500, 2000))
+		d.Density15 = units.Density(wide(r, 500, 2000))
 	}
 	if r.IntN(2) == 0 {
-		f.Expansion = wide(r, 1e-5, 2e-3)
+		d.Expansion = wide(r, 1e-5, 2e-3)
 	}
 	if r.IntN(2) == 0 {
-		f.Bulk = randomBulk(r)
+		d.Bulk = randomBulk(r)
 	}
 	if r.IntN(2) == 0 {
-		f.Thermal = ThermalModel{C40: units.SpecificHeatCapacity(wide(r, 1000, 4000)), CSlope: wide(r, -5, 5),
+		d.Thermal = ThermalModel{C40: units.SpecificHeatCapacity(wide(r, 1000, 4000)), CSlope: wide(r, -5, 5),
 			K40: units.ThermalConductivity(wide(r, 0.05, 0.6)), KSlope: wide(r, -1e-3, 1e-3)}
 	}
 	if r.IntN(4) == 0 {
-		f.PourPoint = wideT(r)
+		d.PourPoint = wideT(r)
 	}
+	f, _ := FromDataSheet(d)
 	return f
 }
 

@@ -17,6 +17,17 @@
 // Arithmetic on quantities compiles to plain float64 arithmetic. Physics across
 // types is typed (Pressure.TimesArea returns a Force; Flow.PerArea a Velocity).
 //
+// # Overflow
+//
+// The helpers that return no error — the products (Pressure.TimesArea,
+// Displacement.TimesSpeed, …), CircleArea, In and the accessors, the
+// temperature and gauge/absolute crossings — follow float64 semantics, as the
+// arithmetic operators do: for absurd inputs (a product beyond about 1e308, an
+// In of a value near the float64 limit in a small unit) the result may be ±Inf,
+// and a NaN input gives NaN. Every function of this package that returns an
+// error checks its own result as well as its inputs, and never returns NaN or
+// ±Inf beside a nil error; on error it returns the zero value.
+//
 // # Exactness
 //
 // Every factor is defined once, from the exact definitions of NIST SP 811,
@@ -83,15 +94,26 @@
 // String writes the metric trade unit (bar, L/min, kN, mm, cm³/rev, kW, °C,
 // mm²/s) with four significant digits; Append does the same into a caller's
 // buffer without allocating; Format supports %v, %s, %#v, and %e/%f/%g with
-// width and precision. A System (Metric, USCustomary, or a copy changed by the
-// caller) chooses the unit of each type for reports. MarshalText writes text that
-// UnmarshalText reads back to the identical float64, so quantities travel through
-// JSON, YAML and flags.
+// width and precision. A System chooses the unit of each type for reports:
+// Metric and USCustomary return the trade systems, and a caller adjusts its own
+// copy with the System's With methods (no caller can change the systems that
+// another gets). MarshalText writes text that UnmarshalText reads back to the
+// identical float64, so quantities travel through JSON, YAML and flags; it
+// refuses, with ErrRange, every value that UnmarshalText would refuse (NaN, ±Inf,
+// a temperature below absolute zero, an absolute pressure below vacuum), so
+// json.Marshal never writes a document that cannot be read back.
 //
-// # Errors for bad values
+// # Errors
 //
-// RangeError names a function, a parameter, the value and the valid range, and
-// unwraps to ErrRange. The hydrosize families return it for bad input.
+// Every error matches one of the sentinels ErrSyntax, ErrUnknownUnit,
+// ErrDimension, ErrRange, ErrReference and ErrAmbiguous with errors.Is. A *ParseError
+// quotes the text; a *ConversionError names both sides of a failed conversion;
+// a *RangeError names a parameter, the value and the valid range, and is the one
+// type every hydrosize package returns for a bad argument (errors.As finds it).
+// The function an error names is always qualified by its package, as a caller
+// writes it: "units.ParsePressure", "units.Pressure.UnmarshalText",
+// "units.Quantity.In", "fluid.CurveThrough". The Error methods never panic,
+// whatever a caller put in the fields.
 //
 // # Spellings
 //

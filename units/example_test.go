@@ -14,8 +14,8 @@ func Example() {
 	p := 210 * units.Bar
 	q := 38 * units.LitrePerMinute
 	fmt.Printf("%.0f psi, %.2f gpm\n", p.PSI(), q.USGallonsPerMinute())
-	fmt.Println(p.TimesFlow(q))                                // metric trade unit
-	fmt.Println(units.USCustomary.FormatPower(p.TimesFlow(q))) // US customary
+	fmt.Println(p.TimesFlow(q))                                  // metric trade unit
+	fmt.Println(units.USCustomary().FormatPower(p.TimesFlow(q))) // US customary
 	// Output:
 	// 3046 psi, 10.04 gpm
 	// 13.3 kW
@@ -71,7 +71,7 @@ func ExampleTemperature_Sub() {
 	tank := units.TemperatureFromCelsius(55)
 	ambient := units.TemperatureFromFahrenheit(77)
 	rise := tank.Sub(ambient)
-	fmt.Println(rise, units.USCustomary.FormatTemperatureDifference(rise))
+	fmt.Println(rise, units.USCustomary().FormatTemperatureDifference(rise))
 	fmt.Println(ambient.Add(rise))
 	// Output:
 	// 30 K 54 °F
@@ -88,15 +88,26 @@ func ExamplePressure_Absolute() {
 	// 90 bar
 }
 
+// A test-rig clamp's report for a US shop that quotes torque in lbf·in, to
+// three digits. The adjusted system is the caller's own copy: every other
+// caller of USCustomary still gets lbf·ft.
 func ExampleSystem() {
-	shop := units.USCustomary
-	shop.Torque = "lbf·in"
-	shop.Digits = 3
+	shop, err := units.USCustomary().WithTorque("lbf·in")
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	shop, _ = shop.WithDigits(3)
 	fmt.Println(shop.FormatTorque(85 * units.NewtonMetre))
 	fmt.Println(shop.FormatFlow(60 * units.LitrePerMinute))
+	fmt.Println(units.USCustomary().FormatTorque(85 * units.NewtonMetre))
+	_, err = shop.WithPressure("psia")
+	fmt.Println(err != nil)
 	// Output:
 	// 752 lbf·in
 	// 15.9 gpm
+	// 62.69 lbf·ft
+	// true
 }
 
 func ExamplePressure_Format() {

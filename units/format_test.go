@@ -136,9 +136,10 @@ func BenchmarkAppend(b *testing.B) {
 		}
 	})
 	b.Run("USCustomary.AppendPressure", func(b *testing.B) {
+		us := USCustomary()
 		b.ReportAllocs()
 		for b.Loop() {
-			sinkBytes = USCustomary.AppendPressure(buf[:0], p)
+			sinkBytes = us.AppendPressure(buf[:0], p)
 		}
 	})
 	b.Run("Pressure.String", func(b *testing.B) {

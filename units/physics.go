@@ -7,11 +7,11 @@ import (
 	"github.com/hydrosize/hydrosize/internal/validate"
 )
 
-// Physics across quantity types. Products are plain methods, as plain as
-// float64 multiplication (finite inputs beyond about 1e154 can overflow);
-// quotients return an error when the divisor is zero, negative where that is
-// meaningless, or not finite, and when the quotient itself is not finite, so
-// that no quotient is ever ±Inf or NaN.
+// Physics across quantity types. Products are plain methods with float64
+// semantics (see Overflow in the package documentation); quotients return an
+// error when the divisor is zero, negative where that is meaningless, or not
+// finite, and when the quotient itself is not finite, so that no quotient is
+// ever ±Inf or NaN.
 
 // CircleArea returns the area of a circle of diameter d: A = π·d²/4 (a bore
 // or rod section).

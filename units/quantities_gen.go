@@ -78,7 +78,8 @@ func (q Length) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Length) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricLength], &typeLength)
 }
@@ -178,7 +179,8 @@ func (q Area) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Area) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricArea], &typeArea)
 }
@@ -288,7 +290,8 @@ func (q Volume) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Volume) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVolume], &typeVolume)
 }
@@ -383,7 +386,8 @@ func (q Mass) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Mass) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricMass], &typeMass)
 }
@@ -493,7 +497,8 @@ func (q Force) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Force) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricForce], &typeForce)
 }
@@ -628,7 +633,8 @@ func (q Pressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bar when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Pressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPressure], &typePressure)
 }
@@ -747,7 +753,9 @@ func (q AbsolutePressure) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in bara when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 Pa (absolute vacuum).
 func (q AbsolutePressure) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAbsolutePressure], &typeAbsolutePressure)
 }
@@ -853,7 +861,8 @@ func (q Flow) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in L/min when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Flow) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFlow], &typeFlow)
 }
@@ -953,7 +962,8 @@ func (q Velocity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Velocity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricVelocity], &typeVelocity)
 }
@@ -1047,7 +1057,8 @@ func (q Displacement) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in cm³/rev when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Displacement) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDisplacement], &typeDisplacement)
 }
@@ -1137,7 +1148,8 @@ func (q RotationalSpeed) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in rpm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q RotationalSpeed) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricRotationalSpeed], &typeRotationalSpeed)
 }
@@ -1232,7 +1244,8 @@ func (q Torque) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in N·m when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Torque) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTorque], &typeTorque)
 }
@@ -1332,7 +1345,8 @@ func (q Power) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kW when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Power) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricPower], &typePower)
 }
@@ -1432,7 +1446,8 @@ func (q Energy) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Energy) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricEnergy], &typeEnergy)
 }
@@ -1520,7 +1535,9 @@ func (q Temperature) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in °C when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf,
+// and a value below ≥ 0 K (absolute zero).
 func (q Temperature) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperature], &typeTemperature)
 }
@@ -1615,7 +1632,8 @@ func (q TemperatureDifference) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in K when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q TemperatureDifference) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricTemperatureDifference], &typeTemperatureDifference)
 }
@@ -1715,7 +1733,8 @@ func (q KinematicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mm²/s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q KinematicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricKinematicViscosity], &typeKinematicViscosity)
 }
@@ -1810,7 +1829,8 @@ func (q DynamicViscosity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in mPa·s when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q DynamicViscosity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDynamicViscosity], &typeDynamicViscosity)
 }
@@ -1910,7 +1930,8 @@ func (q Density) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kg/m³ when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Density) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricDensity], &typeDensity)
 }
@@ -2008,7 +2029,8 @@ func (q SpecificHeatCapacity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kJ/(kg·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q SpecificHeatCapacity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricSpecificHeatCapacity], &typeSpecificHeatCapacity)
 }
@@ -2099,7 +2121,8 @@ func (q HeatTransferCoefficient) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m²·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q HeatTransferCoefficient) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricHeatTransferCoefficient], &typeHeatTransferCoefficient)
 }
@@ -2188,7 +2211,8 @@ func (q ThermalConductivity) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in W/(m·K) when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q ThermalConductivity) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricThermalConductivity], &typeThermalConductivity)
 }
@@ -2283,7 +2307,8 @@ func (q Stiffness) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in kN/mm when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Stiffness) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricStiffness], &typeStiffness)
 }
@@ -2368,7 +2393,8 @@ func (q Frequency) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in Hz when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Frequency) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricFrequency], &typeFrequency)
 }
@@ -2458,7 +2484,8 @@ func (q Acceleration) Format(f fmt.State, verb rune) {
 
 // MarshalText implements encoding.TextMarshaler. It writes the shortest
 // decimal in m/s² when that reads back to the identical float64, and
-// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit.
+// the coherent SI unit otherwise, so UnmarshalText restores q bit for bit. It
+// refuses, with a *RangeError, what UnmarshalText would refuse: NaN, ±Inf.
 func (q Acceleration) MarshalText() ([]byte, error) {
 	return marshalText(float64(q), &unitTable[metricAcceleration], &typeAcceleration)
 }

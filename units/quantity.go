@@ -115,18 +115,19 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 	if r.dim != q.dim {
 		return 0, nil, &ConversionError{Func: fn, From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
 	}
-	if t := belowZero(q.value, q.ref|r.ref); t != nil {
-		return 0, t, nil
-	}
-	v := q.value
 	switch {
-	case q.ref == refPoint && r.ref == refPoint:
-		v = convertScale(q.reading, q.scale, scaleOf(r))
 	case (q.ref|r.ref)&refAbsolute != 0 && (q.ref|r.ref)&(refGauge|refDiff) != 0:
 		return 0, nil, &ConversionError{Func: fn, From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
 	case q.ref == refNone && r.ref == refPoint:
 		return 0, nil, &ConversionError{Func: fn, From: "temperature difference", To: "temperature " + unit, Err: ErrReference}
-	default:
+	}
+	if t := belowZero(q.value, q.ref|r.ref); t != nil {
+		return 0, t, nil
+	}
+	v := q.value
+	if q.ref == refPoint && r.ref == refPoint {
+		v = convertScale(q.reading, q.scale, scaleOf(r))
+	} else {
 		v = (v - q.offset) / r.factor
 	}
 	if math.IsInf(v, 0) || math.IsNaN(v) {

@@ -1,26 +1,101 @@
 package units
 
-import "fmt"
+import "strconv"
 
-// digits returns the significant digits of s, 4 when unset.
-func (s *System) digits() int {
-	if s.Digits <= 0 || s.Digits > 17 {
-		return 4
-	}
-	return s.Digits
+// System is a presentation system: for each quantity type, the unit that
+// reports write it in, and the number of significant digits. Metric and
+// USCustomary return the two trade systems; a caller adjusts its own copy
+// with the With methods, each of which returns a changed copy:
+//
+//	shop, err := units.USCustomary().WithVelocity("in/s") // piston speeds in in/s
+//
+// A System is a value: copies are independent, and no caller can change the
+// systems another caller gets from Metric or USCustomary. Every unit it
+// holds is a registered unit that fits its type, checked by the With
+// methods. The zero System writes every type in its metric trade unit with
+// four significant digits, as Metric does, and has no name.
+type System struct {
+	name   string
+	digits int
+	units  [numSlots]uint16 // per type, 1 + the index in unitTable of its unit; 0 means the metric unit
 }
 
-// unit resolves the spelling of a System field to a registered unit of type
-// t, falling back to the metric unit when the spelling is empty, unknown, or
-// does not fit t.
-func (s *System) unit(spelling string, t *typeInfo, fallback int) *unitDef {
-	if i, ok := spellings[spelling]; ok && fits(&unitTable[i], t) {
-		return &unitTable[i]
+// Metric returns the metric trade system: bar, L/min, kN, mm, cm³/rev, kW,
+// °C, mm²/s, with four significant digits.
+func Metric() System { return metricSystem }
+
+// USCustomary returns the US customary trade system: psi, gpm, lbf, in,
+// in³/rev, hp, °F, with four significant digits.
+func USCustomary() System { return usCustomarySystem }
+
+// Name returns the label of s, such as "metric" or "US customary".
+func (s System) Name() string { return s.name }
+
+// WithName returns a copy of s labelled name.
+func (s System) WithName(name string) System {
+	s.name = name
+	return s
+}
+
+// Digits returns the significant digits s writes (4 unless changed).
+func (s System) Digits() int {
+	if s.digits == 0 {
+		return 4
 	}
-	if i, ok := displayOnly(spelling, t); ok {
-		return &unitTable[i]
+	return s.digits
+}
+
+// WithDigits returns a copy of s that writes n significant digits, from 1
+// to 17. It fails with ErrRange, returning the zero System, for any other n.
+func (s System) WithDigits(n int) (System, error) {
+	if n < 1 || n > 17 {
+		return System{}, &RangeError{Func: "units.System.WithDigits", Param: "n", Value: strconv.Itoa(n), Valid: "from 1 to 17"}
 	}
-	return &unitTable[fallback]
+	s.digits = n
+	return s, nil
+}
+
+// unit returns the unit of slot, or the metric unit when none was set.
+func (s *System) unit(slot, metric int) *unitDef {
+	if i := s.units[slot]; i != 0 {
+		return &unitTable[i-1]
+	}
+	return &unitTable[metric]
+}
+
+// with sets the unit of slot to the registered spelling for type t, for the
+// method fn.
+func (s System) with(slot int, fn, spelling string, t *typeInfo) (System, error) {
+	i, err := systemUnit(fn, spelling, t)
+	if err != nil {
+		return System{}, err
+	}
+	s.units[slot] = uint16(i + 1)
+	return s, nil
+}
+
+// systemUnit returns the index in unitTable of the registered unit spelled
+// spelling that values of t can be shown in, or a *ParseError: the spelling
+// is unknown (ErrUnknownUnit, with the nearest spellings of t), of another
+// dimension (ErrDimension) or of another reference (ErrReference).
+func systemUnit(fn, spelling string, t *typeInfo) (int, error) {
+	i, known := spellings[spelling]
+	if known && fits(&unitTable[i], t) {
+		return i, nil
+	}
+	if j, ok := displayOnly(spelling, t); ok {
+		return j, nil
+	}
+	e := &ParseError{Func: fn, Input: spelling, Err: ErrUnknownUnit}
+	switch {
+	case !known:
+		e.Detail = unknownDetail(spelling, t) + "; a System writes registered units of " + t.kind + " such as " + t.examples
+	case unitTable[i].dim != t.dim:
+		e.Err, e.Detail = ErrDimension, "unit of "+dimName(unitTable[i].dim)+", want a unit of "+t.kind+" such as "+t.examples
+	default:
+		e.Err, e.Detail = ErrReference, refDetail(unitTable[i].ref, t)
+	}
+	return 0, e
 }
 
 // displayOnly finds a unit whose symbol is shown but not registered for
@@ -33,16 +108,6 @@ func displayOnly(spelling string, t *typeInfo) (int, bool) {
 		}
 	}
 	return 0, false
-}
-
-func (s *System) checkField(field, spelling string, t *typeInfo) error {
-	if i, ok := spellings[spelling]; ok && fits(&unitTable[i], t) {
-		return nil
-	}
-	if _, ok := displayOnly(spelling, t); ok {
-		return nil
-	}
-	return fmt.Errorf("units: System %q: field %s = %q is not a unit of %s: %w", s.Name, field, spelling, t.kind, ErrUnknownUnit)
 }
 
 // fits reports whether values of type t can be shown in unit u. A vacuum

@@ -1,23 +1,27 @@
 package units
 
 import (
+	"errors"
 	"math"
 	"reflect"
 	"strings"
 	"testing"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
 // checkSystem formats v with a System whose unit for the type is u (through
 // reflection, so that one helper covers every type) and parses it back.
 func checkSystem[T quantity](t *testing.T, parse func(string) (T, error), info *typeInfo, u *unitDef, v T) {
 	t.Helper()
-	s := USCustomary
-	s.Name = "test"
-	sv := reflect.ValueOf(&s)
-	sv.Elem().FieldByName(info.name).SetString(u.sym)
-	if err := s.Check(); err != nil {
-		t.Errorf("System with %s = %q: %v", info.name, u.sym, err)
+	res := reflect.ValueOf(USCustomary().WithName("test")).MethodByName("With" + info.name).Call([]reflect.Value{reflect.ValueOf(u.sym)})
+	if err, _ := res[1].Interface().(error); err != nil {
+		t.Errorf("System.With%s(%q): %v", info.name, u.sym, err)
 		return
+	}
+	sv := res[0]
+	if got := sv.MethodByName(info.name + "Unit").Call(nil)[0].String(); got != u.sym {
+		t.Errorf("System.With%s(%q).%sUnit() = %q", info.name, u.sym, info.name, got)
 	}
 	out := sv.MethodByName("Format" + info.name).Call([]reflect.Value{reflect.ValueOf(v)})[0].String()
 	appended := sv.MethodByName("Append" + info.name).Call([]reflect.Value{reflect.ValueOf([]byte("x")), reflect.ValueOf(v)})[0].Bytes()
@@ -39,16 +43,16 @@ func checkSystem[T quantity](t *testing.T, parse func(string) (T, error), info *
 
 // TestSystemFormatAbsoluteZero: every temperature a System prints reads back.
 func TestSystemFormatAbsoluteZero(t *testing.T) {
-	for _, s := range []System{Metric, USCustomary} {
+	for _, s := range []System{Metric(), USCustomary()} {
 		for _, v := range []Temperature{0, 1e-9, 0.01} {
 			out := s.FormatTemperature(v)
 			back, err := ParseTemperature(out)
 			if err != nil {
-				t.Errorf("%s.FormatTemperature(%g K) = %q: %v", s.Name, float64(v), out, err)
+				t.Errorf("%s.FormatTemperature(%g K) = %q: %v", s.Name(), float64(v), out, err)
 				continue
 			}
 			if math.Abs(float64(back-v)) > 0.06 { // half a unit in the 4th digit of 459.7 °F, in K
-				t.Errorf("%s.FormatTemperature(%g K) = %q reads back as %g K", s.Name, float64(v), out, float64(back))
+				t.Errorf("%s.FormatTemperature(%g K) = %q reads back as %g K", s.Name(), float64(v), out, float64(back))
 			}
 		}
 	}
@@ -59,4 +63,99 @@ func TestSystemFormatAbsoluteZero(t *testing.T) {
 // within 4 significant digits, for every unit of every type.
 func TestSystemFormatReadsBack(t *testing.T) {
 	eachUnitValue(t, func(t *testing.T, c typedCase, info *typeInfo, u *unitDef, _, v float64) { c.system(t, info, u, v) })
+}
+
+// TestSystemsCannotBeChangedByACaller: Metric and USCustomary return a fresh
+// copy each time; a caller's adjusted copy changes nothing for anyone else.
+func TestSystemsCannotBeChangedByACaller(t *testing.T) {
+	mine, err := Metric().WithPressure("psi")
+	if err != nil {
+		t.Fatal(err)
+	}
+	mine = mine.WithName("mine")
+	if got := mine.FormatPressure(2 * Bar); got != "29.01 psi" {
+		t.Errorf("adjusted copy: FormatPressure(2 bar) = %q, want 29.01 psi", got)
+	}
+	if got := Metric().FormatPressure(2 * Bar); got != "2 bar" || Metric().Name() != "metric" {
+		t.Errorf("Metric() after a caller adjusted a copy: %q, name %q; want 2 bar, metric", got, Metric().Name())
+	}
+	us := USCustomary()
+	if _, err := us.WithFlow("L/min"); err != nil || us.FlowUnit() != "gpm" {
+		t.Errorf("WithFlow changed its receiver: FlowUnit() = %q, %v", us.FlowUnit(), err)
+	}
+}
+
+// TestSystemZeroValue: the zero System writes metric units with 4 digits.
+func TestSystemZeroValue(t *testing.T) {
+	var zero System
+	m := Metric()
+	for i, c := range typedCases {
+		info := allTypes[i]
+		for _, v := range []float64{1, 0.001234567, 98765.4321} {
+			got := reflect.ValueOf(zero).MethodByName("Format" + info.name).Call([]reflect.Value{reflect.ValueOf(v).Convert(reflect.TypeOf(c.zero))})[0].String()
+			want := reflect.ValueOf(m).MethodByName("Format" + info.name).Call([]reflect.Value{reflect.ValueOf(v).Convert(reflect.TypeOf(c.zero))})[0].String()
+			if got != want {
+				t.Errorf("System{}.Format%s(%g) = %q, Metric() gives %q", info.name, v, got, want)
+			}
+		}
+	}
+	if zero.Digits() != 4 || zero.Name() != "" {
+		t.Errorf("System{}: Digits() = %d, Name() = %q", zero.Digits(), zero.Name())
+	}
+}
+
+// TestSystemTradeUnits: the units each system writes (the tables in gen.go).
+func TestSystemTradeUnits(t *testing.T) {
+	m, us := Metric(), USCustomary()
+	for _, c := range []struct{ got, want string }{
+		{m.PressureUnit(), "bar"}, {us.PressureUnit(), "psi"},
+		{m.FlowUnit(), "L/min"}, {us.FlowUnit(), "gpm"},
+		{m.TemperatureUnit(), "°C"}, {us.TemperatureUnit(), "°F"},
+		{m.TemperatureDifferenceUnit(), "K"}, {us.TemperatureDifferenceUnit(), "°F"},
+		{us.FormatTemperatureDifference(10), "18 °F"},
+		{us.FormatAbsolutePressure(StandardAtmosphere), "14.7 psia"},
+	} {
+		if c.got != c.want {
+			t.Errorf("got %q, want %q", c.got, c.want)
+		}
+	}
+}
+
+// TestSystemWithRefuses: a With method takes only a registered unit of its
+// type, and WithDigits 1 to 17; on error it returns the zero System.
+func TestSystemWithRefuses(t *testing.T) {
+	us := USCustomary()
+	for _, c := range []struct {
+		name string
+		do   func() (System, error)
+		want error
+		fn   string
+	}{
+		{"absolute spelling for a gauge pressure", func() (System, error) { return us.WithPressure("psia") }, ErrReference, "units.System.WithPressure"},
+		{"gauge spelling for an absolute pressure", func() (System, error) { return us.WithAbsolutePressure("psi") }, ErrReference, "units.System.WithAbsolutePressure"},
+		{"flow unit for a pressure", func() (System, error) { return us.WithPressure("L/min") }, ErrDimension, "units.System.WithPressure"},
+		{"unknown spelling", func() (System, error) { return us.WithPressure("bra") }, ErrUnknownUnit, "units.System.WithPressure"},
+		{"expression, not a registered unit", func() (System, error) { return us.WithPressure("kN/cm²") }, ErrUnknownUnit, "units.System.WithPressure"},
+		{"empty", func() (System, error) { return us.WithFlow("") }, ErrUnknownUnit, "units.System.WithFlow"},
+		{"Δ spelling is a difference", func() (System, error) { return us.WithTemperature("Δ°F") }, ErrReference, "units.System.WithTemperature"},
+	} {
+		s, err := c.do()
+		var pe *ParseError
+		if !errors.Is(err, c.want) || !errors.As(err, &pe) || pe.Func != c.fn || s != (System{}) {
+			t.Errorf("%s: %v, %v; want the zero System and a *ParseError from %s matching %v", c.name, s, err, c.fn, c.want)
+		}
+	}
+	if _, err := us.WithPressure("bra"); err == nil || !strings.Contains(err.Error(), `"bar"`) {
+		t.Errorf("WithPressure(bra): %v; want a suggestion of bar", err)
+	}
+	for _, n := range []int{0, -1, 18} {
+		s, err := us.WithDigits(n)
+		checktest.RangeErrorIn(t, err, "units.System.WithDigits", "n")
+		if s != (System{}) {
+			t.Errorf("WithDigits(%d) returned %v beside its error", n, s)
+		}
+	}
+	if s, err := us.WithDigits(6); err != nil || s.FormatPressure(1234.5678*PSI) != "1234.57 psi" {
+		t.Errorf("WithDigits(6): %v, %v", s.FormatPressure(1234.5678*PSI), err)
+	}
 }

@@ -2,475 +2,706 @@
 
 package units
 
-// System is a presentation system: for each quantity type, the spelling of
-// the unit that reports use. Copy Metric or USCustomary and change the fields
-// you need; an empty or unknown field falls back to the metric unit (Check
-// reports such fields).
-type System struct {
-	Name                    string // a label, e.g. "metric"
-	Digits                  int    // significant digits; 0 means 4
-	Length                  string
-	Area                    string
-	Volume                  string
-	Mass                    string
-	Force                   string
-	Pressure                string
-	AbsolutePressure        string
-	Flow                    string
-	Velocity                string
-	Displacement            string
-	RotationalSpeed         string
-	Torque                  string
-	Power                   string
-	Energy                  string
-	Temperature             string
-	TemperatureDifference   string
-	KinematicViscosity      string
-	DynamicViscosity        string
-	Density                 string
-	SpecificHeatCapacity    string
-	HeatTransferCoefficient string
-	ThermalConductivity     string
-	Stiffness               string
-	Frequency               string
-	Acceleration            string
-}
+// Slots of System.units, one per quantity type.
+const (
+	slotLength = iota
+	slotArea
+	slotVolume
+	slotMass
+	slotForce
+	slotPressure
+	slotAbsolutePressure
+	slotFlow
+	slotVelocity
+	slotDisplacement
+	slotRotationalSpeed
+	slotTorque
+	slotPower
+	slotEnergy
+	slotTemperature
+	slotTemperatureDifference
+	slotKinematicViscosity
+	slotDynamicViscosity
+	slotDensity
+	slotSpecificHeatCapacity
+	slotHeatTransferCoefficient
+	slotThermalConductivity
+	slotStiffness
+	slotFrequency
+	slotAcceleration
+	numSlots
+)
 
-// Metric is the metric trade system: bar, L/min, kN, mm, cm³/rev, kW, °C, mm²/s.
-var Metric = System{Name: "metric", Digits: 4,
-	Length:                  "mm",
-	Area:                    "cm²",
-	Volume:                  "L",
-	Mass:                    "kg",
-	Force:                   "kN",
-	Pressure:                "bar",
-	AbsolutePressure:        "bara",
-	Flow:                    "L/min",
-	Velocity:                "m/s",
-	Displacement:            "cm³/rev",
-	RotationalSpeed:         "rpm",
-	Torque:                  "N·m",
-	Power:                   "kW",
-	Energy:                  "kJ",
-	Temperature:             "°C",
-	TemperatureDifference:   "K",
-	KinematicViscosity:      "mm²/s",
-	DynamicViscosity:        "mPa·s",
-	Density:                 "kg/m³",
-	SpecificHeatCapacity:    "kJ/(kg·K)",
-	HeatTransferCoefficient: "W/(m²·K)",
-	ThermalConductivity:     "W/(m·K)",
-	Stiffness:               "kN/mm",
-	Frequency:               "Hz",
-	Acceleration:            "m/s²",
-}
+// metricSystem is the metric trade system: bar, L/min, kN, mm, cm³/rev, kW, °C, mm²/s.
+var metricSystem = System{name: "metric", digits: 4, units: [numSlots]uint16{
+	slotLength:                  1 + 1,   // mm
+	slotArea:                    8 + 1,   // cm²
+	slotVolume:                  12 + 1,  // L
+	slotMass:                    18 + 1,  // kg
+	slotForce:                   23 + 1,  // kN
+	slotPressure:                33 + 1,  // bar
+	slotAbsolutePressure:        50 + 1,  // bara
+	slotFlow:                    56 + 1,  // L/min
+	slotVelocity:                62 + 1,  // m/s
+	slotDisplacement:            68 + 1,  // cm³/rev
+	slotRotationalSpeed:         71 + 1,  // rpm
+	slotTorque:                  73 + 1,  // N·m
+	slotPower:                   78 + 1,  // kW
+	slotEnergy:                  83 + 1,  // kJ
+	slotTemperature:             89 + 1,  // °C
+	slotTemperatureDifference:   91 + 1,  // K
+	slotKinematicViscosity:      98 + 1,  // mm²/s
+	slotDynamicViscosity:        102 + 1, // mPa·s
+	slotDensity:                 105 + 1, // kg/m³
+	slotSpecificHeatCapacity:    111 + 1, // kJ/(kg·K)
+	slotHeatTransferCoefficient: 113 + 1, // W/(m²·K)
+	slotThermalConductivity:     115 + 1, // W/(m·K)
+	slotStiffness:               119 + 1, // kN/mm
+	slotFrequency:               121 + 1, // Hz
+	slotAcceleration:            123 + 1, // m/s²
+}}
 
-// USCustomary is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
-var USCustomary = System{Name: "US customary", Digits: 4,
-	Length:                  "in",
-	Area:                    "in²",
-	Volume:                  "gal",
-	Mass:                    "lbm",
-	Force:                   "lbf",
-	Pressure:                "psi",
-	AbsolutePressure:        "psia",
-	Flow:                    "gpm",
-	Velocity:                "ft/s",
-	Displacement:            "in³/rev",
-	RotationalSpeed:         "rpm",
-	Torque:                  "lbf·ft",
-	Power:                   "hp",
-	Energy:                  "BTU",
-	Temperature:             "°F",
-	TemperatureDifference:   "°F",
-	KinematicViscosity:      "cSt",
-	DynamicViscosity:        "cP",
-	Density:                 "lbm/ft³",
-	SpecificHeatCapacity:    "BTU/(lbm·°F)",
-	HeatTransferCoefficient: "BTU/(h·ft²·°F)",
-	ThermalConductivity:     "BTU/(h·ft·°F)",
-	Stiffness:               "lbf/in",
-	Frequency:               "Hz",
-	Acceleration:            "ft/s²",
-}
-
-// Check reports the first field of s whose unit is unknown or of the wrong
-// dimension or reference.
-func (s *System) Check() error {
-	if err := s.checkField("Length", s.Length, &typeLength); err != nil {
-		return err
-	}
-	if err := s.checkField("Area", s.Area, &typeArea); err != nil {
-		return err
-	}
-	if err := s.checkField("Volume", s.Volume, &typeVolume); err != nil {
-		return err
-	}
-	if err := s.checkField("Mass", s.Mass, &typeMass); err != nil {
-		return err
-	}
-	if err := s.checkField("Force", s.Force, &typeForce); err != nil {
-		return err
-	}
-	if err := s.checkField("Pressure", s.Pressure, &typePressure); err != nil {
-		return err
-	}
-	if err := s.checkField("AbsolutePressure", s.AbsolutePressure, &typeAbsolutePressure); err != nil {
-		return err
-	}
-	if err := s.checkField("Flow", s.Flow, &typeFlow); err != nil {
-		return err
-	}
-	if err := s.checkField("Velocity", s.Velocity, &typeVelocity); err != nil {
-		return err
-	}
-	if err := s.checkField("Displacement", s.Displacement, &typeDisplacement); err != nil {
-		return err
-	}
-	if err := s.checkField("RotationalSpeed", s.RotationalSpeed, &typeRotationalSpeed); err != nil {
-		return err
-	}
-	if err := s.checkField("Torque", s.Torque, &typeTorque); err != nil {
-		return err
-	}
-	if err := s.checkField("Power", s.Power, &typePower); err != nil {
-		return err
-	}
-	if err := s.checkField("Energy", s.Energy, &typeEnergy); err != nil {
-		return err
-	}
-	if err := s.checkField("Temperature", s.Temperature, &typeTemperature); err != nil {
-		return err
-	}
-	if err := s.checkField("TemperatureDifference", s.TemperatureDifference, &typeTemperatureDifference); err != nil {
-		return err
-	}
-	if err := s.checkField("KinematicViscosity", s.KinematicViscosity, &typeKinematicViscosity); err != nil {
-		return err
-	}
-	if err := s.checkField("DynamicViscosity", s.DynamicViscosity, &typeDynamicViscosity); err != nil {
-		return err
-	}
-	if err := s.checkField("Density", s.Density, &typeDensity); err != nil {
-		return err
-	}
-	if err := s.checkField("SpecificHeatCapacity", s.SpecificHeatCapacity, &typeSpecificHeatCapacity); err != nil {
-		return err
-	}
-	if err := s.checkField("HeatTransferCoefficient", s.HeatTransferCoefficient, &typeHeatTransferCoefficient); err != nil {
-		return err
-	}
-	if err := s.checkField("ThermalConductivity", s.ThermalConductivity, &typeThermalConductivity); err != nil {
-		return err
-	}
-	if err := s.checkField("Stiffness", s.Stiffness, &typeStiffness); err != nil {
-		return err
-	}
-	if err := s.checkField("Frequency", s.Frequency, &typeFrequency); err != nil {
-		return err
-	}
-	if err := s.checkField("Acceleration", s.Acceleration, &typeAcceleration); err != nil {
-		return err
-	}
-	return nil
-}
+// usCustomarySystem is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
+var usCustomarySystem = System{name: "US customary", digits: 4, units: [numSlots]uint16{
+	slotLength:                  4 + 1,   // in
+	slotArea:                    9 + 1,   // in²
+	slotVolume:                  16 + 1,  // gal
+	slotMass:                    21 + 1,  // lbm
+	slotForce:                   24 + 1,  // lbf
+	slotPressure:                35 + 1,  // psi
+	slotAbsolutePressure:        51 + 1,  // psia
+	slotFlow:                    59 + 1,  // gpm
+	slotVelocity:                64 + 1,  // ft/s
+	slotDisplacement:            69 + 1,  // in³/rev
+	slotRotationalSpeed:         71 + 1,  // rpm
+	slotTorque:                  75 + 1,  // lbf·ft
+	slotPower:                   79 + 1,  // hp
+	slotEnergy:                  86 + 1,  // BTU
+	slotTemperature:             90 + 1,  // °F
+	slotTemperatureDifference:   93 + 1,  // °F
+	slotKinematicViscosity:      99 + 1,  // cSt
+	slotDynamicViscosity:        103 + 1, // cP
+	slotDensity:                 108 + 1, // lbm/ft³
+	slotSpecificHeatCapacity:    112 + 1, // BTU/(lbm·°F)
+	slotHeatTransferCoefficient: 114 + 1, // BTU/(h·ft²·°F)
+	slotThermalConductivity:     116 + 1, // BTU/(h·ft·°F)
+	slotStiffness:               120 + 1, // lbf/in
+	slotFrequency:               121 + 1, // Hz
+	slotAcceleration:            125 + 1, // ft/s²
+}}
 
 // AppendLength appends q in the system's unit for Length to b.
 // It does not allocate when b has room.
-func (s *System) AppendLength(b []byte, q Length) []byte {
-	return appendIn(b, float64(q), s.unit(s.Length, &typeLength, metricLength), s.digits())
+func (s System) AppendLength(b []byte, q Length) []byte {
+	return appendIn(b, float64(q), s.unit(slotLength, metricLength), s.Digits())
 }
 
 // FormatLength formats q in the system's unit for Length.
-func (s *System) FormatLength(q Length) string {
+func (s System) FormatLength(q Length) string {
 	var buf [40]byte
 	return string(s.AppendLength(buf[:0], q))
 }
 
+// LengthUnit returns the spelling of the unit s writes a Length in,
+// such as "mm".
+func (s System) LengthUnit() string { return s.unit(slotLength, metricLength).sym }
+
+// WithLength returns a copy of s that writes a Length in the
+// registered unit spelled unit, such as mm, in, m, cm; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of length.
+func (s System) WithLength(unit string) (System, error) {
+	return s.with(slotLength, "units.System.WithLength", unit, &typeLength)
+}
+
 // AppendArea appends q in the system's unit for Area to b.
 // It does not allocate when b has room.
-func (s *System) AppendArea(b []byte, q Area) []byte {
-	return appendIn(b, float64(q), s.unit(s.Area, &typeArea, metricArea), s.digits())
+func (s System) AppendArea(b []byte, q Area) []byte {
+	return appendIn(b, float64(q), s.unit(slotArea, metricArea), s.Digits())
 }
 
 // FormatArea formats q in the system's unit for Area.
-func (s *System) FormatArea(q Area) string {
+func (s System) FormatArea(q Area) string {
 	var buf [40]byte
 	return string(s.AppendArea(buf[:0], q))
 }
 
+// AreaUnit returns the spelling of the unit s writes a Area in,
+// such as "cm²".
+func (s System) AreaUnit() string { return s.unit(slotArea, metricArea).sym }
+
+// WithArea returns a copy of s that writes a Area in the
+// registered unit spelled unit, such as cm², in², m², mm²; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of area.
+func (s System) WithArea(unit string) (System, error) {
+	return s.with(slotArea, "units.System.WithArea", unit, &typeArea)
+}
+
 // AppendVolume appends q in the system's unit for Volume to b.
 // It does not allocate when b has room.
-func (s *System) AppendVolume(b []byte, q Volume) []byte {
-	return appendIn(b, float64(q), s.unit(s.Volume, &typeVolume, metricVolume), s.digits())
+func (s System) AppendVolume(b []byte, q Volume) []byte {
+	return appendIn(b, float64(q), s.unit(slotVolume, metricVolume), s.Digits())
 }
 
 // FormatVolume formats q in the system's unit for Volume.
-func (s *System) FormatVolume(q Volume) string {
+func (s System) FormatVolume(q Volume) string {
 	var buf [40]byte
 	return string(s.AppendVolume(buf[:0], q))
 }
 
+// VolumeUnit returns the spelling of the unit s writes a Volume in,
+// such as "L".
+func (s System) VolumeUnit() string { return s.unit(slotVolume, metricVolume).sym }
+
+// WithVolume returns a copy of s that writes a Volume in the
+// registered unit spelled unit, such as L, gal, m³, mL; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of volume.
+func (s System) WithVolume(unit string) (System, error) {
+	return s.with(slotVolume, "units.System.WithVolume", unit, &typeVolume)
+}
+
 // AppendMass appends q in the system's unit for Mass to b.
 // It does not allocate when b has room.
-func (s *System) AppendMass(b []byte, q Mass) []byte {
-	return appendIn(b, float64(q), s.unit(s.Mass, &typeMass, metricMass), s.digits())
+func (s System) AppendMass(b []byte, q Mass) []byte {
+	return appendIn(b, float64(q), s.unit(slotMass, metricMass), s.Digits())
 }
 
 // FormatMass formats q in the system's unit for Mass.
-func (s *System) FormatMass(q Mass) string {
+func (s System) FormatMass(q Mass) string {
 	var buf [40]byte
 	return string(s.AppendMass(buf[:0], q))
 }
 
+// MassUnit returns the spelling of the unit s writes a Mass in,
+// such as "kg".
+func (s System) MassUnit() string { return s.unit(slotMass, metricMass).sym }
+
+// WithMass returns a copy of s that writes a Mass in the
+// registered unit spelled unit, such as kg, lbm, g, t; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of mass.
+func (s System) WithMass(unit string) (System, error) {
+	return s.with(slotMass, "units.System.WithMass", unit, &typeMass)
+}
+
 // AppendForce appends q in the system's unit for Force to b.
 // It does not allocate when b has room.
-func (s *System) AppendForce(b []byte, q Force) []byte {
-	return appendIn(b, float64(q), s.unit(s.Force, &typeForce, metricForce), s.digits())
+func (s System) AppendForce(b []byte, q Force) []byte {
+	return appendIn(b, float64(q), s.unit(slotForce, metricForce), s.Digits())
 }
 
 // FormatForce formats q in the system's unit for Force.
-func (s *System) FormatForce(q Force) string {
+func (s System) FormatForce(q Force) string {
 	var buf [40]byte
 	return string(s.AppendForce(buf[:0], q))
 }
 
+// ForceUnit returns the spelling of the unit s writes a Force in,
+// such as "kN".
+func (s System) ForceUnit() string { return s.unit(slotForce, metricForce).sym }
+
+// WithForce returns a copy of s that writes a Force in the
+// registered unit spelled unit, such as kN, lbf, N, kgf; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of force.
+func (s System) WithForce(unit string) (System, error) {
+	return s.with(slotForce, "units.System.WithForce", unit, &typeForce)
+}
+
 // AppendPressure appends q in the system's unit for Pressure to b.
 // It does not allocate when b has room.
-func (s *System) AppendPressure(b []byte, q Pressure) []byte {
-	return appendIn(b, float64(q), s.unit(s.Pressure, &typePressure, metricPressure), s.digits())
+func (s System) AppendPressure(b []byte, q Pressure) []byte {
+	return appendIn(b, float64(q), s.unit(slotPressure, metricPressure), s.Digits())
 }
 
 // FormatPressure formats q in the system's unit for Pressure.
-func (s *System) FormatPressure(q Pressure) string {
+func (s System) FormatPressure(q Pressure) string {
 	var buf [40]byte
 	return string(s.AppendPressure(buf[:0], q))
 }
 
+// PressureUnit returns the spelling of the unit s writes a Pressure in,
+// such as "bar".
+func (s System) PressureUnit() string { return s.unit(slotPressure, metricPressure).sym }
+
+// WithPressure returns a copy of s that writes a Pressure in the
+// registered unit spelled unit, such as bar, psi, Pa, kPa; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of pressure.
+func (s System) WithPressure(unit string) (System, error) {
+	return s.with(slotPressure, "units.System.WithPressure", unit, &typePressure)
+}
+
 // AppendAbsolutePressure appends q in the system's unit for AbsolutePressure to b.
 // It does not allocate when b has room.
-func (s *System) AppendAbsolutePressure(b []byte, q AbsolutePressure) []byte {
-	return appendIn(b, float64(q), s.unit(s.AbsolutePressure, &typeAbsolutePressure, metricAbsolutePressure), s.digits())
+func (s System) AppendAbsolutePressure(b []byte, q AbsolutePressure) []byte {
+	return appendIn(b, float64(q), s.unit(slotAbsolutePressure, metricAbsolutePressure), s.Digits())
 }
 
 // FormatAbsolutePressure formats q in the system's unit for AbsolutePressure.
-func (s *System) FormatAbsolutePressure(q AbsolutePressure) string {
+func (s System) FormatAbsolutePressure(q AbsolutePressure) string {
 	var buf [40]byte
 	return string(s.AppendAbsolutePressure(buf[:0], q))
 }
 
+// AbsolutePressureUnit returns the spelling of the unit s writes a AbsolutePressure in,
+// such as "bara".
+func (s System) AbsolutePressureUnit() string {
+	return s.unit(slotAbsolutePressure, metricAbsolutePressure).sym
+}
+
+// WithAbsolutePressure returns a copy of s that writes a AbsolutePressure in the
+// registered unit spelled unit, such as bara, psia, Pa(a), kPa(a); s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of absolute pressure.
+func (s System) WithAbsolutePressure(unit string) (System, error) {
+	return s.with(slotAbsolutePressure, "units.System.WithAbsolutePressure", unit, &typeAbsolutePressure)
+}
+
 // AppendFlow appends q in the system's unit for Flow to b.
 // It does not allocate when b has room.
-func (s *System) AppendFlow(b []byte, q Flow) []byte {
-	return appendIn(b, float64(q), s.unit(s.Flow, &typeFlow, metricFlow), s.digits())
+func (s System) AppendFlow(b []byte, q Flow) []byte {
+	return appendIn(b, float64(q), s.unit(slotFlow, metricFlow), s.Digits())
 }
 
 // FormatFlow formats q in the system's unit for Flow.
-func (s *System) FormatFlow(q Flow) string {
+func (s System) FormatFlow(q Flow) string {
 	var buf [40]byte
 	return string(s.AppendFlow(buf[:0], q))
 }
 
+// FlowUnit returns the spelling of the unit s writes a Flow in,
+// such as "L/min".
+func (s System) FlowUnit() string { return s.unit(slotFlow, metricFlow).sym }
+
+// WithFlow returns a copy of s that writes a Flow in the
+// registered unit spelled unit, such as L/min, gpm, m³/s, L/s; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of volume flow.
+func (s System) WithFlow(unit string) (System, error) {
+	return s.with(slotFlow, "units.System.WithFlow", unit, &typeFlow)
+}
+
 // AppendVelocity appends q in the system's unit for Velocity to b.
 // It does not allocate when b has room.
-func (s *System) AppendVelocity(b []byte, q Velocity) []byte {
-	return appendIn(b, float64(q), s.unit(s.Velocity, &typeVelocity, metricVelocity), s.digits())
+func (s System) AppendVelocity(b []byte, q Velocity) []byte {
+	return appendIn(b, float64(q), s.unit(slotVelocity, metricVelocity), s.Digits())
 }
 
 // FormatVelocity formats q in the system's unit for Velocity.
-func (s *System) FormatVelocity(q Velocity) string {
+func (s System) FormatVelocity(q Velocity) string {
 	var buf [40]byte
 	return string(s.AppendVelocity(buf[:0], q))
 }
 
+// VelocityUnit returns the spelling of the unit s writes a Velocity in,
+// such as "m/s".
+func (s System) VelocityUnit() string { return s.unit(slotVelocity, metricVelocity).sym }
+
+// WithVelocity returns a copy of s that writes a Velocity in the
+// registered unit spelled unit, such as m/s, ft/s, mm/s, in/s; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of velocity.
+func (s System) WithVelocity(unit string) (System, error) {
+	return s.with(slotVelocity, "units.System.WithVelocity", unit, &typeVelocity)
+}
+
 // AppendDisplacement appends q in the system's unit for Displacement to b.
 // It does not allocate when b has room.
-func (s *System) AppendDisplacement(b []byte, q Displacement) []byte {
-	return appendIn(b, float64(q), s.unit(s.Displacement, &typeDisplacement, metricDisplacement), s.digits())
+func (s System) AppendDisplacement(b []byte, q Displacement) []byte {
+	return appendIn(b, float64(q), s.unit(slotDisplacement, metricDisplacement), s.Digits())
 }
 
 // FormatDisplacement formats q in the system's unit for Displacement.
-func (s *System) FormatDisplacement(q Displacement) string {
+func (s System) FormatDisplacement(q Displacement) string {
 	var buf [40]byte
 	return string(s.AppendDisplacement(buf[:0], q))
 }
 
+// DisplacementUnit returns the spelling of the unit s writes a Displacement in,
+// such as "cm³/rev".
+func (s System) DisplacementUnit() string { return s.unit(slotDisplacement, metricDisplacement).sym }
+
+// WithDisplacement returns a copy of s that writes a Displacement in the
+// registered unit spelled unit, such as cm³/rev, in³/rev, m³/rev; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of displacement.
+func (s System) WithDisplacement(unit string) (System, error) {
+	return s.with(slotDisplacement, "units.System.WithDisplacement", unit, &typeDisplacement)
+}
+
 // AppendRotationalSpeed appends q in the system's unit for RotationalSpeed to b.
 // It does not allocate when b has room.
-func (s *System) AppendRotationalSpeed(b []byte, q RotationalSpeed) []byte {
-	return appendIn(b, float64(q), s.unit(s.RotationalSpeed, &typeRotationalSpeed, metricRotationalSpeed), s.digits())
+func (s System) AppendRotationalSpeed(b []byte, q RotationalSpeed) []byte {
+	return appendIn(b, float64(q), s.unit(slotRotationalSpeed, metricRotationalSpeed), s.Digits())
 }
 
 // FormatRotationalSpeed formats q in the system's unit for RotationalSpeed.
-func (s *System) FormatRotationalSpeed(q RotationalSpeed) string {
+func (s System) FormatRotationalSpeed(q RotationalSpeed) string {
 	var buf [40]byte
 	return string(s.AppendRotationalSpeed(buf[:0], q))
 }
 
+// RotationalSpeedUnit returns the spelling of the unit s writes a RotationalSpeed in,
+// such as "rpm".
+func (s System) RotationalSpeedUnit() string {
+	return s.unit(slotRotationalSpeed, metricRotationalSpeed).sym
+}
+
+// WithRotationalSpeed returns a copy of s that writes a RotationalSpeed in the
+// registered unit spelled unit, such as rpm, rev/s, rad/s; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of rotational speed.
+func (s System) WithRotationalSpeed(unit string) (System, error) {
+	return s.with(slotRotationalSpeed, "units.System.WithRotationalSpeed", unit, &typeRotationalSpeed)
+}
+
 // AppendTorque appends q in the system's unit for Torque to b.
 // It does not allocate when b has room.
-func (s *System) AppendTorque(b []byte, q Torque) []byte {
-	return appendIn(b, float64(q), s.unit(s.Torque, &typeTorque, metricTorque), s.digits())
+func (s System) AppendTorque(b []byte, q Torque) []byte {
+	return appendIn(b, float64(q), s.unit(slotTorque, metricTorque), s.Digits())
 }
 
 // FormatTorque formats q in the system's unit for Torque.
-func (s *System) FormatTorque(q Torque) string {
+func (s System) FormatTorque(q Torque) string {
 	var buf [40]byte
 	return string(s.AppendTorque(buf[:0], q))
 }
 
+// TorqueUnit returns the spelling of the unit s writes a Torque in,
+// such as "N·m".
+func (s System) TorqueUnit() string { return s.unit(slotTorque, metricTorque).sym }
+
+// WithTorque returns a copy of s that writes a Torque in the
+// registered unit spelled unit, such as N·m, lbf·ft, kN·m, lbf·in; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of torque.
+func (s System) WithTorque(unit string) (System, error) {
+	return s.with(slotTorque, "units.System.WithTorque", unit, &typeTorque)
+}
+
 // AppendPower appends q in the system's unit for Power to b.
 // It does not allocate when b has room.
-func (s *System) AppendPower(b []byte, q Power) []byte {
-	return appendIn(b, float64(q), s.unit(s.Power, &typePower, metricPower), s.digits())
+func (s System) AppendPower(b []byte, q Power) []byte {
+	return appendIn(b, float64(q), s.unit(slotPower, metricPower), s.Digits())
 }
 
 // FormatPower formats q in the system's unit for Power.
-func (s *System) FormatPower(q Power) string {
+func (s System) FormatPower(q Power) string {
 	var buf [40]byte
 	return string(s.AppendPower(buf[:0], q))
 }
 
+// PowerUnit returns the spelling of the unit s writes a Power in,
+// such as "kW".
+func (s System) PowerUnit() string { return s.unit(slotPower, metricPower).sym }
+
+// WithPower returns a copy of s that writes a Power in the
+// registered unit spelled unit, such as kW, hp, W, PS; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of power.
+func (s System) WithPower(unit string) (System, error) {
+	return s.with(slotPower, "units.System.WithPower", unit, &typePower)
+}
+
 // AppendEnergy appends q in the system's unit for Energy to b.
 // It does not allocate when b has room.
-func (s *System) AppendEnergy(b []byte, q Energy) []byte {
-	return appendIn(b, float64(q), s.unit(s.Energy, &typeEnergy, metricEnergy), s.digits())
+func (s System) AppendEnergy(b []byte, q Energy) []byte {
+	return appendIn(b, float64(q), s.unit(slotEnergy, metricEnergy), s.Digits())
 }
 
 // FormatEnergy formats q in the system's unit for Energy.
-func (s *System) FormatEnergy(q Energy) string {
+func (s System) FormatEnergy(q Energy) string {
 	var buf [40]byte
 	return string(s.AppendEnergy(buf[:0], q))
 }
 
+// EnergyUnit returns the spelling of the unit s writes a Energy in,
+// such as "kJ".
+func (s System) EnergyUnit() string { return s.unit(slotEnergy, metricEnergy).sym }
+
+// WithEnergy returns a copy of s that writes a Energy in the
+// registered unit spelled unit, such as kJ, BTU, J, MJ; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of energy.
+func (s System) WithEnergy(unit string) (System, error) {
+	return s.with(slotEnergy, "units.System.WithEnergy", unit, &typeEnergy)
+}
+
 // AppendTemperature appends q in the system's unit for Temperature to b.
 // It does not allocate when b has room.
-func (s *System) AppendTemperature(b []byte, q Temperature) []byte {
-	return appendIn(b, float64(q), s.unit(s.Temperature, &typeTemperature, metricTemperature), s.digits())
+func (s System) AppendTemperature(b []byte, q Temperature) []byte {
+	return appendIn(b, float64(q), s.unit(slotTemperature, metricTemperature), s.Digits())
 }
 
 // FormatTemperature formats q in the system's unit for Temperature.
-func (s *System) FormatTemperature(q Temperature) string {
+func (s System) FormatTemperature(q Temperature) string {
 	var buf [40]byte
 	return string(s.AppendTemperature(buf[:0], q))
 }
 
+// TemperatureUnit returns the spelling of the unit s writes a Temperature in,
+// such as "°C".
+func (s System) TemperatureUnit() string { return s.unit(slotTemperature, metricTemperature).sym }
+
+// WithTemperature returns a copy of s that writes a Temperature in the
+// registered unit spelled unit, such as °C, °F, K, °R; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of temperature.
+func (s System) WithTemperature(unit string) (System, error) {
+	return s.with(slotTemperature, "units.System.WithTemperature", unit, &typeTemperature)
+}
+
 // AppendTemperatureDifference appends q in the system's unit for TemperatureDifference to b.
 // It does not allocate when b has room.
-func (s *System) AppendTemperatureDifference(b []byte, q TemperatureDifference) []byte {
-	return appendIn(b, float64(q), s.unit(s.TemperatureDifference, &typeTemperatureDifference, metricTemperatureDifference), s.digits())
+func (s System) AppendTemperatureDifference(b []byte, q TemperatureDifference) []byte {
+	return appendIn(b, float64(q), s.unit(slotTemperatureDifference, metricTemperatureDifference), s.Digits())
 }
 
 // FormatTemperatureDifference formats q in the system's unit for TemperatureDifference.
-func (s *System) FormatTemperatureDifference(q TemperatureDifference) string {
+func (s System) FormatTemperatureDifference(q TemperatureDifference) string {
 	var buf [40]byte
 	return string(s.AppendTemperatureDifference(buf[:0], q))
 }
 
+// TemperatureDifferenceUnit returns the spelling of the unit s writes a TemperatureDifference in,
+// such as "K".
+func (s System) TemperatureDifferenceUnit() string {
+	return s.unit(slotTemperatureDifference, metricTemperatureDifference).sym
+}
+
+// WithTemperatureDifference returns a copy of s that writes a TemperatureDifference in the
+// registered unit spelled unit, such as K, °F, ΔK, Δ°C; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of temperature difference.
+func (s System) WithTemperatureDifference(unit string) (System, error) {
+	return s.with(slotTemperatureDifference, "units.System.WithTemperatureDifference", unit, &typeTemperatureDifference)
+}
+
 // AppendKinematicViscosity appends q in the system's unit for KinematicViscosity to b.
 // It does not allocate when b has room.
-func (s *System) AppendKinematicViscosity(b []byte, q KinematicViscosity) []byte {
-	return appendIn(b, float64(q), s.unit(s.KinematicViscosity, &typeKinematicViscosity, metricKinematicViscosity), s.digits())
+func (s System) AppendKinematicViscosity(b []byte, q KinematicViscosity) []byte {
+	return appendIn(b, float64(q), s.unit(slotKinematicViscosity, metricKinematicViscosity), s.Digits())
 }
 
 // FormatKinematicViscosity formats q in the system's unit for KinematicViscosity.
-func (s *System) FormatKinematicViscosity(q KinematicViscosity) string {
+func (s System) FormatKinematicViscosity(q KinematicViscosity) string {
 	var buf [40]byte
 	return string(s.AppendKinematicViscosity(buf[:0], q))
 }
 
+// KinematicViscosityUnit returns the spelling of the unit s writes a KinematicViscosity in,
+// such as "mm²/s".
+func (s System) KinematicViscosityUnit() string {
+	return s.unit(slotKinematicViscosity, metricKinematicViscosity).sym
+}
+
+// WithKinematicViscosity returns a copy of s that writes a KinematicViscosity in the
+// registered unit spelled unit, such as mm²/s, cSt, m²/s, St; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of kinematic viscosity.
+func (s System) WithKinematicViscosity(unit string) (System, error) {
+	return s.with(slotKinematicViscosity, "units.System.WithKinematicViscosity", unit, &typeKinematicViscosity)
+}
+
 // AppendDynamicViscosity appends q in the system's unit for DynamicViscosity to b.
 // It does not allocate when b has room.
-func (s *System) AppendDynamicViscosity(b []byte, q DynamicViscosity) []byte {
-	return appendIn(b, float64(q), s.unit(s.DynamicViscosity, &typeDynamicViscosity, metricDynamicViscosity), s.digits())
+func (s System) AppendDynamicViscosity(b []byte, q DynamicViscosity) []byte {
+	return appendIn(b, float64(q), s.unit(slotDynamicViscosity, metricDynamicViscosity), s.Digits())
 }
 
 // FormatDynamicViscosity formats q in the system's unit for DynamicViscosity.
-func (s *System) FormatDynamicViscosity(q DynamicViscosity) string {
+func (s System) FormatDynamicViscosity(q DynamicViscosity) string {
 	var buf [40]byte
 	return string(s.AppendDynamicViscosity(buf[:0], q))
 }
 
+// DynamicViscosityUnit returns the spelling of the unit s writes a DynamicViscosity in,
+// such as "mPa·s".
+func (s System) DynamicViscosityUnit() string {
+	return s.unit(slotDynamicViscosity, metricDynamicViscosity).sym
+}
+
+// WithDynamicViscosity returns a copy of s that writes a DynamicViscosity in the
+// registered unit spelled unit, such as mPa·s, cP, Pa·s, P; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of dynamic viscosity.
+func (s System) WithDynamicViscosity(unit string) (System, error) {
+	return s.with(slotDynamicViscosity, "units.System.WithDynamicViscosity", unit, &typeDynamicViscosity)
+}
+
 // AppendDensity appends q in the system's unit for Density to b.
 // It does not allocate when b has room.
-func (s *System) AppendDensity(b []byte, q Density) []byte {
-	return appendIn(b, float64(q), s.unit(s.Density, &typeDensity, metricDensity), s.digits())
+func (s System) AppendDensity(b []byte, q Density) []byte {
+	return appendIn(b, float64(q), s.unit(slotDensity, metricDensity), s.Digits())
 }
 
 // FormatDensity formats q in the system's unit for Density.
-func (s *System) FormatDensity(q Density) string {
+func (s System) FormatDensity(q Density) string {
 	var buf [40]byte
 	return string(s.AppendDensity(buf[:0], q))
 }
 
+// DensityUnit returns the spelling of the unit s writes a Density in,
+// such as "kg/m³".
+func (s System) DensityUnit() string { return s.unit(slotDensity, metricDensity).sym }
+
+// WithDensity returns a copy of s that writes a Density in the
+// registered unit spelled unit, such as kg/m³, lbm/ft³, g/cm³, kg/L; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of density.
+func (s System) WithDensity(unit string) (System, error) {
+	return s.with(slotDensity, "units.System.WithDensity", unit, &typeDensity)
+}
+
 // AppendSpecificHeatCapacity appends q in the system's unit for SpecificHeatCapacity to b.
 // It does not allocate when b has room.
-func (s *System) AppendSpecificHeatCapacity(b []byte, q SpecificHeatCapacity) []byte {
-	return appendIn(b, float64(q), s.unit(s.SpecificHeatCapacity, &typeSpecificHeatCapacity, metricSpecificHeatCapacity), s.digits())
+func (s System) AppendSpecificHeatCapacity(b []byte, q SpecificHeatCapacity) []byte {
+	return appendIn(b, float64(q), s.unit(slotSpecificHeatCapacity, metricSpecificHeatCapacity), s.Digits())
 }
 
 // FormatSpecificHeatCapacity formats q in the system's unit for SpecificHeatCapacity.
-func (s *System) FormatSpecificHeatCapacity(q SpecificHeatCapacity) string {
+func (s System) FormatSpecificHeatCapacity(q SpecificHeatCapacity) string {
 	var buf [40]byte
 	return string(s.AppendSpecificHeatCapacity(buf[:0], q))
 }
 
+// SpecificHeatCapacityUnit returns the spelling of the unit s writes a SpecificHeatCapacity in,
+// such as "kJ/(kg·K)".
+func (s System) SpecificHeatCapacityUnit() string {
+	return s.unit(slotSpecificHeatCapacity, metricSpecificHeatCapacity).sym
+}
+
+// WithSpecificHeatCapacity returns a copy of s that writes a SpecificHeatCapacity in the
+// registered unit spelled unit, such as kJ/(kg·K), BTU/(lbm·°F), J/(kg·K); s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of specific heat capacity.
+func (s System) WithSpecificHeatCapacity(unit string) (System, error) {
+	return s.with(slotSpecificHeatCapacity, "units.System.WithSpecificHeatCapacity", unit, &typeSpecificHeatCapacity)
+}
+
 // AppendHeatTransferCoefficient appends q in the system's unit for HeatTransferCoefficient to b.
 // It does not allocate when b has room.
-func (s *System) AppendHeatTransferCoefficient(b []byte, q HeatTransferCoefficient) []byte {
-	return appendIn(b, float64(q), s.unit(s.HeatTransferCoefficient, &typeHeatTransferCoefficient, metricHeatTransferCoefficient), s.digits())
+func (s System) AppendHeatTransferCoefficient(b []byte, q HeatTransferCoefficient) []byte {
+	return appendIn(b, float64(q), s.unit(slotHeatTransferCoefficient, metricHeatTransferCoefficient), s.Digits())
 }
 
 // FormatHeatTransferCoefficient formats q in the system's unit for HeatTransferCoefficient.
-func (s *System) FormatHeatTransferCoefficient(q HeatTransferCoefficient) string {
+func (s System) FormatHeatTransferCoefficient(q HeatTransferCoefficient) string {
 	var buf [40]byte
 	return string(s.AppendHeatTransferCoefficient(buf[:0], q))
 }
 
+// HeatTransferCoefficientUnit returns the spelling of the unit s writes a HeatTransferCoefficient in,
+// such as "W/(m²·K)".
+func (s System) HeatTransferCoefficientUnit() string {
+	return s.unit(slotHeatTransferCoefficient, metricHeatTransferCoefficient).sym
+}
+
+// WithHeatTransferCoefficient returns a copy of s that writes a HeatTransferCoefficient in the
+// registered unit spelled unit, such as W/(m²·K), BTU/(h·ft²·°F); s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of heat transfer coefficient.
+func (s System) WithHeatTransferCoefficient(unit string) (System, error) {
+	return s.with(slotHeatTransferCoefficient, "units.System.WithHeatTransferCoefficient", unit, &typeHeatTransferCoefficient)
+}
+
 // AppendThermalConductivity appends q in the system's unit for ThermalConductivity to b.
 // It does not allocate when b has room.
-func (s *System) AppendThermalConductivity(b []byte, q ThermalConductivity) []byte {
-	return appendIn(b, float64(q), s.unit(s.ThermalConductivity, &typeThermalConductivity, metricThermalConductivity), s.digits())
+func (s System) AppendThermalConductivity(b []byte, q ThermalConductivity) []byte {
+	return appendIn(b, float64(q), s.unit(slotThermalConductivity, metricThermalConductivity), s.Digits())
 }
 
 // FormatThermalConductivity formats q in the system's unit for ThermalConductivity.
-func (s *System) FormatThermalConductivity(q ThermalConductivity) string {
+func (s System) FormatThermalConductivity(q ThermalConductivity) string {
 	var buf [40]byte
 	return string(s.AppendThermalConductivity(buf[:0], q))
 }
 
+// ThermalConductivityUnit returns the spelling of the unit s writes a ThermalConductivity in,
+// such as "W/(m·K)".
+func (s System) ThermalConductivityUnit() string {
+	return s.unit(slotThermalConductivity, metricThermalConductivity).sym
+}
+
+// WithThermalConductivity returns a copy of s that writes a ThermalConductivity in the
+// registered unit spelled unit, such as W/(m·K), BTU/(h·ft·°F); s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of thermal conductivity.
+func (s System) WithThermalConductivity(unit string) (System, error) {
+	return s.with(slotThermalConductivity, "units.System.WithThermalConductivity", unit, &typeThermalConductivity)
+}
+
 // AppendStiffness appends q in the system's unit for Stiffness to b.
 // It does not allocate when b has room.
-func (s *System) AppendStiffness(b []byte, q Stiffness) []byte {
-	return appendIn(b, float64(q), s.unit(s.Stiffness, &typeStiffness, metricStiffness), s.digits())
+func (s System) AppendStiffness(b []byte, q Stiffness) []byte {
+	return appendIn(b, float64(q), s.unit(slotStiffness, metricStiffness), s.Digits())
 }
 
 // FormatStiffness formats q in the system's unit for Stiffness.
-func (s *System) FormatStiffness(q Stiffness) string {
+func (s System) FormatStiffness(q Stiffness) string {
 	var buf [40]byte
 	return string(s.AppendStiffness(buf[:0], q))
 }
 
+// StiffnessUnit returns the spelling of the unit s writes a Stiffness in,
+// such as "kN/mm".
+func (s System) StiffnessUnit() string { return s.unit(slotStiffness, metricStiffness).sym }
+
+// WithStiffness returns a copy of s that writes a Stiffness in the
+// registered unit spelled unit, such as kN/mm, lbf/in, N/m, N/mm; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of stiffness.
+func (s System) WithStiffness(unit string) (System, error) {
+	return s.with(slotStiffness, "units.System.WithStiffness", unit, &typeStiffness)
+}
+
 // AppendFrequency appends q in the system's unit for Frequency to b.
 // It does not allocate when b has room.
-func (s *System) AppendFrequency(b []byte, q Frequency) []byte {
-	return appendIn(b, float64(q), s.unit(s.Frequency, &typeFrequency, metricFrequency), s.digits())
+func (s System) AppendFrequency(b []byte, q Frequency) []byte {
+	return appendIn(b, float64(q), s.unit(slotFrequency, metricFrequency), s.Digits())
 }
 
 // FormatFrequency formats q in the system's unit for Frequency.
-func (s *System) FormatFrequency(q Frequency) string {
+func (s System) FormatFrequency(q Frequency) string {
 	var buf [40]byte
 	return string(s.AppendFrequency(buf[:0], q))
 }
 
+// FrequencyUnit returns the spelling of the unit s writes a Frequency in,
+// such as "Hz".
+func (s System) FrequencyUnit() string { return s.unit(slotFrequency, metricFrequency).sym }
+
+// WithFrequency returns a copy of s that writes a Frequency in the
+// registered unit spelled unit, such as Hz, cpm; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of frequency.
+func (s System) WithFrequency(unit string) (System, error) {
+	return s.with(slotFrequency, "units.System.WithFrequency", unit, &typeFrequency)
+}
+
 // AppendAcceleration appends q in the system's unit for Acceleration to b.
 // It does not allocate when b has room.
-func (s *System) AppendAcceleration(b []byte, q Acceleration) []byte {
-	return appendIn(b, float64(q), s.unit(s.Acceleration, &typeAcceleration, metricAcceleration), s.digits())
+func (s System) AppendAcceleration(b []byte, q Acceleration) []byte {
+	return appendIn(b, float64(q), s.unit(slotAcceleration, metricAcceleration), s.Digits())
 }
 
 // FormatAcceleration formats q in the system's unit for Acceleration.
-func (s *System) FormatAcceleration(q Acceleration) string {
+func (s System) FormatAcceleration(q Acceleration) string {
 	var buf [40]byte
 	return string(s.AppendAcceleration(buf[:0], q))
+}
+
+// AccelerationUnit returns the spelling of the unit s writes a Acceleration in,
+// such as "m/s²".
+func (s System) AccelerationUnit() string { return s.unit(slotAcceleration, metricAcceleration).sym }
+
+// WithAcceleration returns a copy of s that writes a Acceleration in the
+// registered unit spelled unit, such as m/s², ft/s², g₀; s itself is not
+// changed. It fails, returning the zero System, when unit is not a
+// registered spelling of a unit of acceleration.
+func (s System) WithAcceleration(unit string) (System, error) {
+	return s.with(slotAcceleration, "units.System.WithAcceleration", unit, &typeAcceleration)
 }

@@ -9,11 +9,13 @@ import (
 )
 
 // marshalText writes v in unit u when the shortest decimal of the number reads
-// back to exactly v, else in the SI unit; either way parsing restores v.
+// back to exactly v, else in the SI unit; either way parsing restores v. A
+// value that parsing would refuse (not finite, or below t's lower bound) is
+// an error instead.
 func marshalText(v float64, u *unitDef, t *typeInfo) ([]byte, error) {
-	if math.IsInf(v, 0) || math.IsNaN(v) {
-		return nil, &RangeError{Func: "units." + t.name + ".MarshalText", Param: "value",
-			Value: strconv.FormatFloat(v, 'g', -1, 64), Valid: "finite"}
+	if math.IsInf(v, 0) || math.IsNaN(v) || t.hasMin && v < t.min {
+		return nil, &RangeError{Func: "units." + t.name + ".MarshalText", Param: "q",
+			Value: strconv.FormatFloat(v, 'g', -1, 64) + " " + siUnit(t).sym, Valid: t.valid()}
 	}
 	b := make([]byte, 0, 32)
 	if x := fromSI(v, u); !math.IsInf(x, 0) {

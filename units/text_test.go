@@ -2,10 +2,14 @@ package units
 
 import (
 	"encoding/json"
+	"errors"
 	"math"
+	"math/rand/v2"
 	"strconv"
 	"strings"
 	"testing"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
 // fuzzUnmarshal fuzzes UnmarshalText of one type: it must agree with the
@@ -158,6 +162,59 @@ func TestTextRoundTrip(t *testing.T) {
 				continue
 			}
 			c.text(t, v)
+		}
+	}
+}
+
+// TestMarshalTextRefusesWhatUnmarshalRefuses: MarshalText of a value that
+// UnmarshalText would refuse (NaN, ±Inf, a temperature below 0 K, a negative
+// absolute pressure) is a *RangeError, so json.Marshal fails instead of
+// writing a document that cannot be read back.
+func TestMarshalTextRefusesWhatUnmarshalRefuses(t *testing.T) {
+	for i, c := range typedCases {
+		info := allTypes[i]
+		bad := []float64{math.NaN(), math.Inf(1), math.Inf(-1)}
+		if info.hasMin {
+			bad = append(bad, -math.SmallestNonzeroFloat64, -1, -1e300, -math.MaxFloat64)
+		}
+		for _, v := range bad {
+			text, err := c.marshal(v)
+			checktest.RangeErrorIn(t, err, "units."+c.name+".MarshalText", "q")
+			if text != nil {
+				t.Errorf("%s(%g).MarshalText() = %q beside its error, want nil", c.name, v, text)
+			}
+		}
+	}
+	if b, err := json.Marshal(box[Temperature]{Temperature(-1)}); err == nil || !errors.Is(err, ErrRange) {
+		t.Errorf("json.Marshal of -1 K = %s, %v; want an error matching ErrRange", b, err)
+	}
+	if b, err := json.Marshal(box[AbsolutePressure]{AbsolutePressure(-5)}); err == nil || !errors.Is(err, ErrRange) {
+		t.Errorf("json.Marshal of -5 Pa absolute = %s, %v; want an error matching ErrRange", b, err)
+	}
+}
+
+// TestMarshalTextAgreesWithUnmarshalText: for every type and values of every
+// kind (random bit patterns included), MarshalText succeeds exactly when its
+// text reads back, and then to the same bits.
+func TestMarshalTextAgreesWithUnmarshalText(t *testing.T) {
+	r := rand.New(rand.NewPCG(3, 4))
+	values := []float64{0, math.Copysign(0, -1), 1, -1, math.MaxFloat64, -math.MaxFloat64, 5e-324, -5e-324, math.NaN(), math.Inf(1)}
+	for range 2000 {
+		values = append(values, math.Float64frombits(r.Uint64()))
+	}
+	for _, c := range typedCases {
+		for _, v := range values {
+			text, err := c.marshal(v)
+			if err != nil {
+				if _, uerr := c.unmarshal([]byte(strconv.FormatFloat(v, 'g', -1, 64) + " " + siUnit(typeByName(c.name)).sym)); uerr == nil {
+					t.Errorf("%s(%g).MarshalText: %v, but its SI text reads back", c.name, v, err)
+				}
+				continue
+			}
+			back, err := c.unmarshal(text)
+			if err != nil || math.Float64bits(back) != math.Float64bits(v) {
+				t.Errorf("%s(%.17g) → %q → %.17g, %v", c.name, v, text, back, err)
+			}
 		}
 	}
 }

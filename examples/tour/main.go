@@ -14,8 +14,8 @@ func main() {
 	// Typed quantities: the unit is in the type and in the constant.
 	p := 210 * units.Bar
 	q := 38 * units.LitrePerMinute
-	fmt.Println(p.TimesFlow(q))                                // 13.3 kW
-	fmt.Println(units.USCustomary.FormatPower(p.TimesFlow(q))) // 17.84 hp
+	fmt.Println(p.TimesFlow(q))                                  // 13.3 kW
+	fmt.Println(units.USCustomary().FormatPower(p.TimesFlow(q))) // 17.84 hp
 
 	// Text from a form, a file or a sensor tag.
 	relief, err := units.ParsePressure("2750 psi")

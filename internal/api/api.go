@@ -2,19 +2,28 @@
 // in the spirit of Go's api/go1.*.txt files. The committed listing
 // (api.txt) and its test keep the API a promise: see api_test.go and
 // DEVELOPERS.md.
+//
+// The listing is built from type information (go/types, with the standard
+// library's source importer), not from the syntax: each exported identifier
+// is listed with its real type, a constant with its type and value, and an
+// alias of an internal type (units.RangeError) with the fields and methods a
+// caller sees. This is format 2 of the listing; format 1 (before it) was read
+// from the syntax and wrote "untyped" for a constant without an explicit type
+// and no value.
 package api
 
 import (
-	"bytes"
 	"fmt"
-	"go/ast"
-	"go/parser"
-	"go/printer"
+	"go/build"
+	"go/constant"
+	"go/importer"
 	"go/token"
+	"go/types"
 	"io/fs"
 	"path"
 	"path/filepath"
 	"sort"
+	"strconv"
 	"strings"
 )
 
@@ -23,9 +32,40 @@ const Module = "github.com/hydrosize/hydrosize"
 
 // Lines returns the exported API of every public package under root (the
 // module root), sorted. Packages under internal/ and examples/, main
-// packages, test files and files with a "//go:build ignore" line are left out.
+// packages, test files and files excluded by build constraints (such as a
+// "//go:build ignore" generator) are left out.
 func Lines(root string) ([]string, error) {
-	dirs := map[string][]string{}
+	dirs, err := packageDirs(root)
+	if err != nil {
+		return nil, err
+	}
+	imp, ok := importer.ForCompiler(token.NewFileSet(), "source", nil).(types.ImporterFrom)
+	if !ok {
+		return nil, fmt.Errorf("api: the source importer cannot import from a directory")
+	}
+	var out []string
+	for _, dir := range dirs {
+		pkgPath := Module
+		if dir != "." {
+			pkgPath += "/" + dir
+		}
+		pkg, err := imp.ImportFrom(pkgPath, root, 0)
+		if err != nil {
+			return nil, fmt.Errorf("api: %s: %w", pkgPath, err)
+		}
+		if pkg.Name() == "main" {
+			continue
+		}
+		out = append(out, packageLines(pkg)...)
+	}
+	sort.Strings(out)
+	return out, nil
+}
+
+// packageDirs returns the module-relative directories under root that hold
+// the non-test Go files of a public package.
+func packageDirs(root string) ([]string, error) {
+	seen := map[string]bool{}
 	err := filepath.WalkDir(root, func(p string, d fs.DirEntry, err error) error {
 		if err != nil {
 			return err
@@ -39,241 +79,199 @@ func Lines(root string) ([]string, error) {
 			return nil
 		}
 		if strings.HasSuffix(p, ".go") && !strings.HasSuffix(p, "_test.go") {
-			dirs[path.Dir(rel)] = append(dirs[path.Dir(rel)], p)
+			if ok, err := build.Default.MatchFile(filepath.Dir(p), d.Name()); err == nil && ok {
+				seen[path.Dir(rel)] = true
+			}
 		}
 		return nil
 	})
-	if err != nil {
-		return nil, err
+	dirs := make([]string, 0, len(seen))
+	for d := range seen {
+		dirs = append(dirs, d)
 	}
-	var out []string
-	for dir, files := range dirs {
-		lines, err := packageLines(dir, files)
-		if err != nil {
-			return nil, err
-		}
-		out = append(out, lines...)
-	}
-	sort.Strings(out)
-	return out, nil
+	sort.Strings(dirs)
+	return dirs, err
 }
 
-func packageLines(dir string, files []string) ([]string, error) {
-	fset := token.NewFileSet()
-	pkgPath := Module
-	if dir != "." {
-		pkgPath += "/" + dir
-	}
-	w := &writer{fset: fset, pkg: "pkg " + pkgPath + ", "}
-	for _, name := range files {
-		f, err := parser.ParseFile(fset, name, nil, parser.ParseComments)
-		if err != nil {
-			return nil, err
-		}
-		if f.Name.Name == "main" || ignored(f) {
-			continue
-		}
-		for _, decl := range f.Decls {
-			if err := w.decl(decl); err != nil {
-				return nil, fmt.Errorf("%s: %w", fset.Position(decl.Pos()), err)
-			}
-		}
-	}
-	return w.lines, nil
-}
-
-func ignored(f *ast.File) bool {
-	for _, cg := range f.Comments {
-		if cg.Pos() > f.Package {
-			break
-		}
-		for _, c := range cg.List {
-			if strings.HasPrefix(c.Text, "//go:build") && strings.Contains(c.Text, "ignore") {
-				return true
-			}
-		}
-	}
-	return false
-}
-
-type writer struct {
-	fset  *token.FileSet
-	pkg   string
+// lister writes the lines of one package.
+type lister struct {
+	pkg   *types.Package
 	lines []string
 }
 
-func (w *writer) add(format string, args ...any) {
-	w.lines = append(w.lines, w.pkg+fmt.Sprintf(format, args...))
+func packageLines(pkg *types.Package) []string {
+	l := &lister{pkg: pkg}
+	scope := pkg.Scope()
+	for _, name := range scope.Names() {
+		if obj := scope.Lookup(name); obj.Exported() {
+			l.object(obj)
+		}
+	}
+	return l.lines
 }
 
-func (w *writer) expr(e ast.Expr) string {
-	var b bytes.Buffer
-	printer.Fprint(&b, w.fset, e)
-	return b.String()
+func (l *lister) add(format string, args ...any) {
+	l.lines = append(l.lines, "pkg "+l.pkg.Path()+", "+fmt.Sprintf(format, args...))
 }
 
-func (w *writer) decl(d ast.Decl) error {
-	switch d := d.(type) {
-	case *ast.FuncDecl:
-		w.funcDecl(d)
-	case *ast.GenDecl:
-		return w.genDecl(d)
-	}
-	return nil
-}
-
-func (w *writer) funcDecl(d *ast.FuncDecl) {
-	if !d.Name.IsExported() {
-		return
-	}
-	sig := w.signature(d.Type)
-	if d.Recv == nil {
-		w.add("func %s%s%s", d.Name.Name, w.typeParams(d.Type.TypeParams), sig)
-		return
-	}
-	recv := w.expr(d.Recv.List[0].Type)
-	base := strings.TrimPrefix(recv, "*")
-	if i := strings.IndexByte(base, '['); i >= 0 {
-		base = base[:i]
-	}
-	if !ast.IsExported(base) {
-		return
-	}
-	w.add("method (%s) %s%s", recv, d.Name.Name, sig)
-}
-
-func (w *writer) typeParams(fl *ast.FieldList) string {
-	if fl == nil {
+// qualify names a package as its source does: nothing for this package,
+// the package name for any other.
+func (l *lister) qualify(p *types.Package) string {
+	if p == l.pkg {
 		return ""
 	}
-	var parts []string
-	for _, f := range fl.List {
-		for _, n := range f.Names {
-			parts = append(parts, n.Name+" "+w.expr(f.Type))
-		}
+	return p.Name()
+}
+
+func (l *lister) typ(t types.Type) string { return types.TypeString(t, l.qualify) }
+
+func (l *lister) object(obj types.Object) {
+	switch o := obj.(type) {
+	case *types.Const:
+		l.add("const %s %s = %s", o.Name(), l.typ(o.Type()), constValue(o))
+	case *types.Var:
+		l.add("var %s %s", o.Name(), l.typ(o.Type()))
+	case *types.Func:
+		sig := o.Type().(*types.Signature)
+		l.add("func %s%s%s", o.Name(), l.typeParams(sig.TypeParams()), l.signature(sig))
+	case *types.TypeName:
+		l.typeName(o)
+	}
+}
+
+// constValue writes a constant's value: a float as the float64 a program
+// gets (shortest decimal that reads back), an integer exactly, a string
+// quoted.
+func constValue(c *types.Const) string {
+	v := c.Val()
+	switch v.Kind() {
+	case constant.Float:
+		f, _ := constant.Float64Val(v)
+		return strconv.FormatFloat(f, 'g', -1, 64)
+	case constant.String:
+		return strconv.Quote(constant.StringVal(v))
+	}
+	return v.ExactString()
+}
+
+func (l *lister) typeParams(tp *types.TypeParamList) string {
+	if tp == nil || tp.Len() == 0 {
+		return ""
+	}
+	parts := make([]string, tp.Len())
+	for i := range tp.Len() {
+		p := tp.At(i)
+		parts[i] = p.Obj().Name() + " " + l.typ(p.Constraint())
 	}
 	return "[" + strings.Join(parts, ", ") + "]"
 }
 
-// signature prints a function type without parameter names.
-func (w *writer) signature(t *ast.FuncType) string {
-	s := "(" + w.fieldTypes(t.Params) + ")"
-	if t.Results == nil || len(t.Results.List) == 0 {
-		return s
+// signature writes a function type without parameter names:
+// "(string, ...any) (T, error)".
+func (l *lister) signature(sig *types.Signature) string {
+	params := l.tuple(sig.Params(), sig.Variadic())
+	res := sig.Results()
+	switch res.Len() {
+	case 0:
+		return "(" + params + ")"
+	case 1:
+		return "(" + params + ") " + l.typ(res.At(0).Type())
 	}
-	res := w.fieldTypes(t.Results)
-	if len(t.Results.List) == 1 && len(t.Results.List[0].Names) <= 1 {
-		return s + " " + res
-	}
-	return s + " (" + res + ")"
+	return "(" + params + ") (" + l.tuple(res, false) + ")"
 }
 
-func (w *writer) fieldTypes(fl *ast.FieldList) string {
-	if fl == nil {
-		return ""
-	}
-	var parts []string
-	for _, f := range fl.List {
-		n := max(len(f.Names), 1)
-		for range n {
-			parts = append(parts, w.expr(f.Type))
+func (l *lister) tuple(t *types.Tuple, variadic bool) string {
+	parts := make([]string, t.Len())
+	for i := range t.Len() {
+		typ := t.At(i).Type()
+		if variadic && i == t.Len()-1 {
+			parts[i] = "..." + l.typ(typ.(*types.Slice).Elem())
+			continue
 		}
+		parts[i] = l.typ(typ)
 	}
 	return strings.Join(parts, ", ")
 }
 
-func (w *writer) genDecl(d *ast.GenDecl) error {
-	var lastType string
-	for _, spec := range d.Specs {
-		switch s := spec.(type) {
-		case *ast.TypeSpec:
-			w.typeSpec(s)
-		case *ast.ValueSpec:
-			typ, err := w.valueType(d.Tok, s, lastType)
-			if err != nil {
-				return err
-			}
-			lastType = typ
-			for _, n := range s.Names {
-				if n.IsExported() {
-					w.add("%s %s %s", d.Tok.String(), n.Name, typ)
-				}
-			}
+func (l *lister) typeName(o *types.TypeName) {
+	if o.IsAlias() {
+		named, ok := types.Unalias(o.Type()).(*types.Named)
+		if !ok || !internalPackage(named.Obj().Pkg()) {
+			l.add("type %s = %s", o.Name(), l.typ(types.Unalias(o.Type())))
+			return
 		}
-	}
-	return nil
-}
-
-// valueType names the type of a const or var spec. Exported vars without an
-// explicit type must be initialised by a composite literal or errors.New.
-func (w *writer) valueType(tok token.Token, s *ast.ValueSpec, last string) (string, error) {
-	if s.Type != nil {
-		return w.expr(s.Type), nil
-	}
-	if tok == token.CONST {
-		if len(s.Values) == 0 {
-			return last, nil // repeats the previous spec (iota)
-		}
-		return "untyped", nil
-	}
-	if len(s.Values) == 0 {
-		return "", fmt.Errorf("var %s: no type", s.Names[0].Name)
-	}
-	switch v := s.Values[0].(type) {
-	case *ast.CompositeLit:
-		return w.expr(v.Type), nil
-	case *ast.UnaryExpr:
-		if c, ok := v.X.(*ast.CompositeLit); ok && v.Op == token.AND {
-			return "*" + w.expr(c.Type), nil
-		}
-	case *ast.CallExpr:
-		if fn := w.expr(v.Fun); fn == "errors.New" || fn == "fmt.Errorf" {
-			return "error", nil
-		}
-	}
-	for _, n := range s.Names {
-		if n.IsExported() {
-			return "", fmt.Errorf("exported var %s: give it an explicit type so the API listing can name it", n.Name)
-		}
-	}
-	return "", nil
-}
-
-func (w *writer) typeSpec(s *ast.TypeSpec) {
-	if !s.Name.IsExported() {
+		// An alias of an internal type is listed as the type a caller
+		// sees under this name: its fields and its methods.
+		l.named(o.Name(), named)
 		return
 	}
-	name := s.Name.Name + w.typeParams(s.TypeParams)
-	switch t := s.Type.(type) {
-	case *ast.StructType:
-		w.add("type %s struct", name)
-		for _, f := range t.Fields.List {
-			for _, n := range f.Names {
-				if n.IsExported() {
-					w.add("type %s struct, %s %s", name, n.Name, w.expr(f.Type))
-				}
-			}
-			if len(f.Names) == 0 { // embedded
-				w.add("type %s struct, embedded %s", name, w.expr(f.Type))
+	named, ok := o.Type().(*types.Named)
+	if !ok {
+		return
+	}
+	l.named(o.Name()+l.typeParams(named.TypeParams()), named)
+}
+
+// internalPackage reports whether p is under an internal/ directory.
+func internalPackage(p *types.Package) bool {
+	return p != nil && (strings.Contains(p.Path(), "/internal/") || strings.HasSuffix(p.Path(), "/internal"))
+}
+
+// named lists type name (with its type parameters) of named type t: its
+// underlying type, exported fields or interface methods, and its declared
+// methods.
+func (l *lister) named(name string, t *types.Named) {
+	switch u := t.Underlying().(type) {
+	case *types.Struct:
+		l.add("type %s struct", name)
+		for i := range u.NumFields() {
+			f := u.Field(i)
+			switch {
+			case f.Embedded():
+				l.add("type %s struct, embedded %s", name, l.typ(f.Type()))
+			case f.Exported():
+				l.add("type %s struct, %s %s", name, f.Name(), l.typ(f.Type()))
 			}
 		}
-	case *ast.InterfaceType:
-		w.add("type %s interface", name)
-		for _, m := range t.Methods.List {
-			for _, n := range m.Names {
-				if ft, ok := m.Type.(*ast.FuncType); ok {
-					w.add("type %s interface, %s%s", name, n.Name, w.signature(ft))
-				}
-			}
-			if len(m.Names) == 0 {
-				w.add("type %s interface, embedded %s", name, w.expr(m.Type))
+	case *types.Interface:
+		l.add("type %s interface", name)
+		for i := range u.NumEmbeddeds() {
+			l.add("type %s interface, embedded %s", name, l.typ(u.EmbeddedType(i)))
+		}
+		for i := range u.NumExplicitMethods() {
+			m := u.ExplicitMethod(i)
+			if m.Exported() {
+				l.add("type %s interface, %s%s", name, m.Name(), l.signature(m.Type().(*types.Signature)))
 			}
 		}
 	default:
-		eq := " "
-		if s.Assign.IsValid() {
-			eq = " = "
-		}
-		w.add("type %s%s%s", name, eq, w.expr(s.Type))
+		l.add("type %s %s", name, l.typ(u))
 	}
+	recvName := name
+	if i := strings.IndexByte(name, '['); i >= 0 {
+		recvName = name[:i] + typeArgNames(t)
+	}
+	for i := range t.NumMethods() {
+		m := t.Method(i)
+		if !m.Exported() {
+			continue
+		}
+		sig := m.Type().(*types.Signature)
+		recv := recvName
+		if _, ptr := sig.Recv().Type().(*types.Pointer); ptr {
+			recv = "*" + recv
+		}
+		l.add("method (%s) %s%s", recv, m.Name(), l.signature(sig))
+	}
+}
+
+// typeArgNames writes the type parameters of t as a receiver names them:
+// "[T]", "[K, V]".
+func typeArgNames(t *types.Named) string {
+	tp := t.TypeParams()
+	names := make([]string, tp.Len())
+	for i := range tp.Len() {
+		names[i] = tp.At(i).Obj().Name()
+	}
+	return "[" + strings.Join(names, ", ") + "]"
 }

@@ -7,7 +7,7 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// ASTM D341-20 check, [X from S] (see CHECKS.md): 32 mm²/s at 40 °C and
+// ASTM D341-20 check, [X from S]: 32 mm²/s at 40 °C and
 // 5.4 mm²/s at 100 °C give A = 9.53082, B = 3.74658 and 8.533 mm²/s at 80 °C.
 // Tolerances: half a unit in the last printed digit.
 func TestCurveD341Check(t *testing.T) {
@@ -314,5 +314,43 @@ func TestCurveAtConcurrentFirstUse(t *testing.T) {
 	}
 	if _, err := c.At(celsius(120)); err != nil {
 		t.Error(err)
+	}
+}
+
+// A curve applies from where it reaches MaxViscosity (2·10⁷ mm²/s) to where
+// it falls to MinViscosity (0.21 mm²/s), the ASTM D341 span (from memory).
+// At the ends of Range, At returns the limits to round-off; one ulp
+// outside it refuses.
+func TestCurveRangeEnds(t *testing.T) {
+	c, err := CurveThrough(celsius(40), mm2s(32), celsius(100), mm2s(5.4))
+	if err != nil {
+		t.Fatal(err)
+	}
+	cold, hot := c.Range()
+	if v, err := c.At(cold); err != nil || !near(float64(v), float64(MaxViscosity), 1e-12) {
+		t.Errorf("At(cold) = %v, %v; want %v", v, err, MaxViscosity)
+	}
+	if v, err := c.At(hot); err != nil || !near(float64(v), float64(MinViscosity), 1e-12) {
+		t.Errorf("At(hot) = %v, %v; want %v", v, err, MinViscosity)
+	}
+	_, err = c.At(units.Temperature(math.Nextafter(float64(cold), 0)))
+	wantRangeError(t, err, "t")
+	_, err = c.At(units.Temperature(math.Nextafter(float64(hot), math.Inf(1))))
+	wantRangeError(t, err, "t")
+	if tt, err := c.TemperatureFor(MinViscosity); err != nil || tt != hot {
+		t.Errorf("TemperatureFor(MinViscosity) = %v, %v; want %v", tt, err, hot)
+	}
+	_, err = c.TemperatureFor(down(MinViscosity))
+	wantRangeError(t, err, "v")
+}
+
+// CurveThrough accepted a point at 1.5·10⁻³⁶ K and built a curve whose hot
+// end was +Inf (Range returned +Inf and At clamped any hot temperature to
+// MinViscosity). It now refuses such points, as NewCurve does.
+func TestCurveThroughRefusesInfiniteRange(t *testing.T) {
+	c, err := CurveThrough(241.29372034961386, 0.0943627383523415, 1.5014914489624588e-36, 1.9535889052799391)
+	wantRangeError(t, err, "t2")
+	if c != (Curve{}) {
+		t.Errorf("curve = %+v with an error, want the zero Curve", c)
 	}
 }

