@@ -1,0 +1,50 @@
+package line
+
+import (
+	"testing"
+
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/fluid"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+func TestColdStart(t *testing.T) {
+	oil, err := fluid.Typical(fluid.HM, fluid.VG46)
+	if err != nil {
+		t.Fatal(err)
+	}
+	mm := units.Millimetre
+	p := Path{Name: "return", Elements: []Element{
+		Pipe{Name: "return tube", Length: 6, Bore: 16 * mm, Roughness: DrawnTubing},
+		Fitting{Name: "elbows", Kind: Elbow90, Bore: 16 * mm, Count: 4},
+		Rated{Name: "return filter", Drop: 0.5 * units.Bar, Flow: 60 * units.LitrePerMinute, Law: Viscous,
+			Viscosity: 32 * units.SquareMillimetrePerSecond, Rating: 16 * units.Bar, Bypass: 3 * units.Bar},
+	}}
+	cold, run := units.TemperatureFromCelsius(-10), units.TemperatureFromCelsius(50)
+	s, err := ColdStart(p, 60*units.LitrePerMinute, oil, cold, run)
+	if err != nil {
+		t.Fatal(err)
+	}
+	// The cold path's drop is what Path.Drop gives at OilAt(cold).
+	oc, _ := OilAt(oil, cold)
+	want, _ := p.Drop(60*units.LitrePerMinute, oc)
+	if s.Cold.Total != want.Total || s.Ratio <= 1 || s.Ratio != float64(s.Cold.Total/s.Running.Total) {
+		t.Errorf("cold %v (want %v), running %v, ratio %g", s.Cold.Total, want.Total, s.Running.Total, s.Ratio)
+	}
+	// At −10 °C VG 46 is near 1000 mm²/s: the tube runs laminar and the
+	// filter bypasses; at 50 °C the tube is turbulent.
+	if s.Cold.Elements[0].Regime != Laminar || s.Running.Elements[0].Regime == Laminar || !s.Cold.Elements[2].Bypassed {
+		t.Errorf("regimes cold %v, running %v; filter bypassed %v", s.Cold.Elements[0].Regime, s.Running.Elements[0].Regime, s.Cold.Elements[2].Bypassed)
+	}
+	for _, topic := range []string{"line.cold-drop", "line.cold-regime", "line.bypass"} {
+		if len(s.Findings.Topic(topic)) != 1 {
+			t.Errorf("no %s finding in %v", topic, s.Findings)
+		}
+	}
+	if len(s.Findings.Hazard(components.ColdStart)) != 2 {
+		t.Errorf("cold-start findings: %v", s.Findings.Hazard(components.ColdStart))
+	}
+	// Bad input: cold above running.
+	_, err = ColdStart(p, 60*units.LitrePerMinute, oil, run, cold)
+	wantRangeError(t, "cold above running", err, "cold")
+}
