@@ -77,7 +77,7 @@ func TestShaftPowerProperties(t *testing.T) {
 		prev = p
 	}
 	ideal, _ := ShaftPower(150*units.Bar, 40*lpm, 1)
-	near(t, "ideal shaft power", ideal, (150*units.Bar).TimesFlow(40*lpm), 0)
+	near(t, "ideal shaft power", ideal, (150 * units.Bar).TimesFlow(40*lpm), 0)
 	for _, eta := range []float64{0.999, 0.9, 0.5, 0.01} {
 		if p, _ := ShaftPower(150*units.Bar, 40*lpm, eta); p <= ideal {
 			t.Errorf("η %v: %v not above the ideal %v", eta, p, ideal)
