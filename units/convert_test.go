@@ -8,45 +8,27 @@ import (
 	"testing"
 )
 
-// TestConvertBelowAbsoluteZero: Convert(-300, "°C", "K") returned -26.85
-// and Convert(-2, "bara", "psia") a negative absolute pressure, where the
-// typed parsers reject both. A temperature below absolute zero or an
-// absolute pressure below vacuum, on either side, is ErrRange.
-func TestConvertBelowAbsoluteZero(t *testing.T) {
-	for _, c := range []struct {
-		v        float64
-		from, to string
-	}{
-		{-300, "°C", "K"},
-		{-500, "°F", "°C"},
-		{-1, "K", "°R"},
-		{-2, "bara", "psia"},
-		{-1, "atm", "Pa"},
-		{-1e6, "Pa", "bara"},
-		{-300, "°C", "ΔK"},
-	} {
-		got, err := Convert(c.v, c.from, c.to)
-		if !errors.Is(err, ErrRange) || got != 0 {
-			t.Errorf("Convert(%g, %q, %q) = %g, %v; want ErrRange", c.v, c.from, c.to, got, err)
-		}
-	}
-	for _, s := range []string{"-300 °C", "-1 K", "-460 °F", "-1 bara", "-14.8 psia", "-1 atm"} {
-		q, err := Parse(s)
-		if !errors.Is(err, ErrRange) || q.Value() != 0 {
-			t.Errorf("Parse(%q) = %v, %v; want ErrRange", s, q, err)
-		}
-	}
-	// In range: absolute zero itself, a vacuum gauge reading, and intervals.
+// TestConvert: values Convert must give. Where the references allow it, a
+// point may be read as an interval, a vacuum is a negative gauge reading,
+// and absolute zero itself is in range.
+func TestConvert(t *testing.T) {
 	for _, c := range []struct {
 		v        float64
 		from, to string
 		want     float64
 	}{
+		// Absolute zero and vacuum gauge readings.
 		{-273.15, "°C", "K", 0},
 		{-459.67, "°F", "K", 0},
 		{-0.5, "bar", "psi", -0.5 * float64(Bar) / float64(PSI)},
-		{-5, "ΔK", "Δ°F", -9},
 		{-5, "Pa", "Pa", -5},
+		// Intervals, and a point read as the interval above its zero.
+		{-5, "ΔK", "Δ°F", -9},
+		{20, "°C", "ΔK", 20},
+		{10, "Δ°C", "Δ°F", 18},
+		{1, "K/s", "°F/min", 108},
+		// Point to point.
+		{20, "°C", "°F", 68},
 	} {
 		got, err := Convert(c.v, c.from, c.to)
 		if err != nil || math.Abs(got-c.want) > 1e-12*math.Max(1, math.Abs(c.want)) {
@@ -55,44 +37,48 @@ func TestConvertBelowAbsoluteZero(t *testing.T) {
 	}
 }
 
-// TestConvertDifferenceToPoint: Convert(5, "ΔK", "°C") returned 5, reading
-// °C as an interval although a lone °C is a point on its scale and
-// Parse("5 ΔK").Temperature() fails. A temperature difference converted to
-// a temperature spelling is ErrReference, as for the typed values; a point
-// may still be read as an interval (as ParseTemperatureDifference does).
-func TestConvertDifferenceToPoint(t *testing.T) {
+// TestConvertRefuses: what Convert refuses, and the sentinel it matches; it
+// returns 0 beside every error.
+func TestConvertRefuses(t *testing.T) {
 	for _, c := range []struct {
 		v        float64
 		from, to string
+		want     error
 	}{
-		{5, "ΔK", "°C"}, {5, "Δ°F", "°F"}, {5, "delta degC", "K"}, {5, "ΔK", "°R"},
-		// A negative value is still a reference error first, not a
-		// temperature below absolute zero or a pressure below vacuum.
-		{-5, "ΔK", "°C"}, {-5, "bar", "bara"}, {-1, "psig", "psia"},
+		// Dimensions that differ; unknown or malformed units.
+		{1, "psi", "L/min", ErrDimension},
+		{1, "furlong", "m", ErrUnknownUnit},
+		{1, "m", "furlong", ErrUnknownUnit},
+		{1, "m/", "m", ErrSyntax},
+		// Numbers that are not finite, given or produced.
+		{math.NaN(), "bar", "psi", ErrRange},
+		{math.Inf(1), "bar", "psi", ErrRange},
+		{1e308, "ksi", "Pa", ErrRange},
+		// Gauge and absolute do not mix without an ambient, whatever the sign.
+		{1, "atm", "bar", ErrReference},
+		{1, "psig", "psia", ErrReference},
+		{-5, "bar", "bara", ErrReference},
+		{-1, "psig", "psia", ErrReference},
+		// A temperature difference is not a point on a scale (Convert used
+		// to read 5 ΔK → °C as the interval 5), whatever its sign.
+		{5, "ΔK", "°C", ErrReference},
+		{5, "Δ°F", "°F", ErrReference},
+		{5, "delta degC", "K", ErrReference},
+		{5, "ΔK", "°R", ErrReference},
+		{-5, "ΔK", "°C", ErrReference},
+		// Below absolute zero or absolute vacuum, on either side (Convert
+		// used to return −26.85 K for −300 °C).
+		{-300, "°C", "K", ErrRange},
+		{-500, "°F", "°C", ErrRange},
+		{-1, "K", "°R", ErrRange},
+		{-2, "bara", "psia", ErrRange},
+		{-1, "atm", "Pa", ErrRange},
+		{-1e6, "Pa", "bara", ErrRange},
+		{-300, "°C", "ΔK", ErrRange},
 	} {
 		got, err := Convert(c.v, c.from, c.to)
-		if !errors.Is(err, ErrReference) || got != 0 {
-			t.Errorf("Convert(%g, %q, %q) = %g, %v; want ErrReference", c.v, c.from, c.to, got, err)
-		}
-	}
-	q, _ := Parse("5 ΔK")
-	if got, err := q.In("°F"); !errors.Is(err, ErrReference) {
-		t.Errorf("Parse(5 ΔK).In(°F) = %g, %v; want ErrReference", got, err)
-	}
-	// Point to interval, interval to interval, point to point still work.
-	for _, c := range []struct {
-		v        float64
-		from, to string
-		want     float64
-	}{
-		{20, "°C", "ΔK", 20},
-		{10, "Δ°C", "Δ°F", 18},
-		{20, "°C", "°F", 68},
-		{1, "K/s", "°F/min", 108},
-	} {
-		got, err := Convert(c.v, c.from, c.to)
-		if err != nil || math.Abs(got-c.want) > 1e-12*c.want {
-			t.Errorf("Convert(%g, %q, %q) = %.17g, %v; want %g", c.v, c.from, c.to, got, err, c.want)
+		if !errors.Is(err, c.want) || got != 0 {
+			t.Errorf("Convert(%g, %q, %q) = %g, %v; want 0 and %v", c.v, c.from, c.to, got, err, c.want)
 		}
 	}
 }
@@ -145,7 +131,8 @@ func FuzzConvert(f *testing.F) {
 	})
 }
 
-// TestQuantityConversionErrors: the dynamic layer names both sides.
+// TestQuantityConversionErrors: the dynamic layer names both sides, and
+// checks the reference and range of what it converts to.
 func TestQuantityConversionErrors(t *testing.T) {
 	flow, _ := Parse("55 L/min")
 	if _, err := flow.Pressure(); !errors.Is(err, ErrDimension) ||
@@ -159,25 +146,9 @@ func TestQuantityConversionErrors(t *testing.T) {
 	if a, err := psia.AbsolutePressure(); err != nil || a != 14.7*PSIAbsolute {
 		t.Errorf("Parse(14.7 psia).AbsolutePressure() = %v, %v", a, err)
 	}
-	for _, c := range []struct {
-		v        float64
-		from, to string
-		want     error
-	}{
-		{1, "psi", "L/min", ErrDimension},
-		{1, "atm", "bar", ErrReference},
-		{1, "psig", "psia", ErrReference},
-		{1, "furlong", "m", ErrUnknownUnit},
-		{1, "m", "furlong", ErrUnknownUnit},
-		{1, "m/", "m", ErrSyntax},
-		{math.NaN(), "bar", "psi", ErrRange},
-		{math.Inf(1), "bar", "psi", ErrRange},
-		{1e308, "ksi", "Pa", ErrRange},
-	} {
-		got, err := Convert(c.v, c.from, c.to)
-		if !errors.Is(err, c.want) || got != 0 {
-			t.Errorf("Convert(%g, %q, %q) = %g, %v; want %v", c.v, c.from, c.to, got, err, c.want)
-		}
+	q, _ := Parse("5 ΔK")
+	if got, err := q.In("°F"); !errors.Is(err, ErrReference) || got != 0 {
+		t.Errorf("Parse(5 ΔK).In(°F) = %g, %v; want ErrReference", got, err)
 	}
 }
 

@@ -297,6 +297,12 @@ func parseErr[T any](f func(string) (T, error)) func(string) (float64, error) {
 	}
 }
 
+// parseDynamic adapts Parse to the bad-input table.
+func parseDynamic(s string) (float64, error) {
+	q, err := Parse(s)
+	return q.Value(), err
+}
+
 func unmarshalPressure(s string) (float64, error) {
 	var p Pressure
 	err := p.UnmarshalText([]byte(s))
@@ -369,6 +375,13 @@ var badInputs = []struct {
 	{"units.ParseTemperature", parseErr(ParseTemperature), "-460 °F", ErrRange, "absolute zero"},
 	{"units.ParseTemperature", parseErr(ParseTemperature), "-0.1 °R", ErrRange, ""},
 	{"units.ParseAbsolutePressure", parseErr(ParseAbsolutePressure), "-1 bara", ErrRange, "absolute vacuum"},
+	// The dynamic parser refuses the same (it used to accept them).
+	{"units.Parse", parseDynamic, "-300 °C", ErrRange, "absolute zero"},
+	{"units.Parse", parseDynamic, "-1 K", ErrRange, "absolute zero"},
+	{"units.Parse", parseDynamic, "-460 °F", ErrRange, "absolute zero"},
+	{"units.Parse", parseDynamic, "-1 bara", ErrRange, "absolute vacuum"},
+	{"units.Parse", parseDynamic, "-14.8 psia", ErrRange, "absolute vacuum"},
+	{"units.Parse", parseDynamic, "-1 atm", ErrRange, "absolute vacuum"},
 	// Unit expressions that are malformed.
 	{"units.ParseHeatTransferCoefficient", parseErr(ParseHeatTransferCoefficient), "12 W/(m²·K", ErrSyntax, "missing )"},
 	{"units.ParseArea", parseErr(ParseArea), "3 m^", ErrSyntax, "integer exponent"},

@@ -2,14 +2,18 @@
 // US customary trade units, the way hydrosize reports them.
 //
 // With no arguments it prints the demo data sheet of a test-rig clamp
-// circuit (invented numbers, for demonstration only). With arguments, each
-// argument is one quantity, such as "2750 psi" or "6.5 gal/min":
+// circuit (invented numbers, for demonstration only), then what follows from
+// it: the pump's flow (displacement × speed), the clamp force, the hydraulic
+// power, the shaft power the drive must give and the torques. With arguments,
+// each argument is one quantity, such as "2750 psi" or "6.5 gal/min"; every
+// argument that cannot be read is reported, not only the first:
 //
 //	go run ./examples/convert
-//	go run ./examples/convert "2750 psi" "6.5 gal/min" "120 °F"
+//	go run ./examples/convert "2750 psi" "6.5 gal/min" "120 °F" "40 lbf·ft"
 package main
 
 import (
+	"errors"
 	"fmt"
 	"io"
 	"os"
@@ -19,45 +23,120 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// demo is an invented data sheet for a test-rig clamp circuit.
-var demo = []string{
-	"180 bar",       // clamp pressure
-	"2.9 gal/min",   // pump delivery
-	"0.75 in^3/rev", // pump displacement
-	"1750 rpm",      // motor speed
-	"63 mm",         // clamp bore
-	"48 °C",         // tank temperature
-	"46 cSt",        // oil at 40 °C
-	"14.5 psia",     // site barometric pressure
-	"1.5 kW",        // drive rating
-}
+// The demo data sheet of a test-rig clamp circuit, as text from a form,
+// in the mix of spellings such sheets use. Invented numbers.
+const (
+	demoPressure     = "180 bar"       // clamp pressure (relief setting)
+	demoDisplacement = "0.15 in^3/rev" // pump displacement
+	demoSpeed        = "1450 rpm"      // drive motor speed (4-pole, 50 Hz)
+	demoDrive        = "1.5 kW"        // drive motor rating
+	demoBore         = "63 mm"         // clamp cylinder bore
+	demoTank         = "48 °C"         // tank temperature
+	demoOil          = "46 cSt"        // oil viscosity at 40 °C
+	demoAmbient      = "14.5 psia"     // site barometric pressure
+)
+
+// demoEfficiency is the assumed overall efficiency of the pump (volumetric ×
+// mechanical), a demo value: 0.85 is a common figure for a small gear pump
+// near its rated speed (common practice).
+const demoEfficiency = 0.85
 
 func main() {
-	args := os.Args[1:]
-	if len(args) == 0 {
-		args = demo
+	var err error
+	if len(os.Args) > 1 {
+		err = run(os.Stdout, os.Args[1:])
+	} else {
+		err = demo(os.Stdout)
 	}
-	if err := run(os.Stdout, args); err != nil {
+	if err != nil {
 		fmt.Fprintln(os.Stderr, err)
 		os.Exit(1)
 	}
 }
 
-// run prints each quantity in both systems. It stops at the first error.
+// row writes one line of the table: a label, the metric and the US text.
+func row(w io.Writer, label, metric, us string) {
+	fmt.Fprintf(w, "%s %s %s\n", pad(label, 34), pad(metric, 16), us)
+}
+
+// demo prints the demo data sheet and what follows from it.
+func demo(w io.Writer) error {
+	m, us := units.Metric(), units.USCustomary()
+	var errs []error
+	p, err := units.ParsePressure(demoPressure)
+	errs = append(errs, err)
+	d, err := units.ParseDisplacement(demoDisplacement)
+	errs = append(errs, err)
+	n, err := units.ParseRotationalSpeed(demoSpeed)
+	errs = append(errs, err)
+	drive, err := units.ParsePower(demoDrive)
+	errs = append(errs, err)
+	bore, err := units.ParseLength(demoBore)
+	errs = append(errs, err)
+	tank, err := units.ParseTemperature(demoTank)
+	errs = append(errs, err)
+	oil, err := units.ParseKinematicViscosity(demoOil)
+	errs = append(errs, err)
+	ambient, err := units.ParseAbsolutePressure(demoAmbient)
+	errs = append(errs, err)
+	if err := errors.Join(errs...); err != nil {
+		return err
+	}
+
+	row(w, "test-rig clamp (demo data)", "metric", "US customary")
+	row(w, "clamp pressure", m.FormatPressure(p), us.FormatPressure(p))
+	row(w, "pump displacement", m.FormatDisplacement(d), us.FormatDisplacement(d))
+	row(w, "drive speed", m.FormatRotationalSpeed(n), us.FormatRotationalSpeed(n))
+	row(w, "drive rating", m.FormatPower(drive), us.FormatPower(drive))
+	row(w, "clamp bore", m.FormatLength(bore), us.FormatLength(bore))
+	row(w, "tank temperature", m.FormatTemperature(tank), us.FormatTemperature(tank))
+	row(w, "oil at 40 °C", m.FormatKinematicViscosity(oil), us.FormatKinematicViscosity(oil))
+	row(w, "site barometric pressure", m.FormatAbsolutePressure(ambient), us.FormatAbsolutePressure(ambient))
+
+	flow := d.TimesSpeed(n)                      // Q = D·n
+	force := p.TimesArea(units.CircleArea(bore)) // F = p·π·d²/4
+	hydraulic := p.TimesFlow(flow)               // P = Δp·Q
+	shaft := units.Power(float64(hydraulic) / demoEfficiency)
+	pumpTorque := d.TimesPressure(p) // T = D·Δp/(2π), ideal
+	ratedTorque, err := drive.PerSpeed(n)
+	if err != nil {
+		return err
+	}
+	fmt.Fprintln(w)
+	row(w, "what follows", "metric", "US customary")
+	row(w, "pump flow (displacement × speed)", m.FormatFlow(flow), us.FormatFlow(flow))
+	row(w, "clamp force at full pressure", m.FormatForce(force), us.FormatForce(force))
+	row(w, "hydraulic power (pressure × flow)", m.FormatPower(hydraulic), us.FormatPower(hydraulic))
+	row(w, fmt.Sprintf("shaft power at %.0f %% efficiency", 100*demoEfficiency), m.FormatPower(shaft), us.FormatPower(shaft))
+	row(w, "pump torque, ideal (D·Δp/2π)", m.FormatTorque(pumpTorque), us.FormatTorque(pumpTorque))
+	row(w, "drive rated torque (P/2πn)", m.FormatTorque(ratedTorque), us.FormatTorque(ratedTorque))
+	verdict := "the drive rating covers the shaft power"
+	if shaft > drive {
+		verdict = "the drive rating is below the shaft power"
+	}
+	fmt.Fprintf(w, "\n%s (%.0f %% of rating).\n", verdict, 100*float64(shaft/drive))
+	return nil
+}
+
+// run prints each quantity in both systems. It reports every argument that
+// cannot be read or shown, joined in one error, after printing the others.
 func run(w io.Writer, args []string) error {
-	fmt.Fprintf(w, "%-16s %-18s %-18s %s\n", "input", "metric", "US customary", "quantity")
+	row(w, "input", "metric", "US customary, quantity")
+	var errs []error
 	for _, a := range args {
 		q, err := units.Parse(a)
 		if err != nil {
-			return err
+			errs = append(errs, err)
+			continue
 		}
-		metric, us, kind, err := show(q)
+		metric, us, kind, err := show(q, a)
 		if err != nil {
-			return fmt.Errorf("%q: %w", a, err)
+			errs = append(errs, fmt.Errorf("%q: %w", a, err))
+			continue
 		}
-		fmt.Fprintf(w, "%s %s %s %s\n", pad(a, 16), pad(metric, 18), pad(us, 18), kind)
+		row(w, a, metric, us+", "+kind)
 	}
-	return nil
+	return errors.Join(errs...)
 }
 
 // pad pads s with spaces to width runes (fmt pads by bytes, and units such
@@ -69,8 +148,10 @@ func pad(s string, width int) string {
 	return s
 }
 
-// show formats q in both systems, trying the quantity types in turn.
-func show(q units.Quantity) (metric, us, kind string, err error) {
+// show formats q in both systems, trying the quantity types in turn. Torque
+// and energy share a dimension (N·m = J); the unit as written tells them
+// apart: the energy spellings end in J, h (kWh) or BTU/Btu.
+func show(q units.Quantity, text string) (metric, us, kind string, err error) {
 	m, u := units.Metric(), units.USCustomary()
 	if p, err := q.Pressure(); err == nil {
 		return m.FormatPressure(p), u.FormatPressure(p), "pressure (gauge)", nil
@@ -86,6 +167,12 @@ func show(q units.Quantity) (metric, us, kind string, err error) {
 	}
 	if n, err := q.RotationalSpeed(); err == nil {
 		return m.FormatRotationalSpeed(n), u.FormatRotationalSpeed(n), "rotational speed", nil
+	}
+	if e, err := q.Energy(); err == nil && strings.ContainsAny(lastLetter(text), "JhUu") {
+		return m.FormatEnergy(e), u.FormatEnergy(e), "energy", nil
+	}
+	if t, err := q.Torque(); err == nil {
+		return m.FormatTorque(t), u.FormatTorque(t), "torque", nil
 	}
 	if l, err := q.Length(); err == nil {
 		return m.FormatLength(l), u.FormatLength(l), "length", nil
@@ -106,4 +193,11 @@ func show(q units.Quantity) (metric, us, kind string, err error) {
 		return m.FormatVolume(v), u.FormatVolume(v), "volume", nil
 	}
 	return "", "", "", fmt.Errorf("no conversion shown for dimension %v", q.Dimension())
+}
+
+// lastLetter returns the last character of s, spaces left out.
+func lastLetter(s string) string {
+	s = strings.TrimRight(s, " ")
+	_, n := utf8.DecodeLastRuneInString(s)
+	return s[len(s)-n:]
 }

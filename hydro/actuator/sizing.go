@@ -1,0 +1,411 @@
+package actuator
+
+import (
+	"math"
+	"time"
+
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/validate"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// Defaults for the optional fields of a [Duty].
+const (
+	// DefaultSealEfficiency is the share of the ideal force p·A left at the
+	// rod after seal friction when Duty.SealEfficiency is 0: 0.90, a 10 %
+	// friction allowance (common practice; low-friction seal sets do
+	// better, worn or cold ones worse: use the maker's figure when known).
+	DefaultSealEfficiency = 0.90
+	// DefaultAreaRatio is the least cap-to-annulus area ratio φ when
+	// Duty.AreaRatio is 0: 1.25, a rod of at least 0.447 × bore (our
+	// choice: the smallest rod ratio commonly offered with a bore).
+	DefaultAreaRatio = 1.25
+)
+
+// Duty is what one stroke of a cylinder must do, the input to sizing. The
+// load moves along a straight guide at InclineDegrees above horizontal in
+// the direction of the stroke: positive raises the load, negative lowers
+// it, 90 is a vertical lift, 0 a horizontal slide.
+//
+// Optional fields are marked; their zero value means "not present" or the
+// documented default.
+type Duty struct {
+	Direction      Direction      // Extend pushes the load, Retract pulls it
+	Force          units.Force    // process force at the rod (pressing, clamping, cutting), ≥ 0
+	Mass           units.Mass     // moving mass: load, rod and piston, ≥ 0 (optional)
+	InclineDegrees float64        // angle of travel above horizontal, −90 to 90 (optional)
+	Friction       float64        // coefficient of friction of the load on its guide, ≥ 0 (optional)
+	Speed          units.Velocity // speed the load is brought to, ≥ 0 (optional)
+	AccelDistance  units.Length   // distance in which the load reaches Speed (optional; or AccelTime)
+	AccelTime      time.Duration  // time in which the load reaches Speed (optional; or AccelDistance)
+	Pressure       units.Pressure // pressure available at the inlet port for this stroke, > 0
+	BackPressure   units.Pressure // pressure on the outlet side (return line, meter-out), ≥ 0 (optional)
+	SealEfficiency float64        // share of p·A left after seal friction, (0, 1]; 0 means DefaultSealEfficiency
+	AreaRatio      float64        // least cap/annulus area ratio φ, > 1; 0 means DefaultAreaRatio
+	Stroke         units.Length   // stroke of the cylinder, > 0
+	Ends           RodEnds        // rod arrangement of the cylinder to choose
+	Action         Action         // action of the cylinder to choose; a SingleActing one cannot size a Retract duty
+
+	// Bores and Rods are the standard sizes to choose from; an empty
+	// Series means ISO 3320 (components.ISO3320Bores, ISO3320Rods).
+	// Pass components.InchBores for inch cylinders or a maker's own list.
+	Bores, Rods components.Series[units.Length]
+
+	// Buckling, when not nil, also checks the chosen rod for buckling at
+	// full extension and picks a larger standard rod where it fails; see
+	// [Column] for its fields (its Cylinder is filled in by sizing).
+	Buckling *Column
+}
+
+// LoadForces breaks down the force a stroke needs at the rod, each term
+// positive when it opposes the motion:
+//
+//	F = F_process + m·g·sin θ + μ·m·g·cos θ + m·a
+//
+// with θ the incline and a the acceleration: a = v²/(2s) over distance s,
+// or a = v/t over time t (uniform acceleration from rest).
+type LoadForces struct {
+	Process      units.Force        // Duty.Force
+	Gravity      units.Force        // m·g·sin θ: > 0 raising, < 0 lowering
+	Friction     units.Force        // μ·m·g·cos θ
+	Acceleration units.Force        // m·a
+	Accel        units.Acceleration // a
+}
+
+// Total returns the sum of the four terms: the force the rod must deliver
+// (plain arithmetic).
+func (l LoadForces) Total() units.Force { return l.Process + l.Gravity + l.Friction + l.Acceleration }
+
+// Forces returns the breakdown of the force the stroke needs at the rod.
+// It validates the duty (see [Duty.Size]); errors match units.ErrRange
+// and name the field.
+func (d Duty) Forces() (LoadForces, error) {
+	const fn = "actuator.Duty.Forces"
+	if err := d.validate(fn); err != nil {
+		return LoadForces{}, err
+	}
+	return d.forces(), nil
+}
+
+func (d Duty) forces() LoadForces {
+	s, c := math.Sincos(d.InclineDegrees * math.Pi / 180)
+	w := d.Mass.TimesAcceleration(units.StandardGravity)
+	var a units.Acceleration
+	switch {
+	case d.AccelDistance > 0:
+		a = units.Acceleration(float64(d.Speed) * float64(d.Speed) / (2 * float64(d.AccelDistance)))
+	case d.AccelTime > 0:
+		a = units.Acceleration(float64(d.Speed) / d.AccelTime.Seconds())
+	}
+	return LoadForces{
+		Process:      d.Force,
+		Gravity:      w * units.Force(s),
+		Friction:     w * units.Force(d.Friction*c),
+		Acceleration: d.Mass.TimesAcceleration(a),
+		Accel:        a,
+	}
+}
+
+func (d Duty) validate(fn string) error {
+	if d.Direction > Retract {
+		return validate.Fail(fn, "Duty.Direction", float64(d.Direction), "Extend or Retract")
+	}
+	checks := [...]struct {
+		name string
+		v    float64
+	}{
+		{"Duty.Force", float64(d.Force)}, {"Duty.Mass", float64(d.Mass)}, {"Duty.Friction", d.Friction},
+		{"Duty.Speed", float64(d.Speed)}, {"Duty.AccelDistance", float64(d.AccelDistance)},
+		{"Duty.BackPressure", float64(d.BackPressure)},
+	}
+	for _, c := range checks {
+		if err := validate.NonNegative(fn, c.name, c.v); err != nil {
+			return err
+		}
+	}
+	if err := validate.InRange(fn, "Duty.InclineDegrees", d.InclineDegrees, -90, 90); err != nil {
+		return err
+	}
+	if d.AccelTime < 0 {
+		return &units.RangeError{Func: fn, Param: "Duty.AccelTime", Value: d.AccelTime.String(), Valid: "≥ 0"}
+	}
+	if d.AccelTime > 0 && d.AccelDistance > 0 {
+		return &units.RangeError{Func: fn, Param: "Duty.AccelTime", Value: d.AccelTime.String(),
+			Valid: "0 when Duty.AccelDistance is set (give one of the two)"}
+	}
+	if err := validate.Positive(fn, "Duty.Pressure", d.Pressure); err != nil {
+		return err
+	}
+	if err := validate.InRange(fn, "Duty.SealEfficiency", d.SealEfficiency, 0, 1); err != nil {
+		return err
+	}
+	if d.AreaRatio != 0 {
+		if err := validate.InRange(fn, "Duty.AreaRatio", d.AreaRatio, 1.0001, 100); err != nil {
+			return err
+		}
+	}
+	if err := validate.Positive(fn, "Duty.Stroke", d.Stroke); err != nil {
+		return err
+	}
+	if d.Ends > DoubleRod {
+		return validate.Fail(fn, "Duty.Ends", float64(d.Ends), "SingleRod or DoubleRod")
+	}
+	if d.Action > SingleActing {
+		return validate.Fail(fn, "Duty.Action", float64(d.Action), "DoubleActing or SingleActing")
+	}
+	if d.Action == SingleActing && d.Direction == Retract {
+		return &units.RangeError{Func: fn, Param: "Duty.Direction", Value: "Retract",
+			Valid: "Extend (a single-acting cylinder retracts under its load or a spring)"}
+	}
+	return nil
+}
+
+// efficiency returns the seal efficiency and its rule.
+func (d Duty) efficiency() (float64, components.Rule) {
+	if d.SealEfficiency == 0 {
+		return DefaultSealEfficiency, components.PracticeRule("seal friction allowance 10 % (efficiency 0.90)")
+	}
+	return d.SealEfficiency, components.CallerRule("Duty.SealEfficiency")
+}
+
+// ratio returns the least area ratio and its rule.
+func (d Duty) ratio() (float64, components.Rule) {
+	if d.AreaRatio == 0 {
+		return DefaultAreaRatio, components.OurRule("least area ratio 1.25 when none is given")
+	}
+	return d.AreaRatio, components.CallerRule("Duty.AreaRatio")
+}
+
+// MinimumBore returns the smallest bore that gives the stroke's total force
+// (see [LoadForces]) at the available pressure, with the seal efficiency η
+// and a rod that gives the least area ratio φ = A₁/A₂:
+//
+//	η·(p·A_in − p_back·A_out) ≥ F,  A₁ = F / (η·(p·a_in − p_back·a_out)),  D = √(4·A₁/π)
+//
+// where a_in, a_out are 1 for the cap side and 1/φ for an annulus side. It
+// fails with an error matching units.ErrRange for a bad field (see
+// [Duty.Size]), when the total force is not > 0 (a lowering stroke the load
+// drives on its own has nothing to size: size the lifting stroke, and hold
+// the lowering with a load-holding valve), and when the back pressure leaves
+// no net force.
+func (d Duty) MinimumBore() (units.Length, error) {
+	const fn = "actuator.Duty.MinimumBore"
+	if err := d.validate(fn); err != nil {
+		return 0, err
+	}
+	return d.minimumBore(fn, d.forces().Total())
+}
+
+func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
+	if total <= 0 {
+		return 0, &units.RangeError{Func: fn, Param: "Duty.Force", Value: "a total load force of " + total.String(),
+			Valid: "a total force > 0 (the load drives this stroke on its own: size the opposite stroke)"}
+	}
+	eta, _ := d.efficiency()
+	phi, _ := d.ratio()
+	in, out := 1/phi, 1/phi
+	switch {
+	case d.Ends == DoubleRod:
+	case d.Direction == Extend:
+		in = 1
+	default:
+		out = 1
+	}
+	net := eta * (float64(d.Pressure)*in - float64(d.BackPressure)*out)
+	if net <= 0 {
+		return 0, validate.Fail(fn, "Duty.BackPressure", d.BackPressure,
+			"< "+units.Pressure(float64(d.Pressure)*in/out).String()+" (the inlet pressure times the area ratio)")
+	}
+	bore := diameterOf(units.Area(float64(total) / net))
+	return bore, validate.Result(fn, "bore", bore)
+}
+
+// CylinderSize is the result of sizing a cylinder for a [Duty]: the forces,
+// the computed minimum bore, the standard bore and rod chosen, the chosen
+// cylinder, and the pressure it needs against the pressure available.
+type CylinderSize struct {
+	Forces   LoadForces
+	Bore     components.Choice[units.Length] // Required is the minimum bore
+	Rod      components.Choice[units.Length] // Required is the least rod for the area ratio (or buckling)
+	Cylinder Cylinder                        // the chosen cylinder; zero when no standard size meets the duty
+
+	// Pressure is the pressure the chosen cylinder needs at the inlet for
+	// the total force (after seal friction, against the back pressure),
+	// held at most at Duty.Pressure. When no standard size meets the duty
+	// it is the failed check of the largest bore with a rod of exactly the
+	// least area ratio.
+	Pressure components.Check[units.Pressure]
+
+	SealEfficiency float64         // η used
+	SealRule       components.Rule // where η comes from
+	AreaRatio      float64         // least φ used to choose the rod
+	AreaRatioRule  components.Rule // where φ comes from
+
+	Buckling *BucklingCheck // the buckling check of the chosen rod, when Duty.Buckling is set
+
+	Findings components.Findings
+}
+
+// Size sizes a cylinder for the duty: the total force (see [LoadForces]),
+// the minimum bore ([Duty.MinimumBore]), then the smallest standard bore at
+// or above it whose rod, the smallest standard rod giving at least the area
+// ratio (and, with Duty.Buckling set, passing the buckling check), lets the
+// cylinder deliver the force at the available pressure; and the pressure
+// that cylinder actually needs.
+//
+// A requirement beyond the largest standard bore or rod is not an error:
+// the result carries a failed choice (Chosen 0, OK false), a zero Cylinder
+// and a finding, so a report can show it beside the rest.
+//
+// The result's findings include the load-holding cautions: a load the stroke
+// raises (its weight along the path exceeding its friction) would drive the
+// cylinder back if pressure were lost, and a load the stroke lowers
+// overruns it; both need a load-holding valve at the cylinder port
+// (ISO 4413).
+//
+// Errors, for bad input only, match units.ErrRange and name the field:
+// Force, Mass, Friction, Speed, AccelDistance, AccelTime and BackPressure
+// must be finite and ≥ 0 (AccelDistance and AccelTime not both set);
+// InclineDegrees from −90 to 90; Pressure and Stroke finite and > 0;
+// SealEfficiency in (0, 1] or 0; AreaRatio above 1 (up to 100) or 0; the
+// total force > 0; the back pressure below what leaves a net force.
+func (d Duty) Size() (CylinderSize, error) {
+	const fn = "actuator.Duty.Size"
+	if err := d.validate(fn); err != nil {
+		return CylinderSize{}, err
+	}
+	r := CylinderSize{Forces: d.forces()}
+	r.SealEfficiency, r.SealRule = d.efficiency()
+	r.AreaRatio, r.AreaRatioRule = d.ratio()
+	if d.Buckling != nil {
+		if err := d.Buckling.validateSetup(fn, "Duty.Buckling."); err != nil {
+			return CylinderSize{}, err
+		}
+	}
+	total := r.Forces.Total()
+	minBore, err := d.minimumBore(fn, total)
+	if err != nil {
+		return CylinderSize{}, err
+	}
+	bores, rods := boresOr(d.Bores), rodsOr(d.Rods)
+	r.Bore = components.Choice[units.Length]{Required: minBore, Series: bores.Name(), Rule: bores.Rule()}
+	need := total / units.Force(r.SealEfficiency)
+	found := false
+	for b := range bores.All() {
+		if b < minBore {
+			continue
+		}
+		c, rod, bk, ok := d.tryBore(b, rods, r.AreaRatio)
+		if !ok {
+			r.Rod = rod
+			continue
+		}
+		p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+		if err != nil {
+			return CylinderSize{}, rename(err, fn)
+		}
+		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling = b, rod, c, bk
+		r.Pressure = components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
+		if found = r.Pressure.OK(); found {
+			break
+		}
+	}
+	if !found {
+		r.Bore.Chosen, r.Cylinder, r.Buckling = 0, Cylinder{}, nil
+		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, need)
+	}
+	r.Findings = d.findings(r, bores)
+	return r, nil
+}
+
+// largestNeeds returns the failed pressure check of a duty no standard size
+// meets: the pressure the largest bore would need with a rod of exactly the
+// least area ratio.
+func (d Duty) largestNeeds(bore units.Length, phi float64, need units.Force) components.Check[units.Pressure] {
+	c := Cylinder{Bore: bore, Rod: bore * units.Length(math.Sqrt(1-1/phi)), Stroke: d.Stroke, Ends: d.Ends}
+	p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+	if err != nil {
+		p = units.Pressure(math.MaxFloat64) // beyond any finite limit: still a failed check
+	}
+	return components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
+}
+
+// tryBore picks the rod for bore b: the smallest standard rod giving at
+// least area ratio phi and, when d.Buckling is set, passing the buckling
+// check. ok is false when no standard rod below the bore does.
+func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (Cylinder, components.Choice[units.Length], *BucklingCheck, bool) {
+	c := Cylinder{Bore: b, Stroke: d.Stroke, Ends: d.Ends, Action: d.Action}
+	least := b * units.Length(math.Sqrt(1-1/phi))
+	rod, err := rods.Select(least)
+	if err != nil || !rod.OK() || rod.Chosen >= b {
+		rod.Chosen = 0
+		return Cylinder{}, rod, nil, false
+	}
+	c.Rod = rod.Chosen
+	if d.Buckling == nil {
+		return c, rod, nil, true
+	}
+	col := *d.Buckling
+	col.Cylinder = c
+	bk, err := col.MinimumRod(rods)
+	if err != nil || !bk.Rod.OK() || bk.Rod.Chosen >= b {
+		rod.Chosen = 0
+		return Cylinder{}, rod, nil, false
+	}
+	if bk.Rod.Chosen > rod.Chosen {
+		rod = bk.Rod
+		c.Rod = rod.Chosen
+	}
+	col.Cylinder = c
+	chk, err := col.Check()
+	if err != nil {
+		return Cylinder{}, rod, nil, false
+	}
+	return c, rod, &chk, true
+}
+
+// findings gathers the cautions and design notes of a sizing.
+func (d Duty) findings(r CylinderSize, bores components.Series[units.Length]) components.Findings {
+	var fs components.Findings
+	if f, ok := d.holding(r.Forces); ok {
+		fs = append(fs, f)
+	}
+	switch {
+	case r.Bore.Chosen == 0:
+		fs = append(fs, components.NewFinding(components.Notice, components.NoHazard, "actuator.no-standard-size",
+			bores.Rule(), "no standard bore and rod up to %v in %v deliver %v at %v",
+			bores.Largest(), bores.Name(), r.Forces.Total(), d.Pressure))
+	case !bores.Preferred(r.Bore.Chosen):
+		fs = append(fs, components.NewFinding(components.Notice, components.NoHazard, "actuator.second-choice-bore",
+			bores.Rule(), "the chosen bore %v is a second-choice size; the preferred sizes are easier to buy",
+			r.Bore.Chosen))
+	}
+	if d.Mass > 0 && d.Speed > 0 && d.AccelDistance == 0 && d.AccelTime == 0 {
+		fs = append(fs, components.NewFinding(components.Notice, components.NoHazard, "actuator.no-acceleration",
+			components.PhysicsRule("F = m·a"),
+			"no acceleration distance or time is given, so the force to bring %v to %v is not included",
+			d.Mass, d.Speed))
+	}
+	if r.Buckling != nil {
+		fs = fs.Merge(r.Buckling.Findings...)
+	}
+	return fs
+}
+
+// holding returns the load-holding caution for a load whose weight along
+// its path exceeds its guide friction.
+func (d Duty) holding(l LoadForces) (components.Finding, bool) {
+	switch {
+	case l.Gravity > l.Friction:
+		return components.NewFinding(components.Warning, components.SuspendedLoad, "actuator.load-holding",
+			ruleISO4413(),
+			"the load's weight along its path (%v) is more than its friction and would drive the cylinder back if pressure were lost: hold it with a load-holding valve mounted at the cylinder port",
+			l.Gravity), true
+	case -l.Gravity > l.Friction:
+		return components.NewFinding(components.Warning, components.OverrunningLoad, "actuator.overrunning",
+			ruleISO4413(),
+			"the load's weight along its path (%v) is more than its friction, so the load drives the cylinder on this stroke: control it with a counterbalance valve mounted at the cylinder port",
+			-l.Gravity), true
+	}
+	return components.Finding{}, false
+}

@@ -1,0 +1,310 @@
+package actuator
+
+import (
+	"math"
+	"testing"
+	"time"
+
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/checktest"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// TestForces: the terms of F = F_p + m·g·sin θ + μ·m·g·cos θ + m·a [X].
+func TestForces(t *testing.T) {
+	g := float64(units.StandardGravity)
+	for _, w := range []struct {
+		name                 string
+		d                    Duty
+		grav, fric, acc, tot float64 // N
+	}{
+		{"horizontal slide", Duty{Force: 1000, Mass: 500, Friction: 0.2}, 0, 0.2 * 500 * g, 0, 1000 + 0.2*500*g},
+		{"vertical lift", Duty{Mass: 1000, InclineDegrees: 90, Friction: 0.3}, 1000 * g, 0.3 * 1000 * g * math.Cos(math.Pi/2), 0, 1000*g + 0.3*1000*g*math.Cos(math.Pi/2)},
+		{"30° ramp up", Duty{Mass: 200, InclineDegrees: 30, Friction: 0.1}, 100 * g, 0.1 * 200 * g * math.Sqrt(3) / 2, 0, 100*g + 0.1*200*g*math.Sqrt(3)/2},
+		{"30° ramp down", Duty{Force: 5000, Mass: 200, InclineDegrees: -30, Friction: 0.1}, -100 * g, 0.1 * 200 * g * math.Sqrt(3) / 2, 0, 5000 - 100*g + 0.1*200*g*math.Sqrt(3)/2},
+		// a = v²/(2s) = 0.25/0.1 = 2.5 m/s²; a = v/t = 0.5/0.2 = 2.5 m/s².
+		{"accelerate over a distance", Duty{Mass: 400, Speed: 0.5, AccelDistance: 50 * mm}, 0, 0, 1000, 1000},
+		{"accelerate over a time", Duty{Mass: 400, Speed: 0.5, AccelTime: 200 * time.Millisecond}, 0, 0, 1000, 1000},
+	} {
+		w.d.Pressure, w.d.Stroke = 100*units.Bar, 1
+		f, err := w.d.Forces()
+		if err != nil {
+			t.Errorf("%s: %v", w.name, err)
+			continue
+		}
+		for _, c := range []struct {
+			term      string
+			got, want float64
+		}{{"Gravity", float64(f.Gravity), w.grav}, {"Friction", float64(f.Friction), w.fric},
+			{"Acceleration", float64(f.Acceleration), w.acc}, {"Total", float64(f.Total()), w.tot}} {
+			if math.Abs(c.got-c.want) > 1e-9*max(1, math.Abs(c.want)) {
+				t.Errorf("%s: %s = %.10g N; want %.10g", w.name, c.term, c.got, c.want)
+			}
+		}
+	}
+}
+
+// TestSizePush: 100 kN push at 160 bar with the default 10 % seal friction:
+// A₁ = 100 kN/(0.9·160 bar) = 6.944·10⁻³ m², D = 94.03 mm → ISO 3320 100 mm;
+// rod ≥ 100·√(1 − 1/1.25) = 44.72 mm → 45 mm; the 100 mm bore needs
+// 100 kN/0.9/7.854·10⁻³ m² = 141.47 bar (hand arithmetic [X]).
+func TestSizePush(t *testing.T) {
+	d := Duty{Force: 100 * units.Kilonewton, Pressure: 160 * units.Bar, Stroke: 500 * mm}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Bore.Required, 94.0316*mm, 1e-5) || r.Bore.Chosen != 100*mm || !r.Bore.OK() {
+		t.Errorf("Bore = %+v; want 94.03 mm → 100 mm", r.Bore)
+	}
+	if !near(r.Rod.Required, 44.7214*mm, 1e-5) || r.Rod.Chosen != 45*mm {
+		t.Errorf("Rod = %+v; want 44.72 mm → 45 mm", r.Rod)
+	}
+	if !near(r.Pressure.Value, 141.471*units.Bar, 1e-5) || r.Pressure.Limit != 160*units.Bar || !r.Pressure.OK() {
+		t.Errorf("Pressure = %+v; want 141.47 bar within 160 bar", r.Pressure)
+	}
+	if r.Cylinder != (Cylinder{Bore: 100 * mm, Rod: 45 * mm, Stroke: 500 * mm}) {
+		t.Errorf("Cylinder = %+v", r.Cylinder)
+	}
+	if r.SealEfficiency != 0.9 || r.SealRule.Kind != components.CommonPractice || r.AreaRatioRule.Kind != components.OurChoice {
+		t.Errorf("assumptions: η %v (%v), φ rule %v", r.SealEfficiency, r.SealRule, r.AreaRatioRule)
+	}
+	if len(r.Findings) != 0 {
+		t.Errorf("a horizontal push with no mass: findings %v; want none", r.Findings)
+	}
+}
+
+// TestSizePullStepsUp: 50 kN pull at 200 bar, 5 bar on the cap side, least
+// area ratio 2. A₁ = 50 kN/(0.9·(100 bar − 5 bar)) → D = 86.29 mm → 90 mm,
+// whose least rod 63.6 mm rounds up to 70 mm and needs 233.7 bar; 100 mm
+// (rod 80 mm) needs 210.4 bar; 110 mm (rod 80 mm) needs 134.71 bar and is
+// chosen, a second-choice size (hand arithmetic [X]).
+func TestSizePullStepsUp(t *testing.T) {
+	d := Duty{Direction: Retract, Force: 50 * units.Kilonewton, Pressure: 200 * units.Bar,
+		BackPressure: 5 * units.Bar, AreaRatio: 2, Stroke: 300 * mm}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Bore.Required, 86.29*mm, 1e-4) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 80*mm {
+		t.Errorf("Bore %+v, Rod %+v; want 86.29 mm → 110 mm with an 80 mm rod", r.Bore, r.Rod)
+	}
+	if !near(r.Pressure.Value, 134.711*units.Bar, 1e-5) || !r.Pressure.OK() {
+		t.Errorf("Pressure = %+v; want 134.7 bar", r.Pressure)
+	}
+	if len(r.Findings.Topic("actuator.second-choice-bore")) != 1 {
+		t.Errorf("findings %v; want the second-choice notice for 110 mm", r.Findings)
+	}
+}
+
+// TestSizeRoundTrip: for a spread of duties, the chosen cylinder delivers at
+// least the total force at the available pressure after seal friction, and
+// the pressure it needs is at most the available one (round trip).
+func TestSizeRoundTrip(t *testing.T) {
+	for _, f := range []units.Force{500, 4e3, 37e3, 120e3, 900e3} {
+		for _, dir := range []Direction{Extend, Retract} {
+			for _, ends := range []RodEnds{SingleRod, DoubleRod} {
+				d := Duty{Direction: dir, Force: f, Mass: 300, Friction: 0.15, Speed: 0.2, AccelDistance: 20 * mm,
+					Pressure: 180 * units.Bar, BackPressure: 3 * units.Bar, AreaRatio: 1.6, Stroke: 800 * mm, Ends: ends}
+				r, err := d.Size()
+				if err != nil || !r.Bore.OK() {
+					t.Errorf("%v %v %v: %+v, %v", f, dir, ends, r.Bore, err)
+					continue
+				}
+				got, err := r.Cylinder.Force(dir, d.Pressure, d.BackPressure)
+				if err != nil || float64(got)*r.SealEfficiency < float64(r.Forces.Total())*(1-1e-12) {
+					t.Errorf("%v %v %v: the chosen %+v gives %v after friction, want ≥ %v", f, dir, ends, r.Cylinder, got, r.Forces.Total())
+				}
+				if !r.Pressure.OK() || r.Bore.Chosen < r.Bore.Required {
+					t.Errorf("%v %v %v: pressure %+v, bore %+v", f, dir, ends, r.Pressure, r.Bore)
+				}
+				// The bore below the chosen one, with its rod, does not do the job.
+				b, err := components.ISO3320Bores().Below(r.Bore.Chosen)
+				if err != nil {
+					continue
+				}
+				lower := r.Cylinder
+				lower.Bore = b
+				if lower.Rod >= b {
+					continue
+				}
+				if low, _ := lower.Force(dir, d.Pressure, d.BackPressure); float64(low)*r.SealEfficiency >= float64(r.Forces.Total()) {
+					t.Errorf("%v %v %v: the smaller bore %v would do (%v)", f, dir, ends, b, low)
+				}
+			}
+		}
+	}
+}
+
+func TestSizeFindings(t *testing.T) {
+	base := Duty{Mass: 2000, Pressure: 160 * units.Bar, Stroke: 1}
+	lift := base
+	lift.InclineDegrees = 90
+	r, err := lift.Size()
+	if err != nil || len(r.Findings.Hazard(components.SuspendedLoad).AtLeast(components.Warning)) != 1 {
+		t.Errorf("a vertical lift: findings %v, %v; want a suspended-load warning", r.Findings, err)
+	}
+	// Lowering on a 60° ramp with μ 0.1: the weight along the path, 0.866·m·g,
+	// is more than the friction, 0.05·m·g: the load overruns. A pressing force
+	// keeps the total positive.
+	lower := base
+	lower.InclineDegrees, lower.Friction, lower.Force = -60, 0.1, 40*units.Kilonewton
+	r, err = lower.Size()
+	if err != nil || len(r.Findings.Hazard(components.OverrunningLoad)) != 1 {
+		t.Errorf("lowering: findings %v, %v; want an overrunning-load warning", r.Findings, err)
+	}
+	// A 10° ramp with μ 0.3: friction (0.295·m·g) holds the load (0.174·m·g).
+	held := base
+	held.InclineDegrees, held.Friction = 10, 0.3
+	r, err = held.Size()
+	if err != nil || len(r.Findings.AtLeast(components.Warning)) != 0 {
+		t.Errorf("friction holds the load: findings %v, %v; want no warning", r.Findings, err)
+	}
+	// Speed without a ramp: a notice that acceleration is left out.
+	fast := base
+	fast.Speed = 0.3
+	fast.Force = 1000
+	r, _ = fast.Size()
+	if len(r.Findings.Topic("actuator.no-acceleration")) != 1 {
+		t.Errorf("findings %v; want the no-acceleration notice", r.Findings)
+	}
+}
+
+// TestSizeBeyondSeries: 20 MN at 100 bar needs a 1.68 m bore, beyond
+// ISO 3320's 500 mm: a failed choice and a finding, not an error.
+func TestSizeBeyondSeries(t *testing.T) {
+	d := Duty{Force: 20e6, Pressure: 100 * units.Bar, Stroke: 1}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Bore.OK() || r.Bore.Chosen != 0 || r.Cylinder != (Cylinder{}) || r.Pressure.OK() {
+		t.Errorf("beyond the series: bore %+v, cylinder %+v, pressure %+v", r.Bore, r.Cylinder, r.Pressure)
+	}
+	if len(r.Findings.Topic("actuator.no-standard-size")) != 1 {
+		t.Errorf("findings %v; want the no-standard-size notice", r.Findings)
+	}
+	// The failed pressure check quotes the 500 mm bore with a 1.25 rod:
+	// 20 MN/0.9/(π/4·0.5²) = 1131.8 bar.
+	if !near(r.Pressure.Value, 1131.77*units.Bar, 1e-4) {
+		t.Errorf("largest bore needs %v; want 1131.8 bar", r.Pressure.Value)
+	}
+}
+
+func TestSizeCallerSeries(t *testing.T) {
+	in := units.Inch
+	bores, _ := components.NewSeries("test inch bores", components.PracticeRule("test"),
+		[]units.Length{1.5 * in, 2 * in, 2.5 * in, 3.25 * in, 4 * in}, nil)
+	rods, _ := components.NewSeries("test inch rods", components.PracticeRule("test"),
+		[]units.Length{0.625 * in, 1 * in, 1.375 * in, 1.75 * in}, nil)
+	// 5000 lbf at 2000 psi, η 0.95: A₁ = 2.632 in², D = 1.830 in → 2 in;
+	// rod ≥ 2·√0.2 = 0.894 in → 1 in (hand arithmetic [X]).
+	d := Duty{Force: 5000 * units.PoundForce, Pressure: 2000 * units.PSI, SealEfficiency: 0.95,
+		Stroke: 12 * in, Bores: bores, Rods: rods}
+	r, err := d.Size()
+	if err != nil || r.Bore.Chosen != 2*in || r.Rod.Chosen != 1*in || r.Bore.Series != "test inch bores" {
+		t.Errorf("inch sizing: %+v %+v, %v", r.Bore, r.Rod, err)
+	}
+	if !near(r.Bore.Required, 1.8305*in, 1e-4) || r.SealRule.Kind != components.CallerValue {
+		t.Errorf("required %v in, rule %v", r.Bore.Required.Inches(), r.SealRule)
+	}
+}
+
+func TestDutyBadInput(t *testing.T) {
+	ok := Duty{Force: 1000, Pressure: 100 * units.Bar, Stroke: 1}
+	nan := math.NaN()
+	for _, w := range []struct {
+		param string
+		edit  func(*Duty)
+	}{
+		{"Duty.Direction", func(d *Duty) { d.Direction = 9 }},
+		{"Duty.Force", func(d *Duty) { d.Force = -1 }},
+		{"Duty.Force", func(d *Duty) { d.Force = units.Force(nan) }},
+		{"Duty.Force", func(d *Duty) { d.Force = 0 }}, // nothing to size
+		{"Duty.Mass", func(d *Duty) { d.Mass = -1 }},
+		{"Duty.Friction", func(d *Duty) { d.Friction = math.Inf(1) }},
+		{"Duty.Speed", func(d *Duty) { d.Speed = -1 }},
+		{"Duty.AccelDistance", func(d *Duty) { d.AccelDistance = units.Length(nan) }},
+		{"Duty.AccelTime", func(d *Duty) { d.AccelTime = -time.Second }},
+		{"Duty.AccelTime", func(d *Duty) { d.AccelTime, d.AccelDistance = time.Second, 1 }},
+		{"Duty.BackPressure", func(d *Duty) { d.BackPressure = -1 }},
+		{"Duty.BackPressure", func(d *Duty) { d.BackPressure = 90 * units.Bar }}, // above p/φ = 80 bar: no net pull
+		{"Duty.InclineDegrees", func(d *Duty) { d.InclineDegrees = 91 }},
+		{"Duty.Pressure", func(d *Duty) { d.Pressure = 0 }},
+		{"Duty.SealEfficiency", func(d *Duty) { d.SealEfficiency = 1.1 }},
+		{"Duty.SealEfficiency", func(d *Duty) { d.SealEfficiency = -0.1 }},
+		{"Duty.AreaRatio", func(d *Duty) { d.AreaRatio = 1 }},
+		{"Duty.Stroke", func(d *Duty) { d.Stroke = 0 }},
+		{"Duty.Ends", func(d *Duty) { d.Ends = 3 }},
+		{"Duty.Action", func(d *Duty) { d.Action = 3 }},
+		{"Duty.Direction", func(d *Duty) { d.Action, d.Direction = SingleActing, Retract }},
+		{"Duty.Buckling.Yield", func(d *Duty) { d.Buckling = &Column{Retracted: 1, Relief: 1} }},
+	} {
+		d := ok
+		d.Direction = Retract // the pull stroke, so a large back pressure leaves no net force
+		w.edit(&d)
+		_, err := d.Size()
+		checktest.RangeErrorIn(t, err, "actuator.Duty.Size", w.param)
+		if w.param == "Duty.Buckling.Yield" {
+			continue
+		}
+		_, err = d.MinimumBore()
+		checktest.RangeErrorIn(t, err, "actuator.Duty.MinimumBore", w.param)
+	}
+}
+
+// pressDuty is a horizontal press stroke that lands on a preferred bore,
+// so sizing returns no findings.
+func pressDuty() Duty {
+	return Duty{Force: 70 * units.Kilonewton, Mass: 300, Friction: 0.1, Speed: 0.2, AccelDistance: 30 * mm,
+		Pressure: 160 * units.Bar, Stroke: 600 * mm}
+}
+
+func TestSizeAllocations(t *testing.T) {
+	d := pressDuty()
+	if n := testing.AllocsPerRun(100, func() { _, _ = d.MinimumBore() }); n != 0 {
+		t.Errorf("MinimumBore allocates %v times; want 0", n)
+	}
+	if n := testing.AllocsPerRun(100, func() { _, _ = d.Size() }); n != 0 {
+		t.Errorf("Size without findings allocates %v times; want 0", n)
+	}
+}
+
+func BenchmarkDutyMinimumBore(b *testing.B) {
+	d := pressDuty()
+	b.ReportAllocs()
+	for b.Loop() {
+		_, _ = d.MinimumBore()
+	}
+}
+
+func BenchmarkDutySize(b *testing.B) {
+	d := pressDuty()
+	b.ReportAllocs()
+	for b.Loop() {
+		_, _ = d.Size()
+	}
+}
+
+// TestSizeLandsOnISO3320: a duty whose minimum bore is just under each
+// ISO 3320 bore chooses that bore, and the second-choice sizes are marked
+// (ISO 3320 bores, mm, from memory: 8 10 12 16 20 25 32 40 50 63 80 (90) 100
+// (110) 125 (140) 160 (180) 200 (220) 250 (280) 320 (360) 400 (450) 500).
+func TestSizeLandsOnISO3320(t *testing.T) {
+	bores := []float64{8, 10, 12, 16, 20, 25, 32, 40, 50, 63, 80, 90, 100, 110, 125, 140, 160, 180, 200,
+		220, 250, 280, 320, 360, 400, 450, 500}
+	second := map[float64]bool{90: true, 110: true, 140: true, 180: true, 220: true, 280: true, 360: true, 450: true}
+	p := 100 * units.Bar
+	for _, b := range bores {
+		want := units.Length(b) * mm
+		f := p.TimesArea(units.CircleArea(want)) * units.Force(DefaultSealEfficiency*(1-1e-9))
+		r, err := Duty{Force: f, Pressure: p, Stroke: 1}.Size()
+		if err != nil || r.Bore.Chosen != want {
+			t.Errorf("minimum bore just under %v mm: chose %v, %v", b, r.Bore.Chosen, err)
+			continue
+		}
+		if got := len(r.Findings.Topic("actuator.second-choice-bore")) == 1; got != second[b] {
+			t.Errorf("%v mm: second-choice notice %v; want %v", b, got, second[b])
+		}
+	}
+}
