@@ -274,7 +274,7 @@ type BucklingCheck struct {
 func (c Column) Check() (BucklingCheck, error) {
 	const fn = "actuator.Column.Check"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return BucklingCheck{}, err
+		return BucklingCheck{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return BucklingCheck{}, err
@@ -322,7 +322,7 @@ type RodChoice struct {
 func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, error) {
 	const fn = "actuator.Column.MinimumRod"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return RodChoice{}, err
+		return RodChoice{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return RodChoice{}, err
