@@ -5,6 +5,8 @@ package units
 // carry, the descriptions of the quantity types, and the map from every
 // accepted spelling to its unit.
 
+import "strings"
+
 // reference says what a pressure or temperature spelling is measured from.
 type reference uint8
 
@@ -13,6 +15,7 @@ const (
 	refGauge                          // measured from ambient: psi, psig, bar, barg
 	refAbsolute                       // measured from vacuum: psia, bara, atm
 	refPoint                          // a temperature on a scale (K, °C, °F, °R)
+	refDiff                           // a difference of two pressures: psid, bard
 )
 
 // unitDef is one registered unit. SI value = number·factor + offset; the
@@ -37,8 +40,34 @@ type typeInfo struct {
 	hasMin    bool
 	min       float64 // inclusive lower bound, SI
 	minText   string
-	examples  string // unit spellings for messages
+	examples  string            // unit spellings for messages
+	context   []contextSpelling // spellings only this type's parser reads
 }
+
+// contextSpelling is a spelling with a meaning for one type's parser only
+// (written in the table of gen.go): the unit of that type it reads as, or,
+// with unit −1, an error that says what to write instead.
+type contextSpelling struct {
+	spelling string
+	unit     int   // index in unitTable, or −1 to refuse
+	err      error // the sentinel of a refusal
+	detail   string
+}
+
+// contextOf returns the context spelling of t that spelling matches,
+// letter case ignored, or nil.
+func (t *typeInfo) contextOf(spelling string) *contextSpelling {
+	for i := range t.context {
+		if c := &t.context[i]; len(c.spelling) == len(spelling) && strings.EqualFold(c.spelling, spelling) {
+			return c
+		}
+	}
+	return nil
+}
+
+// isVacuum reports whether u is a vacuum gauge reading ("inHg vac"): a
+// depth below ambient, whose negative factor gives a negative gauge pressure.
+func (u *unitDef) isVacuum() bool { return u.factor < 0 }
 
 // valid describes the values of t a RangeError wants: "a finite pressure",
 // "a finite temperature ≥ 0 K (absolute zero)".
