@@ -224,7 +224,7 @@ func Budget(phases []Phase) (HeatLoad, error) {
 		if in > 0 && p > in {
 			return HeatLoad{}, validate.Fail(fn, name+".Loads", p, "at most the phase's input power "+in.String())
 		}
-		if p > out.Peak || out.PeakPhase == "" {
+		if p > out.Peak || i == 0 {
 			out.Peak, out.PeakPhase = p, ph.Name
 		}
 		heat += p.TimesDuration(ph.Duration)

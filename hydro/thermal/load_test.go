@@ -72,7 +72,7 @@ func TestBudget(t *testing.T) {
 	if math.Abs(h.Guess.High.Kilowatts()-24.70588/3) > 5e-6 || h.Guess.Rule.Kind != components.CommonPractice {
 		t.Errorf("guess %v", h.Guess)
 	}
-	if f := h.Findings.Topic("thermal.guess"); len(f) != 1 || !contains(f[0].Text(nil), "understates") {
+	if f := h.Findings.Topic("thermal.guess"); len(f) != 1 || !contains(f[0].Text(units.Metric()), "understates") {
 		t.Errorf("relieving fixed pump: %v", h.Findings)
 	}
 	// Compensated: the pump delivers only what the ram takes, at 170 bar
@@ -90,7 +90,7 @@ func TestBudget(t *testing.T) {
 		must(Other("mechanical", 0.8*units.Kilowatt, components.CallerRule("maker's standby input less leakage"))),
 	}}
 	h, _ = Budget([]Phase{work, standby})
-	if f := h.Findings.Topic("thermal.guess"); len(f) != 1 || !contains(f[0].Text(nil), "overstates") ||
+	if f := h.Findings.Topic("thermal.guess"); len(f) != 1 || !contains(f[0].Text(units.Metric()), "overstates") ||
 		math.Abs(h.Mean.Kilowatts()-4.09167) > 5e-6 || math.Abs(h.Input.Kilowatts()-16.91667) > 5e-6 {
 		t.Errorf("compensated pump: mean %v of input %v: %v", h.Mean, h.Input, h.Findings)
 	}

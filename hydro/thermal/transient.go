@@ -93,7 +93,13 @@ func (l Lumped) validate(fn string) error {
 	if err := validate.NonNegative(fn, "SteelHeat", l.SteelHeat); err != nil {
 		return err
 	}
-	return validate.Positive(fn, "Dissipation", l.Dissipation)
+	if err := validate.Positive(fn, "Dissipation", l.Dissipation); err != nil {
+		return err
+	}
+	if err := validate.NonNegative(fn, "Load", l.Load); err != nil {
+		return err
+	}
+	return validate.Positive(fn, "Ambient", l.Ambient)
 }
 
 // At returns the temperature after d from start, by the closed form of the
