@@ -1,7 +1,6 @@
 package actuator
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -34,16 +33,6 @@ const (
 	Clevis                    // cap clevis, eye or spherical bearing: pinned
 )
 
-var bodyNames = [...]string{"flange", "feet", "trunnion", "clevis"}
-
-// String returns the mounting's name: "trunnion".
-func (m BodyMount) String() string {
-	if int(m) < len(bodyNames) {
-		return bodyNames[m]
-	}
-	return fmt.Sprintf("BodyMount(%d)", uint8(m))
-}
-
 func (m BodyMount) rigid() bool { return m == Flange || m == Feet }
 
 // RodEnd is how the rod end meets the load.
@@ -55,16 +44,6 @@ const (
 	RodFixed                // rod end rigidly fixed to a load guided along the axis
 	RodFree                 // rod end pushing an unguided load, free to move sideways
 )
-
-var rodEndNames = [...]string{"pinned and guided", "fixed and guided", "free"}
-
-// String returns the condition in words: "pinned and guided".
-func (e RodEnd) String() string {
-	if int(e) < len(rodEndNames) {
-		return rodEndNames[e]
-	}
-	return fmt.Sprintf("RodEnd(%d)", uint8(e))
-}
 
 // EffectiveLengthFactor returns Euler's effective-length factor K for a
 // body mount and rod end, the free buckling length being K·L:
@@ -113,17 +92,6 @@ const (
 	Euler   BucklingMethod = iota // elastic buckling of a slender rod
 	Johnson                       // J. B. Johnson's parabola for a stocky rod
 )
-
-// String returns "Euler" or "Johnson".
-func (m BucklingMethod) String() string {
-	switch m {
-	case Euler:
-		return "Euler"
-	case Johnson:
-		return "Johnson"
-	}
-	return fmt.Sprintf("BucklingMethod(%d)", uint8(m))
-}
 
 // CriticalLoad returns the buckling load of a solid round steel rod of
 // diameter d over free buckling length lk = K·L, with Young's modulus e and
@@ -274,7 +242,7 @@ type BucklingCheck struct {
 func (c Column) Check() (BucklingCheck, error) {
 	const fn = "actuator.Column.Check"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return BucklingCheck{}, err
+		return BucklingCheck{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return BucklingCheck{}, err
@@ -322,7 +290,7 @@ type RodChoice struct {
 func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, error) {
 	const fn = "actuator.Column.MinimumRod"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return RodChoice{}, err
+		return RodChoice{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return RodChoice{}, err

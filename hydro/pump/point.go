@@ -131,7 +131,10 @@ func (p Pump) CornerPressure() (units.Pressure, error) {
 		return 0, &units.RangeError{Func: fn, Param: "Control", Value: p.Control.String(), Valid: "PowerLimited"}
 	}
 	c := units.Pressure(float64(p.PowerLimit) * p.Mechanical / float64(p.geometric()))
-	return c, validate.Result(fn, "corner pressure", c)
+	if err := validate.Result(fn, "corner pressure", c); err != nil {
+		return 0, err
+	}
+	return c, nil
 }
 
 // LoadSensingPressure returns the outlet pressure a LoadSensing pump holds

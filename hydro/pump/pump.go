@@ -200,7 +200,10 @@ func DisplacementFor(q units.Flow, n units.RotationalSpeed, volumetric float64) 
 		return 0, err
 	}
 	d = units.Displacement(float64(d) / volumetric)
-	return d, validate.Result(fn, "displacement", d)
+	if err := validate.Result(fn, "displacement", d); err != nil {
+		return 0, err
+	}
+	return d, nil
 }
 
 // geometric returns the full-stroke geometric flow D·n.

@@ -329,3 +329,10 @@ func TestCheckInletAllocations(t *testing.T) {
 		t.Errorf("CheckInlet with no finding allocates %v times; want 0", n)
 	}
 }
+
+func TestDisplacementForOverflow(t *testing.T) {
+	d, err := DisplacementFor(1e300, 1e-300, 0.5)
+	if !errors.Is(err, units.ErrRange) || d != 0 {
+		t.Errorf("DisplacementFor overflowing = %v, %v; want 0 and ErrRange", d, err)
+	}
+}

@@ -1,0 +1,79 @@
+package drive
+
+import (
+	"testing"
+	"time"
+
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/checktest"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// The worked cycle (RMS 11.49 kW, peak 30 kW, average 8 kW) on a 4-pole
+// 50 Hz motor at 1455 rpm with a breakdown torque of 2.5 × rated: the
+// thermal need is 11.49 kW and the torque need 30/2.5 = 12 kW, so 15 kW.
+// Its rated torque is 15 kW/(2π × 1455/60 s) = 98.45 N·m; the peak torque
+// 30 kW at 1455 rpm = 196.9 N·m, within 2.5 × 98.45 = 246.1 N·m. On the
+// peak it would be 30 kW, on the average 11 kW.
+func TestSelectMotor(t *testing.T) {
+	d, err := Cycle(workedCycle())
+	if err != nil {
+		t.Fatal(err)
+	}
+	n := 1455 * units.RevolutionPerMinute
+	m, err := SelectMotor(MotorNeed{Duty: d, Speed: n, Breakdown: 2.5})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if m.Rating.Chosen != 15*units.Kilowatt || m.Rating.Required != 12*units.Kilowatt {
+		t.Errorf("rating %+v; want 15 kW for a 12 kW need", m.Rating)
+	}
+	near(t, "rated torque", m.RatedTorque, 15e3/(2*3.141592653589793*1455/60), 1e-14)
+	near(t, "peak torque", m.PeakTorque, 30e3/(2*3.141592653589793*1455/60), 1e-14)
+	if !m.Thermal.OK() || !m.Torque.OK() || m.Thermal.Rule.Kind != components.CommonPractice {
+		t.Errorf("checks: thermal %+v, torque %+v", m.Thermal, m.Torque)
+	}
+	f := m.Findings.Topic("drive.sizing-basis")
+	if len(f) != 1 {
+		t.Fatalf("findings %v; want the sizing-basis notice", m.Findings)
+	}
+	args := f[0].Args()
+	if args[3] != units.Power(30*units.Kilowatt) || args[4] != units.Power(11*units.Kilowatt) {
+		t.Errorf("peak and average sizing %v and %v; want 30 kW and 11 kW", args[3], args[4])
+	}
+	// With a weaker motor (breakdown 1.6) the torque decides: 30/1.6 =
+	// 18.75 kW → 22 kW.
+	m, _ = SelectMotor(MotorNeed{Duty: d, Speed: n, Breakdown: 1.6})
+	if m.Rating.Chosen != 22*units.Kilowatt || !m.Torque.OK() {
+		t.Errorf("breakdown 1.6: %+v; want 22 kW", m.Rating)
+	}
+	// In NEMA horsepower: 12 kW = 16.09 hp → 20 hp.
+	m, _ = SelectMotor(MotorNeed{Duty: d, Speed: 1746 * units.RevolutionPerMinute, Breakdown: 2.5, Ratings: components.NEMAMotorRatings()})
+	if m.Rating.Chosen != 20*units.Horsepower {
+		t.Errorf("NEMA: %v; want 20 hp", m.Rating.Chosen)
+	}
+}
+
+// A steady load sizes the same on every basis: no notice.
+func TestSelectMotorSteady(t *testing.T) {
+	d, _ := Cycle([]Phase{{Duration: time.Minute, Power: 6 * units.Kilowatt, Efficiency: 0.9}})
+	m, err := SelectMotor(MotorNeed{Duty: d, Speed: 1455 * units.RevolutionPerMinute, Breakdown: 2.5})
+	if err != nil || m.Rating.Chosen != 7.5*units.Kilowatt || len(m.Findings) != 0 {
+		t.Errorf("steady 6 kW: %+v, %v, %v; want 7.5 kW and no finding", m.Rating, m.Findings, err)
+	}
+	d, _ = Cycle([]Phase{{Duration: time.Minute, Power: 400 * units.Kilowatt, Efficiency: 0.9}})
+	m, err = SelectMotor(MotorNeed{Duty: d, Speed: 1455 * units.RevolutionPerMinute, Breakdown: 2.5})
+	if err != nil || m.Rating.OK() || m.Thermal.OK() || len(m.Findings.Topic("drive.beyond-ratings")) != 1 {
+		t.Errorf("400 kW: %+v, %v, %v; want a failed choice with a finding", m.Rating, m.Findings, err)
+	}
+}
+
+func TestSelectMotorBadInput(t *testing.T) {
+	d, _ := Cycle(workedCycle())
+	_, err := SelectMotor(MotorNeed{Speed: 25, Breakdown: 2})
+	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Duty")
+	_, err = SelectMotor(MotorNeed{Duty: d, Breakdown: 2})
+	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Speed")
+	_, err = SelectMotor(MotorNeed{Duty: d, Speed: 25, Breakdown: 1})
+	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Breakdown")
+}
