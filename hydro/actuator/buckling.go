@@ -103,9 +103,13 @@ const (
 //	λ < λ_c  Johnson:  P = A·σ_y·(1 − σ_y·λ²/(4π²E)), A = π·d²/4
 //
 // Johnson's parabola meets Euler's curve tangentially at λ_c, where both
-// give σ_y/2 (Johnson's parabolic formula; Shigley's Mechanical Engineering
-// Design, section on columns, from memory). All inputs must be finite and
-// > 0; errors match units.ErrRange.
+// give σ_y/2 (J. B. Johnson's parabolic column formula, as in Shigley's
+// Mechanical Engineering Design, section on columns, from memory; the form
+// and the tangency were confirmed in the Wikipedia article "Johnson's
+// parabolic formula"). The rod is taken straight and centrally loaded; side
+// load, eccentric mounting and a bent rod lower the real critical load,
+// which the safety factor must cover. All inputs must be finite and > 0;
+// errors match units.ErrRange.
 func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod, error) {
 	const fn = "actuator.CriticalLoad"
 	for _, c := range [...]struct {
