@@ -1,7 +1,6 @@
 package thermal
 
 import (
-	"strconv"
 	"time"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -65,9 +64,8 @@ func reservoirVolumes() components.Series[units.Volume] { return components.Rese
 
 // SizeReservoir returns the nominal volume V = Q·t for pump flow q and
 // dwell d, and the next volume of components.ReservoirVolumes (R10 litres,
-// common practice). V is rounded to 12 significant digits first, so that
-// 80 L/min for a minute is 80 L, not the 80.000000000000014 L of binary
-// arithmetic that would select 100 L. A volume above the series comes back
+// common practice); components.Tolerance lets 80 L/min for a minute select
+// 80 L despite binary rounding. A volume above the series comes back
 // unchosen (Volume.OK() false). q must be finite and > 0, d.Time > 0.
 func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 	const fn = "thermal.SizeReservoir"
@@ -77,7 +75,7 @@ func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 	if d.Time <= 0 {
 		return ReservoirSize{}, validate.Fail(fn, "d.Time", d.Time.Seconds(), "> 0 s")
 	}
-	v := decimal(q.TimesDuration(d.Time))
+	v := q.TimesDuration(d.Time)
 	if err := validate.Positive(fn, "volume", v); err != nil {
 		return ReservoirSize{}, err
 	}
@@ -86,12 +84,6 @@ func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 		return ReservoirSize{}, err
 	}
 	return ReservoirSize{Volume: ch, Dwell: d}, nil
-}
-
-// decimal rounds v to 12 significant digits.
-func decimal(v units.Volume) units.Volume {
-	r, _ := strconv.ParseFloat(strconv.FormatFloat(float64(v), 'g', 12, 64), 64)
-	return units.Volume(r)
 }
 
 // Tank is a rectangular reservoir: inside length, width and height, and
