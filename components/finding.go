@@ -114,12 +114,9 @@ func NewFinding(sev Severity, hz Hazard, topic string, rule Rule, format string,
 func (f Finding) Args() []any { return slices.Clone(f.args) }
 
 // Text writes the sentence with every quantity in the units of sys
-// (units.Metric(), units.USCustomary(), or a caller's own system); a nil sys
-// means metric.
-func (f Finding) Text(sys *units.System) string {
-	if sys == nil {
-		sys = metric()
-	}
+// (units.Metric(), units.USCustomary(), or a caller's own system); the zero
+// System is metric.
+func (f Finding) Text(sys units.System) string {
 	out := make([]any, len(f.args))
 	for i, a := range f.args {
 		out[i] = quote(sys, a)

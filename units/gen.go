@@ -450,8 +450,9 @@ func writeDoc() {
 	}
 	b.WriteString("//\n// # Spellings\n//\n")
 	b.WriteString("// Every accepted spelling, by quantity type; the first is the one formatting\n")
-	b.WriteString("// writes. Case is significant (MPa is not mPa). Inside expressions, these\n")
-	b.WriteString("// names combine with *, ·, /, ^ and parentheses.\n//\n")
+	b.WriteString("// writes. An exact spelling always wins; letter case is ignored only as a\n")
+	b.WriteString("// fallback (see Parsing). Inside expressions, these names combine with *,\n")
+	b.WriteString("// ·, /, ^ and parentheses.\n//\n")
 	for _, q := range quantities {
 		name := q.Name
 		if q.NoType {
@@ -567,10 +568,26 @@ in BTU/(lbm·°F). Parse reads into a dynamic Quantity that carries its SI
 dimension and converts to a typed value only when the dimensions match;
 Convert converts a number between two unit expressions.
 
+Letter case. A unit, or a name inside an expression, is first looked up
+exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
+seconds, "MPa" megapascals). A spelling that matches nothing exactly is looked
+up again ignoring letter case, and accepted when every registered spelling it
+then matches belongs to one unit: "PSI", "Bar", "BAR", "KW", "kw", "Hp", "LPM",
+"°c", "Celsius". Where it could be more than one unit it is an ErrAmbiguous
+error that lists them. The m of milli and the M of mega differ only in case,
+so "Mpa" could be MPa or mPa, "MM" mm or Mm, and "MBAR" mbar or Mbar: each is
+refused, never read as a guess.
+
+A typed parser also reads a few spellings that mean something only for its
+type, and refuses others with what to write instead (listed under Spellings):
+ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
+refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
+ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+
 Errors are *ParseError values that quote the input and the byte offset and
 unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
-ErrDimension, ErrRange or ErrReference. Parsing a registered unit allocates
-nothing.
+ErrDimension, ErrRange, ErrReference or ErrAmbiguous (with what the text
+could mean). Parsing a registered unit allocates nothing.
 
 # Formatting
 

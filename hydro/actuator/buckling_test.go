@@ -15,8 +15,10 @@ const (
 )
 
 // TestEffectiveLengthFactor: Euler's cases, K = 0.5 fixed–fixed, 0.7
-// fixed–pinned, 1 pinned–pinned, 2 fixed–free (any strength-of-materials
-// text; the four values as CHECKS of the project list them [S]).
+// fixed–pinned (0.699 exactly, rounded as design texts print it),
+// 1 pinned–pinned, 2 fixed–free (Timoshenko and Gere, Theory of Elastic
+// Stability, 2nd ed., chapter 2, from memory; the same four in any
+// strength-of-materials text).
 func TestEffectiveLengthFactor(t *testing.T) {
 	for _, w := range []struct {
 		body BodyMount
@@ -43,8 +45,9 @@ func TestEffectiveLengthFactor(t *testing.T) {
 	checktest.RangeError(t, err, "rod")
 }
 
-// TestEulerClosedForm: P = π²·E·I/(K·L)², I = π·d⁴/64 (Euler; CHECKS of the
-// project [S]). A 40 mm steel rod, 2 m between pins: I = 1.2566·10⁻⁷ m⁴,
+// TestEulerClosedForm: P = π²·E·I/(K·L)², I = π·d⁴/64 (Euler's column
+// formula; Timoshenko and Gere, Theory of Elastic Stability, 2nd ed., from
+// memory). A 40 mm steel rod, 2 m between pins: I = 1.2566·10⁻⁷ m⁴,
 // P = 65.11 kN; λ = 200, above λ_c = 108 for 355 MPa steel. The same rod
 // 3 m long under each K carries π²EI/(3K)² (λ ≥ 150: Euler throughout).
 func TestEulerClosedForm(t *testing.T) {

@@ -96,7 +96,7 @@ func TestCheckBypass(t *testing.T) {
 		t.Errorf("bypass finding quotes %v", args)
 	}
 	us := units.USCustomary()
-	if txt := f.Text(&us); !strings.Contains(txt, "psi") || !strings.Contains(txt, "gpm") {
+	if txt := f.Text(us); !strings.Contains(txt, "psi") || !strings.Contains(txt, "gpm") {
 		t.Errorf("US text %q", txt)
 	}
 }

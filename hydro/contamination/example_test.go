@@ -140,7 +140,7 @@ func ExampleCheckBypass() {
 		r, _ := contamination.CheckBypass(at, 80*units.LitrePerMinute, nu, 3.5*units.Bar)
 		fmt.Printf("%v: clean drop %v, %.0f %% of bypass, stays shut %v\n", nu, r.Setting.Value, 100*r.Setting.Ratio(), r.Setting.OK())
 		for _, f := range r.Findings.Hazard(components.FilterBypass).AtLeast(components.Caution) {
-			fmt.Println(" ", f.Text(&us))
+			fmt.Println(" ", f.Text(us))
 		}
 	}
 	// Output:

@@ -4,6 +4,7 @@ import (
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/units"
 )
 
 func TestPlacementAdvice(t *testing.T) {
@@ -19,7 +20,7 @@ func TestPlacementAdvice(t *testing.T) {
 			t.Errorf("%s: findings %v do not end with the clogging indicator", a.Name, a.Findings)
 		}
 		for _, f := range a.Findings {
-			if f.Topic == "" || f.Rule.Kind == components.Unstated || f.Text(nil) == "" {
+			if f.Topic == "" || f.Rule.Kind == components.Unstated || f.Text(units.Metric()) == "" {
 				t.Errorf("%s: finding %v lacks a topic, rule or sentence", a.Name, f)
 			}
 		}
@@ -53,7 +54,7 @@ func TestPlacementAdvice(t *testing.T) {
 	pf, _ := PlacementAdvice(PressureFilter)
 	r, _ := CheckBypass(ElementPoint{Drop: 1e4, Flow: 1e-3, Viscosity: 3e-5}, 1e-3, 3e-5, 3e5)
 	if a, b := pf.Findings.Topic(TopicRelievePressure), r.Findings.Topic(TopicRelievePressure); len(a) != 1 || len(b) != 1 ||
-		a[0].Text(nil) != b[0].Text(nil) || a[0].Rule != b[0].Rule {
+		a[0].Text(units.Metric()) != b[0].Text(units.Metric()) || a[0].Rule != b[0].Rule {
 		t.Errorf("relieve-pressure findings differ: %v / %v", a, b)
 	}
 	// Callers may change what they get without touching the next call.
