@@ -321,8 +321,8 @@ func TestValidateProblems(t *testing.T) {
 		}, []string{"cleanliness.sample.flow"}},
 		// Circuit.
 		{"center unknown", func(s *Spec) { s.Circuit.Center = "middle" }, []string{"circuit.center"}},
-		{"pump unknown", func(s *Spec) { s.Circuit.Pump = "screw" }, []string{"circuit.pump"}},
-		{"control on a gear pump", func(s *Spec) { s.Circuit.Control = "load-sensing" }, []string{"circuit.control"}},
+		{"pump unknown", func(s *Spec) { s.Circuit.Pump, s.Circuit.Control = "screw", "" }, []string{"circuit.pump"}},
+		{"control on a gear pump", func(s *Spec) { s.Circuit.Pump = "gear" }, []string{"circuit.control"}},
 		{"control unknown", func(s *Spec) { s.Circuit.Pump = "variable piston"; s.Circuit.Control = "manual" }, []string{"circuit.control"}},
 		{"conductor unknown", func(s *Spec) { s.Circuit.Conductor = "pipe" }, []string{"circuit.conductor"}},
 		{"negative bends", func(s *Spec) { s.Circuit.Return.Bends = -1 }, []string{"circuit.return.bends"}},
