@@ -74,8 +74,17 @@
 // No hexadecimal, underscores, NaN or Inf. A fraction is of whole numbers of at
 // most seven digits, with a denominator other than 0, and in a mixed number it
 // is less than one: "3/8 in", "1-1/2 in", "1 1/2 in", "1/2 gpm". (A unit that
-// starts with a digit still reads as a unit: "9 1/min" is 9 rpm.) Leading and
-// trailing spaces are ignored. The unit is any registered spelling of the type
+// starts with a digit still reads as a unit: "9 1/min" is 9 rpm.)
+//
+// A comma in a number is refused with ErrAmbiguous, and the error says why:
+// "3,000" is three thousand where a comma groups thousands (as in the US) and
+// three where it is the decimal mark (as in much of Europe). A Parser reads the
+// one convention its caller names: Parser{Decimal: ','} reads "2,5 bar" and
+// Parser{Group: ','} reads "3,000 psi", each with the grammar otherwise
+// unchanged. In JSON a quantity is a string with its unit ("210 bar"); a bare
+// number is refused with ErrSyntax and the text to write.
+//
+// Leading and trailing spaces are ignored. The unit is any registered spelling of the type
 // (listed below) or a unit expression of registered names with the right
 // dimension:
 //

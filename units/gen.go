@@ -558,8 +558,17 @@ optional spaces, then a unit:
 No hexadecimal, underscores, NaN or Inf. A fraction is of whole numbers of at
 most seven digits, with a denominator other than 0, and in a mixed number it
 is less than one: "3/8 in", "1-1/2 in", "1 1/2 in", "1/2 gpm". (A unit that
-starts with a digit still reads as a unit: "9 1/min" is 9 rpm.) Leading and
-trailing spaces are ignored. The unit is any registered spelling of the type
+starts with a digit still reads as a unit: "9 1/min" is 9 rpm.)
+
+A comma in a number is refused with ErrAmbiguous, and the error says why:
+"3,000" is three thousand where a comma groups thousands (as in the US) and
+three where it is the decimal mark (as in much of Europe). A Parser reads the
+one convention its caller names: Parser{Decimal: ','} reads "2,5 bar" and
+Parser{Group: ','} reads "3,000 psi", each with the grammar otherwise
+unchanged. In JSON a quantity is a string with its unit ("210 bar"); a bare
+number is refused with ErrSyntax and the text to write.
+
+Leading and trailing spaces are ignored. The unit is any registered spelling of the type
 (listed below) or a unit expression of registered names with the right
 dimension:
 
@@ -811,11 +820,29 @@ func (q *{{$q.Name}}) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 {{$q.Metric}}").
+func (q *{{$q.Name}}) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.{{$q.Name}}.UnmarshalJSON", data, &unitTable[metric{{$q.Name}}], &type{{$q.Name}})
+	if set {
+		*q = {{$q.Name}}(v)
+	}
+	return err
+}
+
 // Parse{{$q.Name}} reads a {{$q.Kind}}: a decimal number, optional spaces,
 // then a unit of {{$q.Kind}} such as {{examples $q}} (see the package doc
 // for the grammar and every spelling).
 func Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
 	v, err := parseTyped("units.Parse{{$q.Name}}", s, &type{{$q.Name}})
+	return {{$q.Name}}(v), err
+}
+
+// Parse{{$q.Name}} is units.Parse{{$q.Name}} with the number convention of p.
+func (p Parser) Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
+	v, err := p.parseTyped("units.Parser.Parse{{$q.Name}}", s, &type{{$q.Name}})
 	return {{$q.Name}}(v), err
 }
 

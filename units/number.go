@@ -12,6 +12,78 @@ import (
 	"strings"
 )
 
+// Parser reads quantities whose numbers follow a convention the caller
+// chooses, where the package's functions refuse a comma as ambiguous
+// ("3,000" is three thousand in the US and three in much of Europe):
+//
+//	eu := units.Parser{Decimal: ','}            // "2,5 bar" is 2.5 bar
+//	us := units.Parser{Group: ','}              // "3,000 psi" is 3000 psi
+//	de := units.Parser{Decimal: ',', Group: '.'} // "1.500,5 L/min"
+//
+// A number may then use the decimal mark Decimal and, in its whole part,
+// the mark Group between groups of three digits (1–3 digits before the
+// first). A mark the Parser does not name is still refused as ambiguous,
+// so a decimal-comma Parser refuses "2.5 bar". Everything else is the
+// package's grammar. The zero Parser reads as the package's functions do.
+// A Parser is a plain value with no state of its own: any number of
+// goroutines may use one at once.
+type Parser struct {
+	// Decimal is the decimal mark, '.' or ','; zero means '.'.
+	Decimal rune
+	// Group is the digit-group (thousands) mark, ',' or '.', other than
+	// Decimal; zero means none.
+	Group rune
+}
+
+// style returns the number style of p, or a *RangeError naming the field
+// for the method fn.
+func (p Parser) style(fn string) (numberStyle, error) {
+	st := numberStyle{}
+	switch p.Decimal {
+	case 0, '.':
+	case ',':
+		st.decimal = ','
+	default:
+		return st, &RangeError{Func: fn, Param: "p.Decimal", Value: strconv.QuoteRune(p.Decimal), Valid: "'.' or ','"}
+	}
+	switch p.Group {
+	case 0:
+	case ',', '.':
+		if byte(p.Group) == st.point() {
+			return st, &RangeError{Func: fn, Param: "p.Group", Value: strconv.QuoteRune(p.Group), Valid: "0, or ',' or '.' other than the decimal mark"}
+		}
+		st.group = byte(p.Group)
+	default:
+		return st, &RangeError{Func: fn, Param: "p.Group", Value: strconv.QuoteRune(p.Group), Valid: "0, ',' or '.'"}
+	}
+	if st.decimal == '.' {
+		st.decimal = 0
+	}
+	return st, nil
+}
+
+// Parse is units.Parse with the number convention of p.
+func (p Parser) Parse(s string) (Quantity, error) {
+	const fn = "units.Parser.Parse"
+	st, err := p.style(fn)
+	if err != nil {
+		return Quantity{}, err
+	}
+	return parseQuantity(fn, s, st)
+}
+
+// parseTyped is the typed parsers' parseTyped with the number convention of p.
+func (p Parser) parseTyped(fn, s string, t *typeInfo) (float64, error) {
+	st, err := p.style(fn)
+	switch {
+	case err != nil:
+		return 0, err
+	case st == (numberStyle{}):
+		return parseTyped(fn, s, t)
+	}
+	return parseTypedSlow(fn, s, t, st)
+}
+
 // numberStyle is a convention for the digits of a number: the decimal mark
 // and the mark, if any, that groups thousands. The zero value is the
 // package's own: a decimal point, no groups, and a comma refused as

@@ -50,12 +50,9 @@ func skipDigits(s string, i int) int {
 }
 
 // splitNumber reads the number at the start of s (after leading spaces) in
-// the package's number style and returns it with the offset where the unit
-// starts. Errors carry the offset.
-func splitNumber(s string) (float64, int, failure) { return splitNumberIn(s, numberStyle{}) }
-
-// splitNumberIn is splitNumber in the number style st.
-func splitNumberIn(s string, st numberStyle) (float64, int, failure) {
+// the number style st and returns it with the offset where the unit starts.
+// Errors carry the offset.
+func splitNumber(s string, st numberStyle) (float64, int, failure) {
 	start := 0
 	for start < len(s) && s[start] == ' ' {
 		start++
@@ -116,13 +113,14 @@ func parseTyped(fn, s string, t *typeInfo) (float64, error) {
 			}
 		}
 	}
-	return parseTypedSlow(fn, s, t)
+	return parseTypedSlow(fn, s, t, numberStyle{})
 }
 
-// parseTypedSlow is the general path of parseTyped, with full error reports.
-func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
+// parseTypedSlow is the general path of parseTyped, with full error reports,
+// reading the number in style st.
+func parseTypedSlow(fn, s string, t *typeInfo, st numberStyle) (float64, error) {
 	in := trimRight(s)
-	num, at, f := splitNumber(in)
+	num, at, f := splitNumber(in, st)
 	if f.err != nil {
 		return 0, f.at(fn, s, 0)
 	}
@@ -131,7 +129,7 @@ func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 			Detail: "missing unit; want a unit of " + t.kind + " such as " + t.examples}
 	}
 	if t == &typeLength {
-		if v, ok, f := compoundLength(num, in, at); ok || f.err != nil {
+		if v, ok, f := compoundLength(num, in, at, st); ok || f.err != nil {
 			if f.err != nil {
 				return 0, f.at(fn, s, 0)
 			}
@@ -173,7 +171,7 @@ func resolveTyped(u string, t *typeInfo) (resolved, failure) {
 // unit starts at in[at:]. It reports false, with no failure, when the unit
 // is not a foot spelling followed by a number. The value is
 // (12·feet + inches)·0.0254 m, so "2 ft 6 in" is exactly "30 in".
-func compoundLength(num float64, in string, at int) (float64, bool, failure) {
+func compoundLength(num float64, in string, at int, st numberStyle) (float64, bool, failure) {
 	u := in[at:]
 	d := 0
 	for d < len(u) && !isDigit(u[d]) && u[d] != '.' {
@@ -185,7 +183,7 @@ func compoundLength(num float64, in string, at int) (float64, bool, failure) {
 	if k, _, ok := lookupName(trimRight(u[:d])); !ok || k < 0 || unitTable[k].factor != footM || unitTable[k].dim != typeLength.dim {
 		return 0, false, failure{}
 	}
-	inches, n, f := readNumber(u[d:], numberStyle{})
+	inches, n, f := readNumber(u[d:], st)
 	if f.err != nil {
 		f.pos += at + d
 		return 0, false, f
