@@ -268,7 +268,7 @@ func (c Column) check() BucklingCheck {
 	r.Thrust = c.Relief.TimesArea(c.Cylinder.Area(Extend))
 	r.Safety = components.Reaches(float64(r.Critical/r.Thrust), n, nr)
 	if !r.Safety.OK() {
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling", nr,
 			"the %v rod buckles at %v (%v), only %v times the relief-valve thrust of %v; choose a thicker rod, a shorter free length or a stiffer mounting",
 			c.Cylinder.Rod, r.Critical, r.Method.String(), r.Safety.Value, r.Thrust)}
@@ -312,7 +312,7 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
 		r.Rod.Chosen = 0
 		_, _, _, _, n, nr := c.setup()
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling-no-rod", nr,
 			"no standard rod below the %v bore reaches a buckling safety factor of %v (at least %v is needed); shorten the free length, stiffen the mounting or choose a larger bore",
 			c.Cylinder.Bore, n, least)}

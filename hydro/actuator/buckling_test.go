@@ -169,7 +169,7 @@ func TestColumnCheck(t *testing.T) {
 		!near(r.Safety.Value, float64(wantP/r.Thrust), 1e-12) {
 		t.Errorf("safety = %+v; want a failed check against 3.5 (common practice)", r.Safety)
 	}
-	if len(r.Findings.AtLeast(components.Warning).Topic("actuator.buckling")) != 1 {
+	if len(r.Findings.AtLeast(components.Warning).Topic("actuator.buckling").Hazard(components.Structural)) != 1 {
 		t.Errorf("findings %v; want a buckling warning", r.Findings)
 	}
 	// Passing: a short stocky rod.
@@ -229,7 +229,7 @@ func TestMinimumRod(t *testing.T) {
 	c := balerColumn()
 	c.Retracted = 3 * units.Metre
 	r, err := c.MinimumRod(components.Series[units.Length]{})
-	if err != nil || r.Rod.OK() || r.Rod.Chosen != 0 || len(r.Findings.Topic("actuator.buckling-no-rod")) != 1 {
+	if err != nil || r.Rod.OK() || r.Rod.Chosen != 0 || len(r.Findings.Topic("actuator.buckling-no-rod").Hazard(components.Structural)) != 1 {
 		t.Errorf("no rod passes: %+v, %v", r, err)
 	}
 }
