@@ -26,8 +26,8 @@ func ExampleFinding_Text() {
 		components.StandardRule("ISO 4413:2010"),
 		"the accumulator holds %v after shutdown; vent it or isolate it automatically", 180*units.Bar)
 	metric, us := units.Metric(), units.USCustomary()
-	fmt.Println(f.Text(&metric))
-	fmt.Println(f.Text(&us))
+	fmt.Println(f.Text(metric))
+	fmt.Println(f.Text(us))
 	fmt.Println(f.Severity, f.Hazard, f.Rule)
 	// Output:
 	// the accumulator holds 180 bar after shutdown; vent it or isolate it automatically

@@ -62,11 +62,13 @@ const (
 	Runaway                       // uncontrolled speed of an actuator or load
 	Contamination                 // particles or water beyond what a component tolerates
 	ColdStart                     // sluggish or damaging flow in cold oil
+	Structural                    // a part that can buckle, break or tear loose: a rod, a mount, a tie
 )
 
 var hazardNames = [...]string{
 	"none", "stored energy", "suspended load", "overrunning load", "burst", "hot surface",
 	"injection", "cavitation", "filter bypass", "overpressure", "runaway", "contamination", "cold start",
+	"structural failure",
 }
 
 // String returns the hazard's name in words: "stored energy".
@@ -114,12 +116,9 @@ func NewFinding(sev Severity, hz Hazard, topic string, rule Rule, format string,
 func (f Finding) Args() []any { return slices.Clone(f.args) }
 
 // Text writes the sentence with every quantity in the units of sys
-// (units.Metric(), units.USCustomary(), or a caller's own system); a nil sys
-// means metric.
-func (f Finding) Text(sys *units.System) string {
-	if sys == nil {
-		sys = metric()
-	}
+// (units.Metric(), units.USCustomary(), or a caller's own system); the zero
+// System is metric.
+func (f Finding) Text(sys units.System) string {
 	out := make([]any, len(f.args))
 	for i, a := range f.args {
 		out[i] = quote(sys, a)

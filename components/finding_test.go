@@ -14,16 +14,16 @@ func TestFindingText(t *testing.T) {
 		"the inlet sees %v against a minimum of %v", units.AbsolutePressure(72000), units.AbsolutePressure(80000))
 	// 72 000 Pa = 0.72 bar = 10.44 psi (psi = 6894.757 Pa, NIST SP 811).
 	metric, us := units.Metric(), units.USCustomary()
-	if got, want := f.Text(&metric), "the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
+	if got, want := f.Text(metric), "the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
 		t.Errorf("metric text = %q; want %q", got, want)
 	}
-	if got, want := f.Text(&us), "the inlet sees 10.44 psia against a minimum of 11.6 psia"; got != want {
+	if got, want := f.Text(us), "the inlet sees 10.44 psia against a minimum of 11.6 psia"; got != want {
 		t.Errorf("US text = %q; want %q", got, want)
 	}
 	if got, want := f.String(), "warning (cavitation): the inlet sees 0.72 bara against a minimum of 0.8 bara"; got != want {
 		t.Errorf("String = %q; want %q", got, want)
 	}
-	if got := f.Text(nil); got != f.Text(&metric) {
+	if got := f.Text(units.Metric()); got != f.Text(metric) {
 		t.Errorf("nil system = %q; want the metric text", got)
 	}
 }
@@ -35,7 +35,7 @@ func TestFindingArgsCopied(t *testing.T) {
 	a := f.Args()
 	a[0] = units.Pressure(3e5)
 	metric := units.Metric()
-	if got := f.Text(&metric); got != "1 bar" {
+	if got := f.Text(metric); got != "1 bar" {
 		t.Errorf("Text = %q after changing the caller's slices; want 1 bar", got)
 	}
 }
@@ -97,8 +97,8 @@ func TestFindingJSON(t *testing.T) {
 	}
 	pct := NewFinding(Notice, NoHazard, "x", Rule{}, "100 %% sure")
 	b, _ = json.Marshal(pct)
-	if err := json.Unmarshal(b, &back); err != nil || back.Text(nil) != "100 % sure" {
-		t.Errorf("a literal percent sign did not survive: %q, %v", back.Text(nil), err)
+	if err := json.Unmarshal(b, &back); err != nil || back.Text(units.Metric()) != "100 % sure" {
+		t.Errorf("a literal percent sign did not survive: %q, %v", back.Text(units.Metric()), err)
 	}
 }
 

@@ -7,11 +7,11 @@ import (
 )
 
 // metric is the metric trade system findings are written in by default.
-func metric() *units.System { s := units.Metric(); return &s }
+func metric() units.System { return units.Metric() }
 
 // quote formats a finding's value: a typed quantity in the units of sys,
 // anything else with fmt's %v.
-func quote(sys *units.System, a any) string {
+func quote(sys units.System, a any) string {
 	switch v := a.(type) {
 	case units.Length:
 		return sys.FormatLength(v)

@@ -37,7 +37,7 @@ func ExampleSelectGrades() {
 			c.Grade, c.Start.Value, c.Start.Limit, c.Running.Value, c.Running.Limit)
 		for _, f := range c.Findings {
 			fmt.Println(f)
-			fmt.Println(f.Text(&us))
+			fmt.Println(f.Text(us))
 		}
 	}
 	// Output:

@@ -129,7 +129,7 @@ func TestSelectGradesThinMargin(t *testing.T) {
 		t.Errorf("finding quotes %v, want the start, the margin, the grade and the limit as typed values", args)
 	}
 	usSystem := units.USCustomary()
-	metric, us := fs[0].Text(nil), fs[0].Text(&usSystem)
+	metric, us := fs[0].Text(units.Metric()), fs[0].Text(usSystem)
 	if !strings.Contains(metric, "0.3 K") || !strings.Contains(us, "0.54 °F") || !strings.Contains(us, "cSt") {
 		t.Errorf("metric %q, US %q: the margin and limit do not render in each system", metric, us)
 	}

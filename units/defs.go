@@ -34,4 +34,19 @@ const (
 	// conventional density 13 595.1 kg/m³ under g₀ (NIST SP 811, B.8 footnote,
 	// "conventional"); 3386.388640341 Pa.
 	inHgPa = 13595.1 * gravity * inchM
+	// Conventional millimetre of mercury, the same column 1 mm high:
+	// 133.322 387 415 Pa exactly (NIST SP 811, B.8, "conventional").
+	mmHgPa = 13595.1 * gravity * 1e-3
+	// Torr = 1/760 standard atmosphere = 101 325/760 Pa ≈ 133.322 368 Pa
+	// (NIST SP 811, B.8); 1.4·10⁻⁷ smaller than the millimetre of mercury.
+	torrPa = atmPa / 760.0
+	// Tonne-force: the weight of one metric ton (1000 kg, NIST SP 811, B.8)
+	// under g₀, 1000 kgf = 9806.65 N exactly.
+	tonneForceN = 1000 * kgfN
+	// Short ton-force: 2000 lbf = 8896.443 230 521 N exactly (NIST SP 811,
+	// B.8, "ton-force (2000 lbf)").
+	shortTonForceN = 2000 * lbfN
+	// Long ton-force: the weight of the long ton (2240 lb, NIST SP 811, B.8)
+	// under g₀, 2240 lbf = 9964.016 418 183 52 N exactly.
+	longTonForceN = 2240 * lbfN
 )

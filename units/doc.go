@@ -45,9 +45,16 @@
 // ambient pressure (Pressure.Absolute, AbsolutePressure.Gauge); StandardAtmosphere
 // is provided but never implied. As the trade writes them, plain psi and bar are
 // gauge, psig and barg say so, and psia, bara and atm are absolute; the SI
-// spellings Pa, kPa, MPa, mbar and inHg are read as either. Parsing an absolute
-// spelling into a Pressure, or a gauge spelling into an AbsolutePressure, fails
-// with ErrReference.
+// spellings Pa, kPa, MPa and mbar are read as either. A differential spelling
+// (psid, bard, kPa(d)) reads as a Pressure, the difference between two
+// pressures. A mercury column is a barometric reading, so inHg, mmHg and Torr
+// are absolute; a vacuum gauge reading says so ("28 inHg vac", "60 kPa vac",
+// "0.8 bar vac") and reads as a negative gauge Pressure. A vacuum reading must
+// not itself be negative, and stands alone (not inside a longer expression).
+// Parsing an absolute spelling into a Pressure, or a gauge or differential
+// spelling into an AbsolutePressure, fails with ErrReference; so does a unit
+// expression that mixes gauge and absolute spellings. Nothing guesses a
+// reference or a sign.
 //
 // Temperature is absolute (kelvins); °C and °F are offset scales, reached through
 // TemperatureFromCelsius, TemperatureFromFahrenheit, Temperature.Celsius and
@@ -77,10 +84,26 @@
 // dimension and converts to a typed value only when the dimensions match;
 // Convert converts a number between two unit expressions.
 //
+// Letter case. A unit, or a name inside an expression, is first looked up
+// exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
+// seconds, "MPa" megapascals). A spelling that matches nothing exactly is looked
+// up again ignoring letter case, and accepted when every registered spelling it
+// then matches belongs to one unit: "PSI", "Bar", "BAR", "KW", "kw", "Hp", "LPM",
+// "°c", "Celsius". Where it could be more than one unit it is an ErrAmbiguous
+// error that lists them. The m of milli and the M of mega differ only in case,
+// so "Mpa" could be MPa or mPa, "MM" mm or Mm, and "MBAR" mbar or Mbar: each is
+// refused, never read as a guess.
+//
+// A typed parser also reads a few spellings that mean something only for its
+// type, and refuses others with what to write instead (listed under Spellings):
+// ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
+// refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
+// ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+//
 // Errors are *ParseError values that quote the input and the byte offset and
 // unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
-// ErrDimension, ErrRange or ErrReference. Parsing a registered unit allocates
-// nothing.
+// ErrDimension, ErrRange, ErrReference or ErrAmbiguous (with what the text
+// could mean). Parsing a registered unit allocates nothing.
 //
 // # Formatting
 //
@@ -99,7 +122,7 @@
 // # Errors
 //
 // Every error matches one of the sentinels ErrSyntax, ErrUnknownUnit,
-// ErrDimension, ErrRange and ErrReference with errors.Is. A *ParseError
+// ErrDimension, ErrRange, ErrReference and ErrAmbiguous with errors.Is. A *ParseError
 // quotes the text; a *ConversionError names both sides of a failed conversion;
 // a *RangeError names a parameter, the value and the valid range, and is the one
 // type every hydrosize package returns for a bad argument (errors.As finds it).
@@ -111,24 +134,28 @@
 // # Spellings
 //
 // Every accepted spelling, by quantity type; the first is the one formatting
-// writes. Case is significant (MPa is not mPa). Inside expressions, these
-// names combine with *, ·, /, ^ and parentheses.
+// writes. An exact spelling always wins; letter case is ignored only as a
+// fallback (see Parsing). Inside expressions, these names combine with *,
+// ·, /, ^ and parentheses.
 //
-//   - Length: m metre meter; mm; cm; µm μm um micron; in inch inches; ft foot feet
+//   - Length: m metre meter; mm; cm; µm μm um micron microns micrometre micrometer; in inch inches " ″; ft foot feet ' ′
 //   - Area: m² m2 m^2 sq m; mm² mm2 mm^2 sq mm; cm² cm2 cm^2 sq cm; in² in2 in^2 sq in; ft² ft2 ft^2 sq ft
-//   - Volume: m³ m3 m^3 cu m; L l litre liter dm³ dm3; mL ml; cm³ cm3 cm^3 cc ccm; in³ in3 in^3 cu in cuin cid; gal US gal USgal usgal gal(US); UK gal UKgal imp gal gal(UK)
-//   - Mass: kg; g; t tonne; lbm lb
-//   - Force: N; kN; lbf; kgf kp
-//   - Pressure: Pa; kPa; MPa N/mm² N/mm2; GPa; bar barg bar(g) bar g; mbar; psi psig psi(g) lbf/in² lbf/in2; ksi; kgf/cm² kgf/cm2 at; inHg in Hg "Hg
-//   - AbsolutePressure: Pa(a) Pa abs; kPa(a) kPaa kPa abs; MPa(a) MPa abs; bara bar(a) bar a bar abs; psia psi(a) psi abs; atm
-//   - Flow: m³/s m3/s m^3/s; L/min l/min lpm LPM; L/s l/s; m³/h m3/h m^3/h; gpm GPM US gpm gal/min; in³/s in3/s in^3/s
+//   - Volume: m³ m3 m^3 cu m; L l litre liter litres liters dm³ dm3; mL ml; cm³ cm3 cm^3 cc ccm; in³ in3 in^3 cu in cuin cid; gal US gal USgal usgal gal(US) gallon gallons US gallon US gallons; UK gal UKgal imp gal gal(UK)
+//   - Mass: kg; g; t tonne; lbm lb lbs
+//     (ParseMass refuses ton, tons, saying what to write.)
+//   - Force: N; kN; lbf; kgf kp; tf tonne-force tonnes-force t-force tonne force metric ton-force; US tonf ton(US) tonf(US) short ton-force short tons-force sh tonf; UK tonf ton(UK) tonf(UK) long ton-force long tons-force
+//     (ParseForce reads lb as lbf, lbs as lbf; refuses kg, t, ton, tons, tonne, tonnes, tonf, saying what to write.)
+//   - Pressure: Pa; kPa; MPa N/mm² N/mm2; GPa; bar barg bar(g) bar g; mbar; psi psig psi(g) lbf/in² lbf/in2; ksi; kgf/cm² kgf/cm2 kgf/cm^2 at kg/cm² kg/cm2 kg/cm^2; inHg in Hg "Hg; psid psi(d) psi d; bard bar(d) bar d; kPa(d) kPa d kPad; inHg vac inHgV inHg V inHg vacuum in Hg vac in Hg vacuum "Hg vac "Hg vacuum; mmHg vac mmHgV mmHg vacuum mm Hg vac mm Hg vacuum; kPa vac kPa vacuum; bar vac bar vacuum; psi vac psi vacuum
+//     (ParsePressure refuses inHg, in Hg, "Hg, mmHg, mm Hg, Torr, saying what to write.)
+//   - AbsolutePressure: Pa(a) Pa abs; kPa(a) kPaa kPa abs; MPa(a) MPa abs; bara bar(a) bar a bar abs; psia psi(a) psi abs; atm; mmHg mm Hg; Torr torr
+//   - Flow: m³/s m3/s m^3/s; L/min l/min lpm LPM litres/min liters/min litre/min liter/min litres per minute liters per minute litre per minute liter per minute; L/s l/s; m³/h m3/h m^3/h; gpm GPM US gpm gal/min gallons per minute gallon per minute; gph gal/h gal/hr gallons per hour gallon per hour; in³/s in3/s in^3/s
 //   - Velocity: m/s; mm/s; ft/s fps; in/s ips; ft/min fpm
 //   - Displacement: m³/rev m3/rev m^3/rev; cm³/rev cm3/rev cm^3/rev cc/rev ccm/rev mL/rev ml/rev; in³/rev in3/rev in^3/rev cir cu in/rev
-//   - RotationalSpeed: rev/s rps r/s; rpm rev/min r/min RPM min⁻¹ min^-1 1/min; rad/s
-//   - Torque: N·m Nm N*m N.m N m N-m N⋅m; kN·m kNm kN*m kN.m kN m; lbf·ft lbf*ft lbf-ft lbf ft ft·lbf ft-lbf ft-lb lb-ft lbft; lbf·in lbf*in lbf-in lbf in in·lbf in-lbf in-lb lb-in lbin
+//   - RotationalSpeed: rev/s rps r/s; rpm rev/min r/min RPM min⁻¹ min^-1 min-1 1/min U/min; rad/s
+//   - Torque: N·m Nm N*m N.m N m N-m N⋅m; kN·m kNm kN*m kN.m kN m; lbf·ft lbf*ft lbf-ft lbf ft ft·lbf ft-lbf ft-lb lb-ft lbft ft·lb ft.lb ft*lb ft lb lb·ft lb.ft lb*ft lb ft; lbf·in lbf*in lbf-in lbf in in·lbf in-lbf in-lb lb-in lbin in·lb in.lb in*lb in lb lb·in lb.in lb*in lb in
 //   - Power: W; kW; hp HP; PS CV hp(M); BTU/h Btu/h BTU/hr Btu/hr BTUH
 //   - Energy: J; kJ; MJ; kWh kW·h kW*h kW h; BTU Btu btu
-//   - Temperature: K kelvin; °R degR R; °C degC ℃ C deg C celsius; °F degF ℉ F deg F fahrenheit
+//   - Temperature: K kelvin; °R degR R; °C degC ℃ C deg C celsius ºC ° C º C; °F degF ℉ F deg F fahrenheit ºF ° F º F
 //   - TemperatureDifference: ΔK delta K deltaK; Δ°C delta degC deltaC ΔC delta C; Δ°F delta degF deltaF ΔF delta F
 //   - KinematicViscosity: m²/s m2/s m^2/s; mm²/s mm2/s mm^2/s; cSt cst CST; St
 //   - DynamicViscosity: Pa·s Pa*s Pa.s Pa s Pas; mPa·s mPa*s mPa.s mPa s mPas; cP cp cps; P

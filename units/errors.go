@@ -26,6 +26,11 @@ var (
 	// needed (or the reverse), or a temperature where a temperature
 	// difference is needed (or the reverse).
 	ErrReference = errors.New("gauge/absolute or point/difference mismatch")
+	// ErrAmbiguous: the text could mean more than one thing (a unit that
+	// matches registered spellings only by letter case and more than one
+	// of them, a comma in a number, a plain ton as a force); the message
+	// lists the readings and how to write the one meant. Nothing is guessed.
+	ErrAmbiguous = errors.New("ambiguous")
 )
 
 // ParseError records a failed parse, in the pattern of strconv.NumError.
@@ -35,7 +40,7 @@ type ParseError struct {
 	Func   string // the function that failed, qualified: "units.ParsePressure", "units.Pressure.UnmarshalText", "contamination.ParseCode"
 	Input  string // the text given
 	Pos    int    // byte offset into Input where the problem starts
-	Err    error  // sentinel: ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange or ErrReference
+	Err    error  // sentinel: ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange, ErrReference or ErrAmbiguous
 	Detail string // what was expected, nearest known spellings, and so on
 }
 

@@ -27,12 +27,16 @@ const maxExp = 24
 
 // resolveUnit reduces a unit expression. A whole registered spelling keeps
 // its offset and reference; anything else is parsed as an expression of
-// registered units, in which temperatures count as intervals. On failure it
-// returns the byte offset within u and the sentinel, with detail text.
+// registered units, in which temperatures count as intervals and a pressure
+// keeps the gauge, absolute or differential reference of the spellings in
+// it. On failure it returns the byte offset within u and the sentinel, with
+// detail text.
 func resolveUnit(u string) (resolved, failure) {
-	if i, ok := spellings[u]; ok {
-		d := &unitTable[i]
-		return resolved{d.factor, d.offset, d.dim, d.ref}, failure{}
+	if i, e, ok := lookupName(u); ok {
+		if i < 0 {
+			return resolved{}, failure{err: ErrAmbiguous, detail: ambiguousDetail(u, e)}
+		}
+		return resolvedOf(&unitTable[i]), failure{}
 	}
 	p := exprParser{s: u}
 	f, dm, err := p.expr(0)
@@ -45,7 +49,31 @@ func resolveUnit(u string) (resolved, failure) {
 	if f == 0 || math.IsInf(f, 0) || math.IsNaN(f) {
 		return resolved{}, failure{err: ErrRange, detail: "unit factor is not a finite non-zero number"}
 	}
-	return resolved{factor: f, dim: dm, ref: refNone}, failure{}
+	ref, fl := exprReference(p.refs, dm)
+	if fl.err != nil {
+		return resolved{}, fl
+	}
+	return resolved{factor: f, dim: dm, ref: ref}, failure{}
+}
+
+func resolvedOf(d *unitDef) resolved { return resolved{d.factor, d.offset, d.dim, d.ref} }
+
+// exprReference returns the reference of an expression of dimension dm
+// whose names carried the pressure references refs: an expression of
+// pressure dimension keeps them ("(psia)" is absolute, as "psia" is), and
+// one that mixes absolute with gauge or differential spellings is refused.
+func exprReference(refs reference, dm Dimension) (reference, failure) {
+	switch {
+	case refs&refAbsolute != 0 && refs&(refGauge|refDiff) != 0:
+		return 0, failure{err: ErrReference, detail: "the expression mixes absolute and gauge (or differential) pressure spellings"}
+	case dm != typePressure.dim || refs == 0:
+		return refNone, failure{}
+	case refs&refAbsolute != 0:
+		return refAbsolute, failure{}
+	case refs&refGauge != 0:
+		return refGauge, failure{}
+	}
+	return refDiff, failure{}
 }
 
 // exprParser is a recursive-descent parser for unit expressions, one method
@@ -56,7 +84,8 @@ type exprParser struct {
 	i      int
 	errPos int
 	detail string
-	word   string // an unknown name, when the parse failed on one
+	word   string    // an unknown name, when the parse failed on one
+	refs   reference // the gauge, absolute and differential references of the names read
 }
 
 func (p *exprParser) fail(err error, detail string) error {
@@ -189,7 +218,7 @@ func (p *exprParser) exponent() (int, bool, error) {
 		}
 		return n, true, nil
 	}
-	if c := p.s[p.i]; c >= '0' && c <= '9' {
+	if c := p.s[p.i]; c >= '0' && c <= '9' && p.i > 0 && isLetter(p.s[p.i-1]) {
 		n, _ := p.digits()
 		if n > maxExp {
 			return 0, false, p.fail(ErrRange, "exponent too large")
@@ -266,9 +295,13 @@ func (p *exprParser) primary(depth int) (float64, Dimension, error) {
 	return p.name()
 }
 
+// maxWords is the most words a registered spelling has ("in Hg vacuum").
+const maxWords = 3
+
 // name reads a registered unit name: a run of letters, °, µ, Δ and ℃-like
-// signs. A following space and name are joined when the pair is registered
-// (US gal, cu in, delta degC).
+// signs. Following words, each after one space, are joined while the run is
+// a registered spelling, the longest run winning (US gal, cu in, delta degC,
+// liters per minute).
 func (p *exprParser) name() (float64, Dimension, error) {
 	start := p.i
 	p.i += nameLen(p.s[p.i:])
@@ -276,22 +309,37 @@ func (p *exprParser) name() (float64, Dimension, error) {
 		return 0, Dimension{}, p.fail(ErrSyntax, "unexpected "+quoteRune(p.s, p.i))
 	}
 	word := p.s[start:p.i]
-	if j := p.i; j < len(p.s) && p.s[j] == ' ' {
-		if n := nameLen(p.s[j+1:]); n > 0 {
-			if _, ok := spellings[p.s[start:j+1+n]]; ok {
-				p.i = j + 1 + n
-				word = p.s[start:p.i]
-			}
+	for j, words := p.i, 1; words < maxWords && j < len(p.s) && p.s[j] == ' '; words++ {
+		n := nameLen(p.s[j+1:])
+		if n == 0 {
+			break
+		}
+		j += 1 + n
+		if _, _, ok := lookupName(p.s[start:j]); ok {
+			p.i = j
+			word = p.s[start:j]
 		}
 	}
-	k, ok := spellings[word]
-	if !ok {
+	k, e, ok := lookupName(word)
+	switch {
+	case !ok:
 		p.i = start
 		p.word = word
 		return 0, Dimension{}, p.fail(ErrUnknownUnit, unknownDetail(word, nil))
+	case k < 0:
+		p.i = start
+		return 0, Dimension{}, p.fail(ErrAmbiguous, ambiguousDetail(word, e))
 	}
-	return unitTable[k].factor, unitTable[k].dim, nil
+	u := &unitTable[k]
+	if u.isVacuum() {
+		p.i = start
+		return 0, Dimension{}, p.fail(ErrSyntax, `a vacuum reading ("`+word+`") stands alone, not inside a unit expression`)
+	}
+	p.refs |= u.ref & (refGauge | refAbsolute | refDiff)
+	return u.factor, u.dim, nil
 }
+
+func isLetter(c byte) bool { return c|0x20 >= 'a' && c|0x20 <= 'z' }
 
 // nameLen returns the length of the unit name at the start of s.
 func nameLen(s string) int {
@@ -315,7 +363,7 @@ func isNameRune(r rune) bool {
 	switch {
 	case r >= 'a' && r <= 'z', r >= 'A' && r <= 'Z':
 		return true
-	case r == '°', r == 'µ', r == 'μ', r == 'Δ', r == '℃', r == '℉', r == '₀', r == '"', r == 'Ω':
+	case r == '°', r == 'º', r == 'µ', r == 'μ', r == 'Δ', r == '℃', r == '℉', r == '₀', r == '"', r == 'Ω':
 		return true
 	}
 	return false

@@ -35,6 +35,29 @@ type unit struct {
 	NoReg    bool     // Symbol is not registered (it belongs to another type)
 }
 
+// context is a spelling with a meaning for one type's parser only: a unit
+// of the type it reads as, or a refusal that says what to write instead.
+// The typed parser of the type tries it (letter case ignored) before the
+// registry, so it never changes what a registered spelling means elsewhere.
+type context struct {
+	Spelling string
+	Unit     string // symbol of the unit of this type it reads as; "" to refuse
+	Err      string // with Unit "": the sentinel, such as "ErrAmbiguous"
+	Detail   string // with Unit "": what the error says
+	UnitIdx  int    // index in unitTable of Unit (set by main)
+}
+
+// What the refusals of the context spellings say.
+const (
+	tonForce = `a ton is ambiguous as a force: write "tf" for a tonne-force (1000 kgf, 9.807 kN) ` +
+		`or "US tonf" for a short ton-force (2000 lbf, 8.896 kN); "UK tonf" is the long ton-force (2240 lbf)`
+	tonMass = `a ton is ambiguous: write "t" for a metric tonne (1000 kg), or the mass in lbm ` +
+		`for a US short ton (2000 lb) or a UK long ton (2240 lb)`
+	mercuryGauge = `a plain inch or millimetre of mercury is a barometric (absolute) reading: ` +
+		`for a vacuum gauge reading write "inHg vac" or "mmHg vac" (a gauge pressure below ambient), ` +
+		`or parse it as an AbsolutePressure`
+)
+
 type quantity struct {
 	Name    string
 	Doc     string
@@ -48,7 +71,8 @@ type quantity struct {
 	Min     string // inclusive lower bound in SI, "" for none
 	MinText string
 	Units   []unit
-	NoType  bool // registry-only units (time, angle)
+	Context []context // spellings only this type's parser reads
+	NoType  bool      // registry-only units (time, angle)
 
 	MetricIdx int // index in unitTable of the metric unit (set by main)
 	USIdx     int // index in unitTable of the US customary unit (set by main)
@@ -61,9 +85,9 @@ var quantities = []quantity{
 			{Const: "Metre", Value: "1", Doc: "is the SI unit of length.", Accessor: "Metres", Symbol: "m", Aliases: []string{"metre", "meter"}},
 			{Const: "Millimetre", Value: "1e-3", Doc: "is 10⁻³ m.", Accessor: "Millimetres", Symbol: "mm"},
 			{Const: "Centimetre", Value: "1e-2", Doc: "is 10⁻² m.", Accessor: "Centimetres", Symbol: "cm"},
-			{Const: "Micrometre", Value: "1e-6", Doc: "is 10⁻⁶ m, the micron of filtration ratings.", Accessor: "Micrometres", Symbol: "µm", Aliases: []string{"μm", "um", "micron"}},
-			{Const: "Inch", Value: "inchM", Doc: "is 0.0254 m exactly (NIST SP 811).", Accessor: "Inches", Symbol: "in", Aliases: []string{"inch", "inches"}},
-			{Const: "Foot", Value: "footM", Doc: "is 0.3048 m exactly (NIST SP 811).", Accessor: "Feet", Symbol: "ft", Aliases: []string{"foot", "feet"}},
+			{Const: "Micrometre", Value: "1e-6", Doc: "is 10⁻⁶ m, the micron of filtration ratings.", Accessor: "Micrometres", Symbol: "µm", Aliases: []string{"μm", "um", "micron", "microns", "micrometre", "micrometer"}},
+			{Const: "Inch", Value: "inchM", Doc: "is 0.0254 m exactly (NIST SP 811).", Accessor: "Inches", Symbol: "in", Aliases: []string{"inch", "inches", "\"", "″"}},
+			{Const: "Foot", Value: "footM", Doc: "is 0.3048 m exactly (NIST SP 811).", Accessor: "Feet", Symbol: "ft", Aliases: []string{"foot", "feet", "'", "′"}},
 		}},
 	{Name: "Area", Kind: "area", Dim: "dim(2, 0, 0, 0, 0)", Base: "SquareMetre", Metric: "cm²", US: "in²",
 		Doc: "Area is an area in square metres (m²): piston and annulus areas, flow sections.",
@@ -78,11 +102,11 @@ var quantities = []quantity{
 		Doc: "Volume is a volume in cubic metres (m³): reservoirs, accumulators, swept volumes.",
 		Units: []unit{
 			{Const: "CubicMetre", Value: "1", Doc: "is the SI unit of volume.", Accessor: "CubicMetres", Symbol: "m³", Aliases: []string{"m3", "m^3", "cu m"}},
-			{Const: "Litre", Value: "1e-3", Doc: "is 10⁻³ m³ exactly (CGPM 1964).", Accessor: "Litres", Symbol: "L", Aliases: []string{"l", "litre", "liter", "dm³", "dm3"}},
+			{Const: "Litre", Value: "1e-3", Doc: "is 10⁻³ m³ exactly (CGPM 1964).", Accessor: "Litres", Symbol: "L", Aliases: []string{"l", "litre", "liter", "litres", "liters", "dm³", "dm3"}},
 			{Const: "Millilitre", Value: "1e-6", Doc: "is 10⁻⁶ m³.", Accessor: "Millilitres", Symbol: "mL", Aliases: []string{"ml"}},
 			{Const: "CubicCentimetre", Value: "1e-6", Doc: "is 10⁻⁶ m³ (one cc).", Accessor: "CubicCentimetres", Symbol: "cm³", Aliases: []string{"cm3", "cm^3", "cc", "ccm"}},
 			{Const: "CubicInch", Value: "inchM * inchM * inchM", Doc: "is 16.387064 cm³ exactly (NIST SP 811).", Accessor: "CubicInches", Symbol: "in³", Aliases: []string{"in3", "in^3", "cu in", "cuin", "cid"}},
-			{Const: "USGallon", Value: "usGallonM3", Doc: "is the US liquid gallon, 231 in³ = 3.785411784 L exactly (NIST SP 811).", Accessor: "USGallons", Symbol: "gal", Aliases: []string{"US gal", "USgal", "usgal", "gal(US)"}},
+			{Const: "USGallon", Value: "usGallonM3", Doc: "is the US liquid gallon, 231 in³ = 3.785411784 L exactly (NIST SP 811).", Accessor: "USGallons", Symbol: "gal", Aliases: []string{"US gal", "USgal", "usgal", "gal(US)", "gallon", "gallons", "US gallon", "US gallons"}},
 			{Const: "UKGallon", Value: "ukGallonM3", Doc: "is the imperial gallon, 4.54609 L exactly (NIST SP 811).", Accessor: "UKGallons", Symbol: "UK gal", Aliases: []string{"UKgal", "imp gal", "gal(UK)"}},
 		}},
 	{Name: "Mass", Kind: "mass", Dim: "dim(0, 1, 0, 0, 0)", Base: "Kilogram", Metric: "kg", US: "lbm",
@@ -91,7 +115,11 @@ var quantities = []quantity{
 			{Const: "Kilogram", Value: "1", Doc: "is the SI unit of mass.", Accessor: "Kilograms", Symbol: "kg"},
 			{Const: "Gram", Value: "1e-3", Doc: "is 10⁻³ kg.", Accessor: "Grams", Symbol: "g"},
 			{Const: "Tonne", Value: "1e3", Doc: "is the metric ton, 1000 kg.", Accessor: "Tonnes", Symbol: "t", Aliases: []string{"tonne"}},
-			{Const: "PoundMass", Value: "lbmKg", Doc: "is the avoirdupois pound, 0.45359237 kg exactly (NIST SP 811).", Accessor: "Pounds", Symbol: "lbm", Aliases: []string{"lb"}},
+			{Const: "PoundMass", Value: "lbmKg", Doc: "is the avoirdupois pound, 0.45359237 kg exactly (NIST SP 811).", Accessor: "Pounds", Symbol: "lbm", Aliases: []string{"lb", "lbs"}},
+		},
+		Context: []context{
+			{Spelling: "ton", Err: "ErrAmbiguous", Detail: tonMass},
+			{Spelling: "tons", Err: "ErrAmbiguous", Detail: tonMass},
 		}},
 	{Name: "Force", Kind: "force", Dim: "dim(1, 1, -2, 0, 0)", Base: "Newton", Metric: "kN", US: "lbf",
 		Doc: "Force is a force in newtons (N): loads, cylinder thrust and pull.",
@@ -100,15 +128,34 @@ var quantities = []quantity{
 			{Const: "Kilonewton", Value: "1e3", Doc: "is 10³ N.", Accessor: "Kilonewtons", Symbol: "kN"},
 			{Const: "PoundForce", Value: "lbfN", Doc: "is lbm·g₀ = 4.4482216152605 N exactly (NIST SP 811).", Accessor: "PoundsForce", Symbol: "lbf"},
 			{Const: "KilogramForce", Value: "kgfN", Doc: "is 1 kg·g₀ = 9.80665 N exactly (NIST SP 811).", Accessor: "KilogramsForce", Symbol: "kgf", Aliases: []string{"kp"}},
+			{Const: "TonneForce", Value: "tonneForceN", Doc: "is the weight of one tonne, 1000 kgf = 9806.65 N exactly (NIST SP 811: metric ton and kilogram-force).", Accessor: "TonnesForce", Symbol: "tf", Aliases: []string{"tonne-force", "tonnes-force", "t-force", "tonne force", "metric ton-force"}},
+			{Const: "ShortTonForce", Value: "shortTonForceN", Doc: "is the US (short) ton-force, 2000 lbf = 8896.443230521 N exactly (NIST SP 811: ton-force, 2000 lbf).", Accessor: "ShortTonsForce", Symbol: "US tonf", Aliases: []string{"ton(US)", "tonf(US)", "short ton-force", "short tons-force", "sh tonf"}},
+			{Const: "LongTonForce", Value: "longTonForceN", Doc: "is the UK (long) ton-force, 2240 lbf = 9964.01641818352 N exactly (NIST SP 811: long ton, 2240 lb, under g₀).", Accessor: "LongTonsForce", Symbol: "UK tonf", Aliases: []string{"ton(UK)", "tonf(UK)", "long ton-force", "long tons-force"}},
+		},
+		// As loads are spoken: a pound of load is a pound-force; a kilogram
+		// or a plain ton is not a force until it says which.
+		Context: []context{
+			{Spelling: "lb", Unit: "lbf"},
+			{Spelling: "lbs", Unit: "lbf"},
+			{Spelling: "kg", Err: "ErrDimension", Detail: `"kg" is a mass; as a force write "kgf" (kilogram-force, 9.80665 N)`},
+			{Spelling: "t", Err: "ErrAmbiguous", Detail: tonForce},
+			{Spelling: "ton", Err: "ErrAmbiguous", Detail: tonForce},
+			{Spelling: "tons", Err: "ErrAmbiguous", Detail: tonForce},
+			{Spelling: "tonne", Err: "ErrAmbiguous", Detail: tonForce},
+			{Spelling: "tonnes", Err: "ErrAmbiguous", Detail: tonForce},
+			{Spelling: "tonf", Err: "ErrAmbiguous", Detail: tonForce},
 		}},
 	{Name: "Pressure", Kind: "pressure", Dim: "dim(-1, 1, -2, 0, 0)", Base: "Pascal", Metric: "bar", US: "psi",
-		Accept: "refNone | refGauge",
+		Accept: "refNone | refGauge | refDiff",
 		Doc: `Pressure is a gauge or differential pressure in pascals (Pa): a pressure
 // above (or below) the local ambient, or a difference between two pressures,
 // such as a relief setting, a load pressure or a valve pressure drop. Plain
 // bar and psi are read as gauge, as the trade writes them; psig and barg say
-// so explicitly. Use AbsolutePressure for gas laws and cavitation checks, and
-// convert between the two only with an explicit ambient pressure.`,
+// so explicitly; psid and bard say that the value is a difference. Vacuum
+// gauge readings ("28 inHg vac", "60 kPa vac") are gauge pressures below
+// ambient, read as negative values. Use AbsolutePressure for gas laws and
+// cavitation checks, and convert between the two only with an explicit
+// ambient pressure.`,
 		Units: []unit{
 			{Const: "Pascal", Value: "1", Doc: "is the SI unit of pressure.", Accessor: "Pascals", Symbol: "Pa"},
 			{Const: "Kilopascal", Value: "1e3", Doc: "is 10³ Pa.", Accessor: "Kilopascals", Symbol: "kPa"},
@@ -118,8 +165,28 @@ var quantities = []quantity{
 			{Const: "Millibar", Value: "1e-3 * barPa", Doc: "is 100 Pa.", Accessor: "Millibar", Symbol: "mbar"},
 			{Const: "PSI", Value: "psiPa", Doc: "is one pound-force per square inch, ≈ 6894.757 Pa (exact ratio, NIST SP 811).", Accessor: "PSI", Symbol: "psi", Aliases: []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}, Ref: "refGauge"},
 			{Const: "KSI", Value: "1e3 * psiPa", Doc: "is 1000 psi, used for material strengths.", Accessor: "KSI", Symbol: "ksi"},
-			{Const: "KilogramForcePerSquareCentimetre", Value: "kgfN * 1e4", Doc: "is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811).", Accessor: "KilogramsForcePerSquareCentimetre", Symbol: "kgf/cm²", Aliases: []string{"kgf/cm2", "at"}, Ref: "refGauge"},
-			{Const: "InchOfMercury", Value: "inHgPa", Doc: "is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, \"conventional\").", Accessor: "InchesOfMercury", Symbol: "inHg", Aliases: []string{"in Hg", "\"Hg"}},
+			{Const: "KilogramForcePerSquareCentimetre", Value: "kgfN * 1e4", Doc: "is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811). Parsing reads kg/cm² as kgf/cm², as gauges and data sheets write it.", Accessor: "KilogramsForcePerSquareCentimetre", Symbol: "kgf/cm²", Aliases: []string{"kgf/cm2", "kgf/cm^2", "at", "kg/cm²", "kg/cm2", "kg/cm^2"}, Ref: "refGauge"},
+			{Const: "InchOfMercury", Value: "inHgPa", Doc: "is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, \"conventional\"). Parsing reads a plain inHg as a barometric (absolute) pressure: ParsePressure refuses it, and a vacuum gauge reading is written \"28 inHg vac\".", Accessor: "InchesOfMercury", Symbol: "inHg", Aliases: []string{"in Hg", "\"Hg"}, Ref: "refAbsolute"},
+			// Differences: the same factors, said to be differences.
+			{Value: "psiPa", Symbol: "psid", Aliases: []string{"psi(d)", "psi d"}, Ref: "refDiff"},
+			{Value: "barPa", Symbol: "bard", Aliases: []string{"bar(d)", "bar d"}, Ref: "refDiff"},
+			{Value: "1e3", Symbol: "kPa(d)", Aliases: []string{"kPa d", "kPad"}, Ref: "refDiff"},
+			// Vacuum gauge readings: a depth below ambient, read as a negative
+			// gauge pressure (the factor carries the sign).
+			{Value: "-inHgPa", Symbol: "inHg vac", Aliases: []string{"inHgV", "inHg V", "inHg vacuum", "in Hg vac", "in Hg vacuum", "\"Hg vac", "\"Hg vacuum"}, Ref: "refGauge"},
+			{Value: "-mmHgPa", Symbol: "mmHg vac", Aliases: []string{"mmHgV", "mmHg vacuum", "mm Hg vac", "mm Hg vacuum"}, Ref: "refGauge"},
+			{Value: "-1e3", Symbol: "kPa vac", Aliases: []string{"kPa vacuum"}, Ref: "refGauge"},
+			{Value: "-barPa", Symbol: "bar vac", Aliases: []string{"bar vacuum"}, Ref: "refGauge"},
+			{Value: "-psiPa", Symbol: "psi vac", Aliases: []string{"psi vacuum"}, Ref: "refGauge"},
+		},
+		// A mercury column without "vac" is a barometric reading: absolute.
+		Context: []context{
+			{Spelling: "inHg", Err: "ErrReference", Detail: mercuryGauge},
+			{Spelling: "in Hg", Err: "ErrReference", Detail: mercuryGauge},
+			{Spelling: "\"Hg", Err: "ErrReference", Detail: mercuryGauge},
+			{Spelling: "mmHg", Err: "ErrReference", Detail: mercuryGauge},
+			{Spelling: "mm Hg", Err: "ErrReference", Detail: mercuryGauge},
+			{Spelling: "Torr", Err: "ErrReference", Detail: mercuryGauge},
 		}},
 	{Name: "AbsolutePressure", Kind: "absolute pressure", Dim: "dim(-1, 1, -2, 0, 0)", Base: "PascalAbsolute", Metric: "bara", US: "psia",
 		Accept: "refNone | refAbsolute", Min: "0", MinText: "≥ 0 Pa (absolute vacuum)",
@@ -134,15 +201,18 @@ var quantities = []quantity{
 			{Const: "BarAbsolute", Value: "barPa", Doc: "is 10⁵ Pa above absolute vacuum.", Accessor: "Bar", Symbol: "bara", Aliases: []string{"bar(a)", "bar a", "bar abs"}, Ref: "refAbsolute"},
 			{Const: "PSIAbsolute", Value: "psiPa", Doc: "is one psi above absolute vacuum.", Accessor: "PSI", Symbol: "psia", Aliases: []string{"psi(a)", "psi abs"}, Ref: "refAbsolute"},
 			{Const: "StandardAtmosphere", Value: "atmPa", Doc: "is the standard atmosphere, 101 325 Pa exactly (NIST SP 811), the usual ambient when no site value is known. It must still be passed explicitly.", Accessor: "Atmospheres", Symbol: "atm", Ref: "refAbsolute"},
+			{Const: "MillimetreOfMercury", Value: "mmHgPa", Doc: "is the conventional millimetre of mercury, 13 595.1 kg/m³·g₀·1 mm = 133.322 387 415 Pa exactly (NIST SP 811, \"conventional\"), read as a barometric (absolute) pressure.", Accessor: "MillimetresOfMercury", Symbol: "mmHg", Aliases: []string{"mm Hg"}, Ref: "refAbsolute"},
+			{Const: "Torr", Value: "torrPa", Doc: "is 1/760 of the standard atmosphere, 101 325/760 Pa ≈ 133.322 368 Pa (NIST SP 811), absolute as in vacuum work.", Accessor: "Torr", Symbol: "Torr", Aliases: []string{"torr"}, Ref: "refAbsolute"},
 		}},
 	{Name: "Flow", Kind: "volume flow", Dim: "dim(3, 0, -1, 0, 0)", Base: "CubicMetrePerSecond", Metric: "L/min", US: "gpm",
 		Doc: "Flow is a volume flow rate in cubic metres per second (m³/s): pump delivery, cylinder and line flows.",
 		Units: []unit{
 			{Const: "CubicMetrePerSecond", Value: "1", Doc: "is the SI unit of volume flow.", Accessor: "CubicMetresPerSecond", Symbol: "m³/s", Aliases: []string{"m3/s", "m^3/s"}},
-			{Const: "LitrePerMinute", Value: "1e-3 / minuteS", Doc: "is one litre per minute.", Accessor: "LitresPerMinute", Symbol: "L/min", Aliases: []string{"l/min", "lpm", "LPM"}},
+			{Const: "LitrePerMinute", Value: "1e-3 / minuteS", Doc: "is one litre per minute.", Accessor: "LitresPerMinute", Symbol: "L/min", Aliases: []string{"l/min", "lpm", "LPM", "litres/min", "liters/min", "litre/min", "liter/min", "litres per minute", "liters per minute", "litre per minute", "liter per minute"}},
 			{Const: "LitrePerSecond", Value: "1e-3", Doc: "is one litre per second.", Accessor: "LitresPerSecond", Symbol: "L/s", Aliases: []string{"l/s"}},
 			{Const: "CubicMetrePerHour", Value: "1.0 / hourS", Doc: "is one cubic metre per hour.", Accessor: "CubicMetresPerHour", Symbol: "m³/h", Aliases: []string{"m3/h", "m^3/h"}},
-			{Const: "USGallonPerMinute", Value: "usGallonM3 / minuteS", Doc: "is one US gallon per minute.", Accessor: "USGallonsPerMinute", Symbol: "gpm", Aliases: []string{"GPM", "US gpm", "gal/min"}},
+			{Const: "USGallonPerMinute", Value: "usGallonM3 / minuteS", Doc: "is one US gallon per minute.", Accessor: "USGallonsPerMinute", Symbol: "gpm", Aliases: []string{"GPM", "US gpm", "gal/min", "gallons per minute", "gallon per minute"}},
+			{Value: "usGallonM3 / hourS", Symbol: "gph", Aliases: []string{"gal/h", "gal/hr", "gallons per hour", "gallon per hour"}},
 			{Const: "CubicInchPerSecond", Value: "inchM * inchM * inchM", Doc: "is one cubic inch per second.", Accessor: "CubicInchesPerSecond", Symbol: "in³/s", Aliases: []string{"in3/s", "in^3/s"}},
 		}},
 	{Name: "Velocity", Kind: "velocity", Dim: "dim(1, 0, -1, 0, 0)", Base: "MetrePerSecond", Metric: "m/s", US: "ft/s",
@@ -167,7 +237,7 @@ var quantities = []quantity{
 		Doc: "RotationalSpeed is a shaft speed in revolutions per second (rev/s).",
 		Units: []unit{
 			{Const: "RevolutionPerSecond", Value: "1", Doc: "is the coherent unit of rotational speed.", Accessor: "RevolutionsPerSecond", Symbol: "rev/s", Aliases: []string{"rps", "r/s"}},
-			{Const: "RevolutionPerMinute", Value: "1.0 / minuteS", Doc: "is one revolution per minute.", Accessor: "RPM", Symbol: "rpm", Aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "1/min"}},
+			{Const: "RevolutionPerMinute", Value: "1.0 / minuteS", Doc: "is one revolution per minute.", Accessor: "RPM", Symbol: "rpm", Aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "min-1", "1/min", "U/min"}},
 			{Const: "RadianPerSecond", Value: "1 / revRad", Doc: "is 1/(2π) rev/s; not exact in binary floating point.", Accessor: "RadiansPerSecond", Symbol: "rad/s"},
 		}},
 	{Name: "Torque", Kind: "torque", Dim: "dim(2, 1, -2, 0, 0)", Base: "NewtonMetre", Metric: "N·m", US: "lbf·ft",
@@ -175,8 +245,8 @@ var quantities = []quantity{
 		Units: []unit{
 			{Const: "NewtonMetre", Value: "1", Doc: "is the SI unit of torque.", Accessor: "NewtonMetres", Symbol: "N·m", Aliases: []string{"Nm", "N*m", "N.m", "N m", "N-m", "N⋅m"}},
 			{Const: "KilonewtonMetre", Value: "1e3", Doc: "is 10³ N·m.", Accessor: "KilonewtonMetres", Symbol: "kN·m", Aliases: []string{"kNm", "kN*m", "kN.m", "kN m"}},
-			{Const: "PoundForceFoot", Value: "lbfN * footM", Doc: "is one lbf acting at one foot, ≈ 1.3558 N·m (exact product).", Accessor: "PoundForceFeet", Symbol: "lbf·ft", Aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft"}},
-			{Const: "PoundForceInch", Value: "lbfN * inchM", Doc: "is one lbf acting at one inch, ≈ 0.11298 N·m (exact product).", Accessor: "PoundForceInches", Symbol: "lbf·in", Aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin"}},
+			{Const: "PoundForceFoot", Value: "lbfN * footM", Doc: "is one lbf acting at one foot, ≈ 1.3558 N·m (exact product).", Accessor: "PoundForceFeet", Symbol: "lbf·ft", Aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft", "ft·lb", "ft.lb", "ft*lb", "ft lb", "lb·ft", "lb.ft", "lb*ft", "lb ft"}},
+			{Const: "PoundForceInch", Value: "lbfN * inchM", Doc: "is one lbf acting at one inch, ≈ 0.11298 N·m (exact product).", Accessor: "PoundForceInches", Symbol: "lbf·in", Aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin", "in·lb", "in.lb", "in*lb", "in lb", "lb·in", "lb.in", "lb*in", "lb in"}},
 		}},
 	{Name: "Power", Kind: "power", Dim: "dim(2, 1, -3, 0, 0)", Base: "Watt", Metric: "kW", US: "hp",
 		Doc: "Power is a power in watts (W): hydraulic, shaft and electrical power, and heat flows.",
@@ -205,8 +275,8 @@ var quantities = []quantity{
 		Units: []unit{
 			{Const: "Kelvin", Value: "1", Doc: "is the SI unit of thermodynamic temperature.", Accessor: "Kelvin", Symbol: "K", Aliases: []string{"kelvin"}, Ref: "refPoint"},
 			{Const: "Rankine", Value: "fahrenheitK", Doc: "is 5/9 K exactly; 0 °R is absolute zero.", Accessor: "Rankine", Symbol: "°R", Aliases: []string{"degR", "R"}, Ref: "refPoint"},
-			{Value: "1", Symbol: "°C", Aliases: []string{"degC", "℃", "C", "deg C", "celsius"}, Offset: "celsiusZeroK", Ref: "refPoint"},
-			{Value: "fahrenheitK", Symbol: "°F", Aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit"}, Offset: "fahrenheitZeroK", Ref: "refPoint"},
+			{Value: "1", Symbol: "°C", Aliases: []string{"degC", "℃", "C", "deg C", "celsius", "ºC", "° C", "º C"}, Offset: "celsiusZeroK", Ref: "refPoint"},
+			{Value: "fahrenheitK", Symbol: "°F", Aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit", "ºF", "° F", "º F"}, Offset: "fahrenheitZeroK", Ref: "refPoint"},
 		}},
 	{Name: "TemperatureDifference", Kind: "temperature difference", Dim: "dim(0, 0, 0, 1, 0)", Base: "DeltaKelvin", Metric: "K", US: "°F",
 		Accept: "refNone | refPoint",
@@ -304,12 +374,18 @@ var quantities = []quantity{
 
 func main() {
 	seen := map[string]string{}
+	fitting := map[string]bool{} // "Type spelling" for each spelling of a unit that fits Type
 	idx := 0
 	for i := range quantities {
 		q := &quantities[i]
 		for _, u := range q.Units {
 			if !q.NoType && u.Symbol == q.Metric {
 				q.MetricIdx = idx
+			}
+			for k := range q.Context {
+				if c := &q.Context[k]; c.Unit == u.Symbol {
+					c.UnitIdx = idx
+				}
 			}
 			if !q.NoType && u.Symbol == q.US {
 				q.USIdx = idx
@@ -324,6 +400,21 @@ func main() {
 					fail(fmt.Errorf("spelling %q of %s is also a spelling of %s", sp, q.Name, other))
 				}
 				seen[sp] = q.Name
+				for _, t := range quantities {
+					if !t.NoType && t.Dim == q.Dim && strings.Contains(accept(t.Accept), ref(u.Ref)) {
+						fitting[t.Name+" "+sp] = true
+					}
+				}
+			}
+		}
+	}
+	for _, q := range quantities {
+		for _, c := range q.Context {
+			if fitting[q.Name+" "+c.Spelling] {
+				fail(fmt.Errorf("%s: context spelling %q is a registered spelling of a %s unit", q.Name, c.Spelling, q.Name))
+			}
+			if (c.Unit == "") == (c.Err == "") || (c.Unit != "" && c.UnitIdx == 0) {
+				fail(fmt.Errorf("%s: context spelling %q wants a unit of %s or an error, not both", q.Name, c.Spelling, q.Name))
 			}
 		}
 	}
@@ -359,8 +450,9 @@ func writeDoc() {
 	}
 	b.WriteString("//\n// # Spellings\n//\n")
 	b.WriteString("// Every accepted spelling, by quantity type; the first is the one formatting\n")
-	b.WriteString("// writes. Case is significant (MPa is not mPa). Inside expressions, these\n")
-	b.WriteString("// names combine with *, ·, /, ^ and parentheses.\n//\n")
+	b.WriteString("// writes. An exact spelling always wins; letter case is ignored only as a\n")
+	b.WriteString("// fallback (see Parsing). Inside expressions, these names combine with *,\n")
+	b.WriteString("// ·, /, ^ and parentheses.\n//\n")
 	for _, q := range quantities {
 		name := q.Name
 		if q.NoType {
@@ -377,6 +469,9 @@ func writeDoc() {
 			}
 		}
 		b.WriteString("//   - " + name + ": " + strings.Join(sp, "; ") + "\n")
+		if line := contextDoc(q); line != "" {
+			b.WriteString("//     " + line + "\n")
+		}
 	}
 	b.WriteString("package units\n")
 	out, err := format.Source([]byte(b.String()))
@@ -434,9 +529,16 @@ vacuum. They are different types, and crossing between them needs an explicit
 ambient pressure (Pressure.Absolute, AbsolutePressure.Gauge); StandardAtmosphere
 is provided but never implied. As the trade writes them, plain psi and bar are
 gauge, psig and barg say so, and psia, bara and atm are absolute; the SI
-spellings Pa, kPa, MPa, mbar and inHg are read as either. Parsing an absolute
-spelling into a Pressure, or a gauge spelling into an AbsolutePressure, fails
-with ErrReference.
+spellings Pa, kPa, MPa and mbar are read as either. A differential spelling
+(psid, bard, kPa(d)) reads as a Pressure, the difference between two
+pressures. A mercury column is a barometric reading, so inHg, mmHg and Torr
+are absolute; a vacuum gauge reading says so ("28 inHg vac", "60 kPa vac",
+"0.8 bar vac") and reads as a negative gauge Pressure. A vacuum reading must
+not itself be negative, and stands alone (not inside a longer expression).
+Parsing an absolute spelling into a Pressure, or a gauge or differential
+spelling into an AbsolutePressure, fails with ErrReference; so does a unit
+expression that mixes gauge and absolute spellings. Nothing guesses a
+reference or a sign.
 
 Temperature is absolute (kelvins); °C and °F are offset scales, reached through
 TemperatureFromCelsius, TemperatureFromFahrenheit, Temperature.Celsius and
@@ -466,10 +568,26 @@ in BTU/(lbm·°F). Parse reads into a dynamic Quantity that carries its SI
 dimension and converts to a typed value only when the dimensions match;
 Convert converts a number between two unit expressions.
 
+Letter case. A unit, or a name inside an expression, is first looked up
+exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
+seconds, "MPa" megapascals). A spelling that matches nothing exactly is looked
+up again ignoring letter case, and accepted when every registered spelling it
+then matches belongs to one unit: "PSI", "Bar", "BAR", "KW", "kw", "Hp", "LPM",
+"°c", "Celsius". Where it could be more than one unit it is an ErrAmbiguous
+error that lists them. The m of milli and the M of mega differ only in case,
+so "Mpa" could be MPa or mPa, "MM" mm or Mm, and "MBAR" mbar or Mbar: each is
+refused, never read as a guess.
+
+A typed parser also reads a few spellings that mean something only for its
+type, and refuses others with what to write instead (listed under Spellings):
+ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
+refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
+ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+
 Errors are *ParseError values that quote the input and the byte offset and
 unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
-ErrDimension, ErrRange or ErrReference. Parsing a registered unit allocates
-nothing.
+ErrDimension, ErrRange, ErrReference or ErrAmbiguous (with what the text
+could mean). Parsing a registered unit allocates nothing.
 
 # Formatting
 
@@ -488,7 +606,7 @@ json.Marshal never writes a document that cannot be read back.
 # Errors
 
 Every error matches one of the sentinels ErrSyntax, ErrUnknownUnit,
-ErrDimension, ErrRange and ErrReference with errors.Is. A *ParseError
+ErrDimension, ErrRange, ErrReference and ErrAmbiguous with errors.Is. A *ParseError
 quotes the text; a *ConversionError names both sides of a failed conversion;
 a *RangeError names a parameter, the value and the valid range, and is the one
 type every hydrosize package returns for a bad argument (errors.As finds it).
@@ -497,6 +615,30 @@ writes it: "units.ParsePressure", "units.Pressure.UnmarshalText",
 "units.Quantity.In", "fluid.CurveThrough". The Error methods never panic,
 whatever a caller put in the fields.
 `
+
+// contextDoc lists the spellings that only q's parser reads, for the
+// package documentation.
+func contextDoc(q quantity) string {
+	var reads, refuses []string
+	for _, c := range q.Context {
+		if c.Unit != "" {
+			reads = append(reads, c.Spelling+" as "+c.Unit)
+		} else {
+			refuses = append(refuses, c.Spelling)
+		}
+	}
+	var parts []string
+	if len(reads) > 0 {
+		parts = append(parts, "reads "+strings.Join(reads, ", "))
+	}
+	if len(refuses) > 0 {
+		parts = append(parts, "refuses "+strings.Join(refuses, ", ")+", saying what to write")
+	}
+	if len(parts) == 0 {
+		return ""
+	}
+	return "(Parse" + q.Name + " " + strings.Join(parts, "; ") + ".)"
+}
 
 func fail(err error) {
 	fmt.Fprintln(os.Stderr, "gen:", err)
@@ -513,19 +655,23 @@ func findSymbol(q quantity, sym string) string {
 	return ""
 }
 
+func ref(r string) string {
+	if r == "" {
+		return "refNone"
+	}
+	return r
+}
+
+func accept(a string) string {
+	if a == "" {
+		return "refNone"
+	}
+	return a
+}
+
 var funcs = template.FuncMap{
-	"ref": func(r string) string {
-		if r == "" {
-			return "refNone"
-		}
-		return r
-	},
-	"accept": func(a string) string {
-		if a == "" {
-			return "refNone"
-		}
-		return a
-	},
+	"ref":    ref,
+	"accept": accept,
 	"offset": func(o string) string {
 		if o == "" {
 			return "0"
@@ -673,7 +819,10 @@ package units
 // Type descriptions used by parsing and conversion.
 var (
 {{- range $q := .}}{{if not $q.NoType}}
-	type{{$q.Name}} = typeInfo{name: "{{$q.Name}}", kind: "{{$q.Kind}}", dim: {{$q.Dim}}, accept: {{accept $q.Accept}}, useOffset: {{$q.Offset}}, {{if $q.Min}}hasMin: true, min: {{$q.Min}}, minText: {{quote $q.MinText}}, {{end}}examples: {{quote (examples $q)}}}
+	type{{$q.Name}} = typeInfo{name: "{{$q.Name}}", kind: "{{$q.Kind}}", dim: {{$q.Dim}}, accept: {{accept $q.Accept}}, useOffset: {{$q.Offset}}, {{if $q.Min}}hasMin: true, min: {{$q.Min}}, minText: {{quote $q.MinText}}, {{end}}examples: {{quote (examples $q)}}{{if $q.Context}},
+		context: []contextSpelling{ {{range $c := $q.Context}}
+			{spelling: {{quote $c.Spelling}}, {{if $c.Unit}}unit: {{$c.UnitIdx}}{{else}}unit: -1, err: {{$c.Err}}, detail: {{quote $c.Detail}}{{end}}},{{end}}
+		}{{end}}}
 {{- end}}{{end}}
 )
 

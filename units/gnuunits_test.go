@@ -43,6 +43,12 @@ var gnuUnitsTable = []gnuUnitsRow{
 	{29.92, "inHg", "kPa", "29.92 inHg", "kPa"},
 	{1, "atm", "psia", "1 atm", "psi"},
 	{14.7, "psia", "bara", "14.7 psi", "bar"},
+	{720, "mmHg", "kPa", "720 mmHg", "kPa"},
+	{500, "Torr", "Pa", "500 torr", "Pa"},
+	{28, "inHg vac", "psi", "-28 inHg", "psi"},   // a vacuum reading is negative gauge
+	{600, "mmHg vac", "kPa", "-600 mmHg", "kPa"}, // GNU has no vacuum words
+	{2, "kg/cm²", "psi", "2 kgf/cm^2", "psi"},    // kg/cm² read as kgf/cm²
+	{25, "psid", "bar", "25 psi", "bar"},
 	// Volume and flow.
 	{1, "gal", "L", "1 gallon", "L"},
 	{1, "UK gal", "L", "1 brgallon", "L"},
@@ -51,6 +57,7 @@ var gnuUnitsTable = []gnuUnitsRow{
 	{100, "L/min", "gpm", "100 L/min", "gallon/min"},
 	{1, "in³/s", "L/min", "1 in^3/s", "L/min"},
 	{30, "m³/h", "L/min", "30 m^3/hr", "L/min"},
+	{12, "gph", "L/min", "12 gallon/hr", "L/min"},
 	// Displacement and speed.
 	{2.5, "in³/rev", "cm³/rev", "2.5 in^3/rev", "cm^3/rev"},
 	{1800, "rpm", "rad/s", "1800 rpm", "radian/s"},
@@ -58,6 +65,9 @@ var gnuUnitsTable = []gnuUnitsRow{
 	{1, "lbf", "N", "1 lbf", "N"},
 	{1, "kgf", "lbf", "1 kgf", "lbf"},
 	{1, "lbm", "kg", "1 lb", "kg"},
+	{50, "tf", "kN", "50 tonne force", "kN"},
+	{50, "US tonf", "kN", "50 shortton force", "kN"},
+	{50, "UK tonf", "lbf", "50 longton force", "lbf"},
 	{1, "t", "lbm", "1 tonne", "lb"},
 	{100, "lbf·ft", "N·m", "100 lbf ft", "N m"},
 	{1, "lbf·in", "N·m", "1 lbf in", "N m"},
@@ -107,7 +117,7 @@ func gnuUnitsPath(t *testing.T) string {
 // gnuUnits runs one conversion and parses the number it prints.
 func gnuUnits(t *testing.T, path, from, to string) float64 {
 	t.Helper()
-	out, err := exec.Command(path, "-t", "-o", "%.17g", from, to).CombinedOutput()
+	out, err := exec.Command(path, "-t", "-o", "%.17g", "--", from, to).CombinedOutput()
 	if err != nil {
 		t.Fatalf("units %q %q: %v: %s", from, to, err, out)
 	}

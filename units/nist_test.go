@@ -82,6 +82,12 @@ var nistTable = []nistRow{
 	{sym: "kN", def: "1000", c: float64(Kilonewton)},
 	{sym: "lbf", def: "0.45359237*9.80665", c: float64(PoundForce), printed: 4.448222},
 	{sym: "kgf", def: "9.80665", c: float64(KilogramForce)},
+	// Ton-forces: B.8 prints ton-force (2000 lbf) = 8.896 443 E+03 N; the
+	// tonne-force is the metric ton (1000 kg, B.8) under g₀ = 1000 kgf, and
+	// the long ton-force the long ton (2240 lb, B.8) under g₀ = 2240 lbf.
+	{sym: "tf", def: "1000*9.80665", c: float64(TonneForce)},
+	{sym: "US tonf", def: "2000*0.45359237*9.80665", c: float64(ShortTonForce), printed: 8.896443e3},
+	{sym: "UK tonf", def: "2240*0.45359237*9.80665", c: float64(LongTonForce)},
 
 	// Pressure (gauge). bar = 1E+05 Pa exact; psi = lbf/in² (printed
 	// 6.894757E+03); ksi (printed 6.894757E+06); kgf/cm² = 9.80665E+04 Pa
@@ -96,6 +102,16 @@ var nistTable = []nistRow{
 	{sym: "ksi", def: "1000*0.45359237*9.80665/0.0254/0.0254", c: float64(KSI), printed: 6.894757e6},
 	{sym: "kgf/cm²", def: "9.80665/0.0001", c: float64(KilogramForcePerSquareCentimetre)},
 	{sym: "inHg", def: "13595.1*9.80665*0.0254", c: float64(InchOfMercury), printed: 3.386389e3},
+	// Differences: the factors of psi, bar and kPa.
+	{sym: "psid", def: "0.45359237*9.80665/0.0254/0.0254", printed: 6.894757e3},
+	{sym: "bard", def: "100000"},
+	{sym: "kPa(d)", def: "1000"},
+	// Vacuum readings: the same factors below ambient, negative.
+	{sym: "inHg vac", def: "-13595.1*9.80665*0.0254"},
+	{sym: "mmHg vac", def: "-13595.1*9.80665*0.001"},
+	{sym: "kPa vac", def: "-1000"},
+	{sym: "bar vac", def: "-100000"},
+	{sym: "psi vac", def: "-0.45359237*9.80665/0.0254/0.0254"},
 
 	// Pressure (absolute): the same factors; atmosphere, standard = 1.01325E+05 Pa exact.
 	{sym: "Pa(a)", def: "1", c: float64(PascalAbsolute)},
@@ -104,6 +120,11 @@ var nistTable = []nistRow{
 	{sym: "bara", def: "100000", c: float64(BarAbsolute)},
 	{sym: "psia", def: "0.45359237*9.80665/0.0254/0.0254", c: float64(PSIAbsolute), printed: 6.894757e3},
 	{sym: "atm", def: "101325", c: float64(StandardAtmosphere)},
+	// Millimetre of mercury, conventional = 13.5951 g/cm³·g₀·1 mm =
+	// 133.322 387 415 Pa exactly (printed 1.333224 E+02); torr = 101 325/760
+	// Pa (printed 1.333224 E+02).
+	{sym: "mmHg", def: "13595.1*9.80665*0.001", c: float64(MillimetreOfMercury), printed: 1.333224e2},
+	{sym: "Torr", def: "101325/760", c: float64(Torr), printed: 1.333224e2},
 
 	// Flow. gallon (US) per minute (printed 6.309020E-05).
 	{sym: "m³/s", def: "1", c: float64(CubicMetrePerSecond)},
@@ -111,6 +132,7 @@ var nistTable = []nistRow{
 	{sym: "L/s", def: "0.001", c: float64(LitrePerSecond)},
 	{sym: "m³/h", def: "1/3600", c: float64(CubicMetrePerHour)},
 	{sym: "gpm", def: "231*0.0254*0.0254*0.0254/60", c: float64(USGallonPerMinute), printed: 6.309020e-5},
+	{sym: "gph", def: "231*0.0254*0.0254*0.0254/3600"},
 	{sym: "in³/s", def: "0.0254*0.0254*0.0254", c: float64(CubicInchPerSecond)},
 
 	// Velocity. foot per second 3.048E-01, inch per second 2.54E-02, foot

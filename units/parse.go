@@ -121,7 +121,7 @@ func parseTyped(fn, s string, t *typeInfo) (float64, error) {
 		}
 		if i, found := spellings[in[at:]]; found {
 			u := &unitTable[i]
-			if u.dim == t.dim && u.ref&t.accept != 0 {
+			if u.dim == t.dim && u.ref&t.accept != 0 && (num >= 0 || !u.isVacuum()) {
 				v := float64(num * u.factor)
 				if t.useOffset && u.offset != 0 {
 					v += u.offset
@@ -146,7 +146,7 @@ func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 		return 0, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax,
 			Detail: "missing unit; want a unit of " + t.kind + " such as " + t.examples}
 	}
-	r, f := resolveUnit(in[at:])
+	r, f := resolveTyped(in[at:], t)
 	if f.err != nil {
 		if f.err == ErrUnknownUnit && f.word == in[at:] {
 			f.detail = unknownDetail(f.word, t) // the whole unit: suggest units of t
@@ -163,6 +163,25 @@ func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
 	return v, nil
 }
 
+// resolveTyped resolves unit u for a parser of type t: a context spelling of
+// t first (lb as lbf for a force; a plain ton refused), then the registry
+// and the expression parser.
+func resolveTyped(u string, t *typeInfo) (resolved, failure) {
+	if c := t.contextOf(u); c != nil {
+		if c.unit < 0 {
+			return resolved{}, failure{err: c.err, detail: c.detail}
+		}
+		return resolvedOf(&unitTable[c.unit]), failure{}
+	}
+	return resolveUnit(u)
+}
+
+// negativeVacuum is the failure of a negative vacuum reading.
+func negativeVacuum() failure {
+	return failure{err: ErrRange, detail: "a vacuum reading is a depth below ambient and is never negative; " +
+		"write a pressure above ambient as a gauge pressure (psi, bar, kPa)"}
+}
+
 // toTyped converts num in unit r to the SI value of type t, checking
 // dimension, reference and range.
 func toTyped(num float64, r resolved, t *typeInfo) (float64, failure) {
@@ -172,6 +191,9 @@ func toTyped(num float64, r resolved, t *typeInfo) (float64, failure) {
 	}
 	if r.ref&t.accept == 0 {
 		return 0, failure{err: ErrReference, detail: refDetail(r.ref, t)}
+	}
+	if num < 0 && r.factor < 0 {
+		return 0, negativeVacuum()
 	}
 	v := float64(num * r.factor)
 	if t.useOffset && r.offset != 0 { // adding 0 would turn −0 into +0
@@ -196,6 +218,8 @@ func refDetail(got reference, t *typeInfo) string {
 		return "an absolute pressure spelling where a gauge pressure is wanted; convert with an explicit ambient (AbsolutePressure.Gauge)"
 	case refGauge:
 		return "a gauge pressure spelling where an absolute pressure is wanted; use bara, psia or atm, or convert with an explicit ambient (Pressure.Absolute)"
+	case refDiff:
+		return "a differential pressure spelling where an absolute pressure is wanted; a difference of two pressures is a Pressure"
 	case refNone:
 		if t.dim == typeTemperature.dim {
 			return "a temperature difference where a temperature is wanted; use K, °C or °F"

@@ -434,6 +434,12 @@ const (
 	PoundForce Force = lbfN
 	// KilogramForce is 1 kg·g₀ = 9.80665 N exactly (NIST SP 811).
 	KilogramForce Force = kgfN
+	// TonneForce is the weight of one tonne, 1000 kgf = 9806.65 N exactly (NIST SP 811: metric ton and kilogram-force).
+	TonneForce Force = tonneForceN
+	// ShortTonForce is the US (short) ton-force, 2000 lbf = 8896.443230521 N exactly (NIST SP 811: ton-force, 2000 lbf).
+	ShortTonForce Force = shortTonForceN
+	// LongTonForce is the UK (long) ton-force, 2240 lbf = 9964.01641818352 N exactly (NIST SP 811: long ton, 2240 lb, under g₀).
+	LongTonForce Force = longTonForceN
 )
 
 // Newtons returns q as a number of N.
@@ -447,6 +453,15 @@ func (q Force) PoundsForce() float64 { return float64(q / PoundForce) }
 
 // KilogramsForce returns q as a number of kgf.
 func (q Force) KilogramsForce() float64 { return float64(q / KilogramForce) }
+
+// TonnesForce returns q as a number of tf.
+func (q Force) TonnesForce() float64 { return float64(q / TonneForce) }
+
+// ShortTonsForce returns q as a number of US tonf.
+func (q Force) ShortTonsForce() float64 { return float64(q / ShortTonForce) }
+
+// LongTonsForce returns q as a number of UK tonf.
+func (q Force) LongTonsForce() float64 { return float64(q / LongTonForce) }
 
 // In returns q as a number of unit u, such as q.In(units.Newton).
 // It returns 0 when u is 0.
@@ -518,8 +533,11 @@ func (d Quantity) Force() (Force, error) {
 // above (or below) the local ambient, or a difference between two pressures,
 // such as a relief setting, a load pressure or a valve pressure drop. Plain
 // bar and psi are read as gauge, as the trade writes them; psig and barg say
-// so explicitly. Use AbsolutePressure for gas laws and cavitation checks, and
-// convert between the two only with an explicit ambient pressure.
+// so explicitly; psid and bard say that the value is a difference. Vacuum
+// gauge readings ("28 inHg vac", "60 kPa vac") are gauge pressures below
+// ambient, read as negative values. Use AbsolutePressure for gas laws and
+// cavitation checks, and convert between the two only with an explicit
+// ambient pressure.
 //
 // The zero value is zero. Arithmetic on Pressure values is plain float64
 // arithmetic; unit constants are exact where their definition is exact.
@@ -543,9 +561,9 @@ const (
 	PSI Pressure = psiPa
 	// KSI is 1000 psi, used for material strengths.
 	KSI Pressure = 1e3 * psiPa
-	// KilogramForcePerSquareCentimetre is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811).
+	// KilogramForcePerSquareCentimetre is one kgf/cm² (the technical atmosphere, at), 98 066.5 Pa exactly (NIST SP 811). Parsing reads kg/cm² as kgf/cm², as gauges and data sheets write it.
 	KilogramForcePerSquareCentimetre Pressure = kgfN * 1e4
-	// InchOfMercury is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, "conventional").
+	// InchOfMercury is the conventional inch of mercury, 13 595.1 kg/m³·g₀·0.0254 m ≈ 3386.389 Pa (NIST SP 811, "conventional"). Parsing reads a plain inHg as a barometric (absolute) pressure: ParsePressure refuses it, and a vacuum gauge reading is written "28 inHg vac".
 	InchOfMercury Pressure = inHgPa
 )
 
@@ -671,6 +689,10 @@ const (
 	PSIAbsolute AbsolutePressure = psiPa
 	// StandardAtmosphere is the standard atmosphere, 101 325 Pa exactly (NIST SP 811), the usual ambient when no site value is known. It must still be passed explicitly.
 	StandardAtmosphere AbsolutePressure = atmPa
+	// MillimetreOfMercury is the conventional millimetre of mercury, 13 595.1 kg/m³·g₀·1 mm = 133.322 387 415 Pa exactly (NIST SP 811, "conventional"), read as a barometric (absolute) pressure.
+	MillimetreOfMercury AbsolutePressure = mmHgPa
+	// Torr is 1/760 of the standard atmosphere, 101 325/760 Pa ≈ 133.322 368 Pa (NIST SP 811), absolute as in vacuum work.
+	Torr AbsolutePressure = torrPa
 )
 
 // Pascals returns q as a number of Pa(a).
@@ -690,6 +712,12 @@ func (q AbsolutePressure) PSI() float64 { return float64(q / PSIAbsolute) }
 
 // Atmospheres returns q as a number of atm.
 func (q AbsolutePressure) Atmospheres() float64 { return float64(q / StandardAtmosphere) }
+
+// MillimetresOfMercury returns q as a number of mmHg.
+func (q AbsolutePressure) MillimetresOfMercury() float64 { return float64(q / MillimetreOfMercury) }
+
+// Torr returns q as a number of Torr.
+func (q AbsolutePressure) Torr() float64 { return float64(q / Torr) }
 
 // In returns q as a number of unit u, such as q.In(units.PascalAbsolute).
 // It returns 0 when u is 0.

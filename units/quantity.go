@@ -39,6 +39,9 @@ func Parse(s string) (Quantity, error) {
 		return Quantity{}, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax, Detail: "missing unit"}
 	}
 	r, f := resolveUnit(in[at:])
+	if f.err == nil && num < 0 && r.factor < 0 {
+		f = negativeVacuum()
+	}
 	if f.err != nil {
 		return Quantity{}, f.at(fn, s, at)
 	}
@@ -113,7 +116,7 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 		return 0, nil, &ConversionError{Func: fn, From: q.dim.String(), To: unit + " (" + r.dim.String() + ")", Err: ErrDimension}
 	}
 	switch {
-	case q.ref|r.ref == refGauge|refAbsolute:
+	case (q.ref|r.ref)&refAbsolute != 0 && (q.ref|r.ref)&(refGauge|refDiff) != 0:
 		return 0, nil, &ConversionError{Func: fn, From: refName(q.ref), To: refName(r.ref) + " " + unit, Err: ErrReference}
 	case q.ref == refNone && r.ref == refPoint:
 		return 0, nil, &ConversionError{Func: fn, From: "temperature difference", To: "temperature " + unit, Err: ErrReference}
@@ -151,6 +154,10 @@ func Convert(value float64, from, to string) (float64, error) {
 	if f.err != nil {
 		return 0, &ParseError{Func: fn, Input: from, Pos: f.pos, Err: f.err, Detail: f.detail}
 	}
+	if value < 0 && r.factor < 0 {
+		return 0, &RangeError{Func: fn, Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from,
+			Valid: "≥ 0: a vacuum reading is a depth below ambient"}
+	}
 	v, bound, err := quantityOf(value, r).in(fn, to)
 	if bound != nil {
 		return 0, &RangeError{Func: fn, Param: "value", Value: strconv.FormatFloat(value, 'g', -1, 64) + " " + from, Valid: bound.valid()}
@@ -179,6 +186,8 @@ func refName(r reference) string {
 		return "absolute pressure"
 	case refPoint:
 		return "temperature"
+	case refDiff:
+		return "differential pressure"
 	}
 	return "difference"
 }

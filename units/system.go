@@ -110,7 +110,9 @@ func displayOnly(spelling string, t *typeInfo) (int, bool) {
 	return 0, false
 }
 
-// fits reports whether values of type t can be shown in unit u.
+// fits reports whether values of type t can be shown in unit u. A vacuum
+// reading ("inHg vac") cannot show a pressure above ambient, so it is not a
+// display unit.
 func fits(u *unitDef, t *typeInfo) bool {
-	return u.dim == t.dim && u.ref&t.accept != 0 && (t.useOffset || u.offset == 0)
+	return u.dim == t.dim && u.ref&t.accept != 0 && (t.useOffset || u.offset == 0) && !u.isVacuum()
 }

@@ -39,26 +39,26 @@ var metricSystem = System{name: "metric", digits: 4, units: [numSlots]uint16{
 	slotVolume:                  12 + 1,  // L
 	slotMass:                    18 + 1,  // kg
 	slotForce:                   23 + 1,  // kN
-	slotPressure:                30 + 1,  // bar
-	slotAbsolutePressure:        39 + 1,  // bara
-	slotFlow:                    43 + 1,  // L/min
-	slotVelocity:                48 + 1,  // m/s
-	slotDisplacement:            54 + 1,  // cm³/rev
-	slotRotationalSpeed:         57 + 1,  // rpm
-	slotTorque:                  59 + 1,  // N·m
-	slotPower:                   64 + 1,  // kW
-	slotEnergy:                  69 + 1,  // kJ
-	slotTemperature:             75 + 1,  // °C
-	slotTemperatureDifference:   77 + 1,  // K
-	slotKinematicViscosity:      84 + 1,  // mm²/s
-	slotDynamicViscosity:        88 + 1,  // mPa·s
-	slotDensity:                 91 + 1,  // kg/m³
-	slotSpecificHeatCapacity:    97 + 1,  // kJ/(kg·K)
-	slotHeatTransferCoefficient: 99 + 1,  // W/(m²·K)
-	slotThermalConductivity:     101 + 1, // W/(m·K)
-	slotStiffness:               105 + 1, // kN/mm
-	slotFrequency:               107 + 1, // Hz
-	slotAcceleration:            109 + 1, // m/s²
+	slotPressure:                33 + 1,  // bar
+	slotAbsolutePressure:        50 + 1,  // bara
+	slotFlow:                    56 + 1,  // L/min
+	slotVelocity:                62 + 1,  // m/s
+	slotDisplacement:            68 + 1,  // cm³/rev
+	slotRotationalSpeed:         71 + 1,  // rpm
+	slotTorque:                  73 + 1,  // N·m
+	slotPower:                   78 + 1,  // kW
+	slotEnergy:                  83 + 1,  // kJ
+	slotTemperature:             89 + 1,  // °C
+	slotTemperatureDifference:   91 + 1,  // K
+	slotKinematicViscosity:      98 + 1,  // mm²/s
+	slotDynamicViscosity:        102 + 1, // mPa·s
+	slotDensity:                 105 + 1, // kg/m³
+	slotSpecificHeatCapacity:    111 + 1, // kJ/(kg·K)
+	slotHeatTransferCoefficient: 113 + 1, // W/(m²·K)
+	slotThermalConductivity:     115 + 1, // W/(m·K)
+	slotStiffness:               119 + 1, // kN/mm
+	slotFrequency:               121 + 1, // Hz
+	slotAcceleration:            123 + 1, // m/s²
 }}
 
 // usCustomarySystem is the US customary trade system: psi, gpm, lbf, in, in³/rev, hp, °F.
@@ -68,26 +68,26 @@ var usCustomarySystem = System{name: "US customary", digits: 4, units: [numSlots
 	slotVolume:                  16 + 1,  // gal
 	slotMass:                    21 + 1,  // lbm
 	slotForce:                   24 + 1,  // lbf
-	slotPressure:                32 + 1,  // psi
-	slotAbsolutePressure:        40 + 1,  // psia
-	slotFlow:                    46 + 1,  // gpm
-	slotVelocity:                50 + 1,  // ft/s
-	slotDisplacement:            55 + 1,  // in³/rev
-	slotRotationalSpeed:         57 + 1,  // rpm
-	slotTorque:                  61 + 1,  // lbf·ft
-	slotPower:                   65 + 1,  // hp
-	slotEnergy:                  72 + 1,  // BTU
-	slotTemperature:             76 + 1,  // °F
-	slotTemperatureDifference:   79 + 1,  // °F
-	slotKinematicViscosity:      85 + 1,  // cSt
-	slotDynamicViscosity:        89 + 1,  // cP
-	slotDensity:                 94 + 1,  // lbm/ft³
-	slotSpecificHeatCapacity:    98 + 1,  // BTU/(lbm·°F)
-	slotHeatTransferCoefficient: 100 + 1, // BTU/(h·ft²·°F)
-	slotThermalConductivity:     102 + 1, // BTU/(h·ft·°F)
-	slotStiffness:               106 + 1, // lbf/in
-	slotFrequency:               107 + 1, // Hz
-	slotAcceleration:            111 + 1, // ft/s²
+	slotPressure:                35 + 1,  // psi
+	slotAbsolutePressure:        51 + 1,  // psia
+	slotFlow:                    59 + 1,  // gpm
+	slotVelocity:                64 + 1,  // ft/s
+	slotDisplacement:            69 + 1,  // in³/rev
+	slotRotationalSpeed:         71 + 1,  // rpm
+	slotTorque:                  75 + 1,  // lbf·ft
+	slotPower:                   79 + 1,  // hp
+	slotEnergy:                  86 + 1,  // BTU
+	slotTemperature:             90 + 1,  // °F
+	slotTemperatureDifference:   93 + 1,  // °F
+	slotKinematicViscosity:      99 + 1,  // cSt
+	slotDynamicViscosity:        103 + 1, // cP
+	slotDensity:                 108 + 1, // lbm/ft³
+	slotSpecificHeatCapacity:    112 + 1, // BTU/(lbm·°F)
+	slotHeatTransferCoefficient: 114 + 1, // BTU/(h·ft²·°F)
+	slotThermalConductivity:     116 + 1, // BTU/(h·ft·°F)
+	slotStiffness:               120 + 1, // lbf/in
+	slotFrequency:               121 + 1, // Hz
+	slotAcceleration:            125 + 1, // ft/s²
 }}
 
 // AppendLength appends q in the system's unit for Length to b.

@@ -4,12 +4,35 @@ package units
 
 // Type descriptions used by parsing and conversion.
 var (
-	typeLength                  = typeInfo{name: "Length", kind: "length", dim: dim(1, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "mm, in, m, cm"}
-	typeArea                    = typeInfo{name: "Area", kind: "area", dim: dim(2, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "cm², in², m², mm²"}
-	typeVolume                  = typeInfo{name: "Volume", kind: "volume", dim: dim(3, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "L, gal, m³, mL"}
-	typeMass                    = typeInfo{name: "Mass", kind: "mass", dim: dim(0, 1, 0, 0, 0), accept: refNone, useOffset: false, examples: "kg, lbm, g, t"}
-	typeForce                   = typeInfo{name: "Force", kind: "force", dim: dim(1, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kN, lbf, N, kgf"}
-	typePressure                = typeInfo{name: "Pressure", kind: "pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refGauge, useOffset: false, examples: "bar, psi, Pa, kPa"}
+	typeLength = typeInfo{name: "Length", kind: "length", dim: dim(1, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "mm, in, m, cm"}
+	typeArea   = typeInfo{name: "Area", kind: "area", dim: dim(2, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "cm², in², m², mm²"}
+	typeVolume = typeInfo{name: "Volume", kind: "volume", dim: dim(3, 0, 0, 0, 0), accept: refNone, useOffset: false, examples: "L, gal, m³, mL"}
+	typeMass   = typeInfo{name: "Mass", kind: "mass", dim: dim(0, 1, 0, 0, 0), accept: refNone, useOffset: false, examples: "kg, lbm, g, t",
+		context: []contextSpelling{
+			{spelling: "ton", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous: write \"t\" for a metric tonne (1000 kg), or the mass in lbm for a US short ton (2000 lb) or a UK long ton (2240 lb)"},
+			{spelling: "tons", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous: write \"t\" for a metric tonne (1000 kg), or the mass in lbm for a US short ton (2000 lb) or a UK long ton (2240 lb)"},
+		}}
+	typeForce = typeInfo{name: "Force", kind: "force", dim: dim(1, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kN, lbf, N, kgf",
+		context: []contextSpelling{
+			{spelling: "lb", unit: 24},
+			{spelling: "lbs", unit: 24},
+			{spelling: "kg", unit: -1, err: ErrDimension, detail: "\"kg\" is a mass; as a force write \"kgf\" (kilogram-force, 9.80665 N)"},
+			{spelling: "t", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+			{spelling: "ton", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+			{spelling: "tons", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+			{spelling: "tonne", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+			{spelling: "tonnes", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+			{spelling: "tonf", unit: -1, err: ErrAmbiguous, detail: "a ton is ambiguous as a force: write \"tf\" for a tonne-force (1000 kgf, 9.807 kN) or \"US tonf\" for a short ton-force (2000 lbf, 8.896 kN); \"UK tonf\" is the long ton-force (2240 lbf)"},
+		}}
+	typePressure = typeInfo{name: "Pressure", kind: "pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refGauge | refDiff, useOffset: false, examples: "bar, psi, Pa, kPa",
+		context: []contextSpelling{
+			{spelling: "inHg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+			{spelling: "in Hg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+			{spelling: "\"Hg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+			{spelling: "mmHg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+			{spelling: "mm Hg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+			{spelling: "Torr", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
+		}}
 	typeAbsolutePressure        = typeInfo{name: "AbsolutePressure", kind: "absolute pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refAbsolute, useOffset: false, hasMin: true, min: 0, minText: "≥ 0 Pa (absolute vacuum)", examples: "bara, psia, Pa(a), kPa(a)"}
 	typeFlow                    = typeInfo{name: "Flow", kind: "volume flow", dim: dim(3, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "L/min, gpm, m³/s, L/s"}
 	typeVelocity                = typeInfo{name: "Velocity", kind: "velocity", dim: dim(1, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "m/s, ft/s, mm/s, in/s"}
@@ -67,26 +90,26 @@ const (
 	metricVolume                  = 12
 	metricMass                    = 18
 	metricForce                   = 23
-	metricPressure                = 30
-	metricAbsolutePressure        = 39
-	metricFlow                    = 43
-	metricVelocity                = 48
-	metricDisplacement            = 54
-	metricRotationalSpeed         = 57
-	metricTorque                  = 59
-	metricPower                   = 64
-	metricEnergy                  = 69
-	metricTemperature             = 75
-	metricTemperatureDifference   = 77
-	metricKinematicViscosity      = 84
-	metricDynamicViscosity        = 88
-	metricDensity                 = 91
-	metricSpecificHeatCapacity    = 97
-	metricHeatTransferCoefficient = 99
-	metricThermalConductivity     = 101
-	metricStiffness               = 105
-	metricFrequency               = 107
-	metricAcceleration            = 109
+	metricPressure                = 33
+	metricAbsolutePressure        = 50
+	metricFlow                    = 56
+	metricVelocity                = 62
+	metricDisplacement            = 68
+	metricRotationalSpeed         = 71
+	metricTorque                  = 73
+	metricPower                   = 78
+	metricEnergy                  = 83
+	metricTemperature             = 89
+	metricTemperatureDifference   = 91
+	metricKinematicViscosity      = 98
+	metricDynamicViscosity        = 102
+	metricDensity                 = 105
+	metricSpecificHeatCapacity    = 111
+	metricHeatTransferCoefficient = 113
+	metricThermalConductivity     = 115
+	metricStiffness               = 119
+	metricFrequency               = 121
+	metricAcceleration            = 123
 )
 
 // unitTable lists every unit: canonical symbol, factor to SI, offset, dimension, reference.
@@ -94,29 +117,32 @@ var unitTable = [...]unitDef{
 	{sym: "m", factor: 1, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"metre", "meter"}},
 	{sym: "mm", factor: 1e-3, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "cm", factor: 1e-2, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "µm", factor: 1e-6, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"μm", "um", "micron"}},
-	{sym: "in", factor: inchM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"inch", "inches"}},
-	{sym: "ft", factor: footM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"foot", "feet"}},
+	{sym: "µm", factor: 1e-6, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"μm", "um", "micron", "microns", "micrometre", "micrometer"}},
+	{sym: "in", factor: inchM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"inch", "inches", "\"", "″"}},
+	{sym: "ft", factor: footM, offset: 0, dim: dim(1, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"foot", "feet", "'", "′"}},
 	{sym: "m²", factor: 1, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"m2", "m^2", "sq m"}},
 	{sym: "mm²", factor: 1e-6, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"mm2", "mm^2", "sq mm"}},
 	{sym: "cm²", factor: 1e-4, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"cm2", "cm^2", "sq cm"}},
 	{sym: "in²", factor: inchM * inchM, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"in2", "in^2", "sq in"}},
 	{sym: "ft²", factor: footM * footM, offset: 0, dim: dim(2, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"ft2", "ft^2", "sq ft"}},
 	{sym: "m³", factor: 1, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3", "m^3", "cu m"}},
-	{sym: "L", factor: 1e-3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"l", "litre", "liter", "dm³", "dm3"}},
+	{sym: "L", factor: 1e-3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"l", "litre", "liter", "litres", "liters", "dm³", "dm3"}},
 	{sym: "mL", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"ml"}},
 	{sym: "cm³", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"cm3", "cm^3", "cc", "ccm"}},
 	{sym: "in³", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"in3", "in^3", "cu in", "cuin", "cid"}},
-	{sym: "gal", factor: usGallonM3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"US gal", "USgal", "usgal", "gal(US)"}},
+	{sym: "gal", factor: usGallonM3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"US gal", "USgal", "usgal", "gal(US)", "gallon", "gallons", "US gallon", "US gallons"}},
 	{sym: "UK gal", factor: ukGallonM3, offset: 0, dim: dim(3, 0, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"UKgal", "imp gal", "gal(UK)"}},
 	{sym: "kg", factor: 1, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "g", factor: 1e-3, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "t", factor: 1e3, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"tonne"}},
-	{sym: "lbm", factor: lbmKg, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"lb"}},
+	{sym: "lbm", factor: lbmKg, offset: 0, dim: dim(0, 1, 0, 0, 0), ref: refNone, noReg: false, aliases: []string{"lb", "lbs"}},
 	{sym: "N", factor: 1, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "kN", factor: 1e3, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "lbf", factor: lbfN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "kgf", factor: kgfN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"kp"}},
+	{sym: "tf", factor: tonneForceN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"tonne-force", "tonnes-force", "t-force", "tonne force", "metric ton-force"}},
+	{sym: "US tonf", factor: shortTonForceN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"ton(US)", "tonf(US)", "short ton-force", "short tons-force", "sh tonf"}},
+	{sym: "UK tonf", factor: longTonForceN, offset: 0, dim: dim(1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"ton(UK)", "tonf(UK)", "long ton-force", "long tons-force"}},
 	{sym: "Pa", factor: 1, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "kPa", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "MPa", factor: 1e6, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"N/mm²", "N/mm2"}},
@@ -125,19 +151,30 @@ var unitTable = [...]unitDef{
 	{sym: "mbar", factor: 1e-3 * barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "psi", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"psig", "psi(g)", "lbf/in²", "lbf/in2"}},
 	{sym: "ksi", factor: 1e3 * psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
-	{sym: "kgf/cm²", factor: kgfN * 1e4, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"kgf/cm2", "at"}},
-	{sym: "inHg", factor: inHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"in Hg", "\"Hg"}},
+	{sym: "kgf/cm²", factor: kgfN * 1e4, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"kgf/cm2", "kgf/cm^2", "at", "kg/cm²", "kg/cm2", "kg/cm^2"}},
+	{sym: "inHg", factor: inHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"in Hg", "\"Hg"}},
+	{sym: "psid", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refDiff, noReg: false, aliases: []string{"psi(d)", "psi d"}},
+	{sym: "bard", factor: barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refDiff, noReg: false, aliases: []string{"bar(d)", "bar d"}},
+	{sym: "kPa(d)", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refDiff, noReg: false, aliases: []string{"kPa d", "kPad"}},
+	{sym: "inHg vac", factor: -inHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"inHgV", "inHg V", "inHg vacuum", "in Hg vac", "in Hg vacuum", "\"Hg vac", "\"Hg vacuum"}},
+	{sym: "mmHg vac", factor: -mmHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"mmHgV", "mmHg vacuum", "mm Hg vac", "mm Hg vacuum"}},
+	{sym: "kPa vac", factor: -1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"kPa vacuum"}},
+	{sym: "bar vac", factor: -barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"bar vacuum"}},
+	{sym: "psi vac", factor: -psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refGauge, noReg: false, aliases: []string{"psi vacuum"}},
 	{sym: "Pa(a)", factor: 1, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"Pa abs"}},
 	{sym: "kPa(a)", factor: 1e3, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"kPaa", "kPa abs"}},
 	{sym: "MPa(a)", factor: 1e6, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"MPa abs"}},
 	{sym: "bara", factor: barPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"bar(a)", "bar a", "bar abs"}},
 	{sym: "psia", factor: psiPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"psi(a)", "psi abs"}},
 	{sym: "atm", factor: atmPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{}},
+	{sym: "mmHg", factor: mmHgPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"mm Hg"}},
+	{sym: "Torr", factor: torrPa, offset: 0, dim: dim(-1, 1, -2, 0, 0), ref: refAbsolute, noReg: false, aliases: []string{"torr"}},
 	{sym: "m³/s", factor: 1, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3/s", "m^3/s"}},
-	{sym: "L/min", factor: 1e-3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"l/min", "lpm", "LPM"}},
+	{sym: "L/min", factor: 1e-3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"l/min", "lpm", "LPM", "litres/min", "liters/min", "litre/min", "liter/min", "litres per minute", "liters per minute", "litre per minute", "liter per minute"}},
 	{sym: "L/s", factor: 1e-3, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"l/s"}},
 	{sym: "m³/h", factor: 1.0 / hourS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"m3/h", "m^3/h"}},
-	{sym: "gpm", factor: usGallonM3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"GPM", "US gpm", "gal/min"}},
+	{sym: "gpm", factor: usGallonM3 / minuteS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"GPM", "US gpm", "gal/min", "gallons per minute", "gallon per minute"}},
+	{sym: "gph", factor: usGallonM3 / hourS, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"gal/h", "gal/hr", "gallons per hour", "gallon per hour"}},
 	{sym: "in³/s", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{"in3/s", "in^3/s"}},
 	{sym: "m/s", factor: 1, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "mm/s", factor: 1e-3, offset: 0, dim: dim(1, 0, -1, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
@@ -148,12 +185,12 @@ var unitTable = [...]unitDef{
 	{sym: "cm³/rev", factor: 1e-6, offset: 0, dim: dim(3, 0, 0, 0, -1), ref: refNone, noReg: false, aliases: []string{"cm3/rev", "cm^3/rev", "cc/rev", "ccm/rev", "mL/rev", "ml/rev"}},
 	{sym: "in³/rev", factor: inchM * inchM * inchM, offset: 0, dim: dim(3, 0, 0, 0, -1), ref: refNone, noReg: false, aliases: []string{"in3/rev", "in^3/rev", "cir", "cu in/rev"}},
 	{sym: "rev/s", factor: 1, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{"rps", "r/s"}},
-	{sym: "rpm", factor: 1.0 / minuteS, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "1/min"}},
+	{sym: "rpm", factor: 1.0 / minuteS, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{"rev/min", "r/min", "RPM", "min⁻¹", "min^-1", "min-1", "1/min", "U/min"}},
 	{sym: "rad/s", factor: 1 / revRad, offset: 0, dim: dim(0, 0, -1, 0, 1), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "N·m", factor: 1, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"Nm", "N*m", "N.m", "N m", "N-m", "N⋅m"}},
 	{sym: "kN·m", factor: 1e3, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"kNm", "kN*m", "kN.m", "kN m"}},
-	{sym: "lbf·ft", factor: lbfN * footM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft"}},
-	{sym: "lbf·in", factor: lbfN * inchM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin"}},
+	{sym: "lbf·ft", factor: lbfN * footM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*ft", "lbf-ft", "lbf ft", "ft·lbf", "ft-lbf", "ft-lb", "lb-ft", "lbft", "ft·lb", "ft.lb", "ft*lb", "ft lb", "lb·ft", "lb.ft", "lb*ft", "lb ft"}},
+	{sym: "lbf·in", factor: lbfN * inchM, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"lbf*in", "lbf-in", "lbf in", "in·lbf", "in-lbf", "in-lb", "lb-in", "lbin", "in·lb", "in.lb", "in*lb", "in lb", "lb·in", "lb.in", "lb*in", "lb in"}},
 	{sym: "W", factor: 1, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "kW", factor: 1e3, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{}},
 	{sym: "hp", factor: hpW, offset: 0, dim: dim(2, 1, -3, 0, 0), ref: refNone, noReg: false, aliases: []string{"HP"}},
@@ -166,8 +203,8 @@ var unitTable = [...]unitDef{
 	{sym: "BTU", factor: btuJ, offset: 0, dim: dim(2, 1, -2, 0, 0), ref: refNone, noReg: false, aliases: []string{"Btu", "btu"}},
 	{sym: "K", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"kelvin"}},
 	{sym: "°R", factor: fahrenheitK, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degR", "R"}},
-	{sym: "°C", factor: 1, offset: celsiusZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degC", "℃", "C", "deg C", "celsius"}},
-	{sym: "°F", factor: fahrenheitK, offset: fahrenheitZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit"}},
+	{sym: "°C", factor: 1, offset: celsiusZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degC", "℃", "C", "deg C", "celsius", "ºC", "° C", "º C"}},
+	{sym: "°F", factor: fahrenheitK, offset: fahrenheitZeroK, dim: dim(0, 0, 0, 1, 0), ref: refPoint, noReg: false, aliases: []string{"degF", "℉", "F", "deg F", "fahrenheit", "ºF", "° F", "º F"}},
 	{sym: "K", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},
 	{sym: "°C", factor: 1, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},
 	{sym: "°F", factor: fahrenheitK, offset: 0, dim: dim(0, 0, 0, 1, 0), ref: refNone, noReg: true, aliases: []string{}},

@@ -144,7 +144,7 @@ func (c Charging) Recommend() (Precharge, error) {
 	if err != nil {
 		return Precharge{}, err
 	}
-	p, err := c.check(fill)
+	p, err := c.check(fn, fill)
 	p.Rule = components.PracticeRule("precharge about 0.9 × the minimum working pressure at the working gas temperature")
 	return p, err
 }
@@ -166,12 +166,12 @@ func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 	if err := validate.Positive(fn, "fill", fill); err != nil {
 		return Precharge{}, err
 	}
-	p, err := c.check(fill)
+	p, err := c.check(fn, fill)
 	p.Rule = components.CallerRule("fill")
 	return p, err
 }
 
-func (c Charging) check(fill units.AbsolutePressure) (Precharge, error) {
+func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, error) {
 	at := func(t units.Temperature) units.AbsolutePressure { return fill * units.AbsolutePressure(t/c.Fill) }
 	p := Precharge{Fill: fill, Working: at(c.Working)}
 	for _, t := range []units.Temperature{c.Coldest, c.Fill, c.Working, c.Hottest} {
@@ -181,7 +181,7 @@ func (c Charging) check(fill units.AbsolutePressure) (Precharge, error) {
 	}
 	slices.SortFunc(p.Points, func(a, b PrechargePoint) int { return cmp.Compare(a.Temperature, b.Temperature) })
 	hot, cold := at(c.Hottest), at(c.Coldest)
-	if err := validate.Result("accumulator.Charging", "precharge", hot); err != nil {
+	if err := validate.Result(fn, "precharge", hot); err != nil {
 		return Precharge{}, err
 	}
 	p.Hot = components.Within(hot, c.Min, components.PhysicsRule("the charge must stay below the minimum working pressure"))

@@ -1,6 +1,7 @@
 package accumulator
 
 import (
+	"math"
 	"strconv"
 	"time"
 
@@ -41,7 +42,7 @@ func (c Cycle) Select(dv units.Volume, sizes components.Series[units.Volume]) (S
 	}
 	s := Sizing{Need: dv, Volume: ch}
 	if !ch.OK() {
-		n := int(float64(v0/sizes.Largest())) + 1
+		n := int(math.Ceil(float64(v0 / sizes.Largest())))
 		s.Findings = components.Findings{components.NewFinding(components.Notice, components.NoHazard, "accumulator.no-size", ch.Rule,
 			"no size of %v reaches %v: use %v accumulators of %v in parallel, or a wider pressure range", sizes.Name(), v0, strconv.Itoa(n), sizes.Largest())}
 		w, err := StoredEnergy(v0, c.Precharge, c.Max, c.Charge)
@@ -166,8 +167,10 @@ func (s Supplement) Size() (SupplementSizing, error) {
 	out.Pump = s.Pump
 	if out.Pump == 0 {
 		out.Pump = out.Mean
-	} else if err := validate.InRange(fn, "Pump", s.Pump, out.Mean, units.Flow(1e300)); err != nil {
+	} else if err := validate.Finite(fn, "Pump", s.Pump); err != nil {
 		return SupplementSizing{}, err
+	} else if s.Pump < out.Mean {
+		return SupplementSizing{}, validate.Fail(fn, "Pump", s.Pump, "≥ the mean demand "+out.Mean.String()+" (or 0 to use it)")
 	}
 	out.Swing = s.swing(out.Pump)
 	if out.Swing <= 0 {

@@ -1,7 +1,6 @@
 package actuator
 
 import (
-	"fmt"
 	"math"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -34,16 +33,6 @@ const (
 	Clevis                    // cap clevis, eye or spherical bearing: pinned
 )
 
-var bodyNames = [...]string{"flange", "feet", "trunnion", "clevis"}
-
-// String returns the mounting's name: "trunnion".
-func (m BodyMount) String() string {
-	if int(m) < len(bodyNames) {
-		return bodyNames[m]
-	}
-	return fmt.Sprintf("BodyMount(%d)", uint8(m))
-}
-
 func (m BodyMount) rigid() bool { return m == Flange || m == Feet }
 
 // RodEnd is how the rod end meets the load.
@@ -55,16 +44,6 @@ const (
 	RodFixed                // rod end rigidly fixed to a load guided along the axis
 	RodFree                 // rod end pushing an unguided load, free to move sideways
 )
-
-var rodEndNames = [...]string{"pinned and guided", "fixed and guided", "free"}
-
-// String returns the condition in words: "pinned and guided".
-func (e RodEnd) String() string {
-	if int(e) < len(rodEndNames) {
-		return rodEndNames[e]
-	}
-	return fmt.Sprintf("RodEnd(%d)", uint8(e))
-}
 
 // EffectiveLengthFactor returns Euler's effective-length factor K for a
 // body mount and rod end, the free buckling length being K·L:
@@ -114,17 +93,6 @@ const (
 	Johnson                       // J. B. Johnson's parabola for a stocky rod
 )
 
-// String returns "Euler" or "Johnson".
-func (m BucklingMethod) String() string {
-	switch m {
-	case Euler:
-		return "Euler"
-	case Johnson:
-		return "Johnson"
-	}
-	return fmt.Sprintf("BucklingMethod(%d)", uint8(m))
-}
-
 // CriticalLoad returns the buckling load of a solid round steel rod of
 // diameter d over free buckling length lk = K·L, with Young's modulus e and
 // yield strength yield, and the method that applies. With the radius of
@@ -135,9 +103,13 @@ func (m BucklingMethod) String() string {
 //	λ < λ_c  Johnson:  P = A·σ_y·(1 − σ_y·λ²/(4π²E)), A = π·d²/4
 //
 // Johnson's parabola meets Euler's curve tangentially at λ_c, where both
-// give σ_y/2 (Johnson's parabolic formula; Shigley's Mechanical Engineering
-// Design, section on columns, from memory). All inputs must be finite and
-// > 0; errors match units.ErrRange.
+// give σ_y/2 (J. B. Johnson's parabolic column formula, as in Shigley's
+// Mechanical Engineering Design, section on columns, from memory; the form
+// and the tangency were confirmed in the Wikipedia article "Johnson's
+// parabolic formula"). The rod is taken straight and centrally loaded; side
+// load, eccentric mounting and a bent rod lower the real critical load,
+// which the safety factor must cover. All inputs must be finite and > 0;
+// errors match units.ErrRange.
 func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod, error) {
 	const fn = "actuator.CriticalLoad"
 	for _, c := range [...]struct {
@@ -274,7 +246,7 @@ type BucklingCheck struct {
 func (c Column) Check() (BucklingCheck, error) {
 	const fn = "actuator.Column.Check"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return BucklingCheck{}, err
+		return BucklingCheck{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return BucklingCheck{}, err
@@ -296,7 +268,7 @@ func (c Column) check() BucklingCheck {
 	r.Thrust = c.Relief.TimesArea(c.Cylinder.Area(Extend))
 	r.Safety = components.Reaches(float64(r.Critical/r.Thrust), n, nr)
 	if !r.Safety.OK() {
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling", nr,
 			"the %v rod buckles at %v (%v), only %v times the relief-valve thrust of %v; choose a thicker rod, a shorter free length or a stiffer mounting",
 			c.Cylinder.Rod, r.Critical, r.Method.String(), r.Safety.Value, r.Thrust)}
@@ -322,7 +294,7 @@ type RodChoice struct {
 func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, error) {
 	const fn = "actuator.Column.MinimumRod"
 	if err := c.Cylinder.validate(fn); err != nil {
-		return RodChoice{}, err
+		return RodChoice{}, prefixed(err, "Column.")
 	}
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return RodChoice{}, err
@@ -340,7 +312,7 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
 		r.Rod.Chosen = 0
 		_, _, _, _, n, nr := c.setup()
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling-no-rod", nr,
 			"no standard rod below the %v bore reaches a buckling safety factor of %v (at least %v is needed); shorten the free length, stiffen the mounting or choose a larger bore",
 			c.Cylinder.Bore, n, least)}

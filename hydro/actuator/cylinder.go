@@ -1,7 +1,6 @@
 package actuator
 
 import (
-	"fmt"
 	"math"
 	"time"
 
@@ -18,17 +17,6 @@ const (
 	Extend  Direction = iota // oil into the cap side (the annulus of a double-rod cylinder)
 	Retract                  // oil into the annulus side
 )
-
-// String returns "extend" or "retract".
-func (d Direction) String() string {
-	switch d {
-	case Extend:
-		return "extend"
-	case Retract:
-		return "retract"
-	}
-	return fmt.Sprintf("Direction(%d)", uint8(d))
-}
 
 // RodEnds says whether the rod leaves the cylinder at one end or both.
 type RodEnds uint8

@@ -1,7 +1,9 @@
-// Package actuator sizes and checks hydraulic cylinders: the standard bore
-// and rod that move a load at the chosen pressure, and what a first pass
-// forgets — the rod side, friction and acceleration, the return flow,
-// regeneration, intensification and rod buckling.
+// Package actuator sizes and checks hydraulic cylinders and motors: the
+// standard bore and rod, or the displacement, that move a load at the
+// chosen pressure and speed, and what a first pass forgets — the rod side,
+// friction and acceleration, the return flow, regeneration,
+// intensification, rod buckling, the stiffness of the oil, the real stroke
+// time and the starting torque.
 //
 // # Cylinders
 //
@@ -59,6 +61,46 @@
 // reported; falling short of it is a failed check with a warning, not an
 // error. [Column.MinimumRod] finds the smallest standard rod that passes.
 //
+// # Stiffness and natural frequency
+//
+// An [OilSpring] is a cylinder holding a mass on its two oil columns, each
+// the swept volume at the piston's position plus a dead volume (ports,
+// manifold, lines). The columns act in parallel:
+//
+//	k(x) = B₁·A₁²/(A₁·x + V₀₁) + B₂·A₂²/(A₂·(S − x) + V₀₂),  f = (1/2π)·√(k/m)
+//
+// [OilSpring.Lowest] finds the softest point in closed form (k is convex
+// in x), and the shortest ramp time the usual rule allows there,
+// t = 18/ω₀, about three natural periods (common practice, a rule of thumb
+// that the valve and the control refine). This is why actuator imports
+// package fluid, and only for this: the stiffness of oil is its effective
+// bulk modulus, fluid.EffectiveBulk (the liquid, entrained air and hose or
+// tube compliance), taken at each chamber's pressure; one implementation
+// of that physics lives in fluid.
+//
+// # Cycle time and cushioning
+//
+// A [Profile] accelerates, runs at constant speed and decelerates, or,
+// over a short travel, only accelerates and decelerates (a triangular
+// profile); [Cylinder.Move] times a stroke and gives the peak inlet and
+// return flows the profile asks for. [Cylinder.Cushioning] gives the
+// average pressure a cushion builds to stop the moving mass over its length
+// while the drive pressure and the load still push, against the cylinder's
+// rating; real cushions peak above the average.
+//
+// # Motors
+//
+// A [Motor] is a displacement D with volumetric and mechanical
+// efficiencies (and a lower starting efficiency, 0.9 × the running one
+// unless given, common practice):
+//
+//	T = D·Δp·η_m/(2π)    n = Q·η_v/D    Q = D·n/η_v    P = Δp·Q·η_v·η_m
+//
+// [MotorDuty.Size] sizes the displacement for the running and the
+// breakaway torque and chooses from the caller's displacements. A hydraulic
+// motor leaks, so it cannot hold a load still: a duty whose load can turn
+// the motor carries the brake caution.
+//
 // # Cautions
 //
 // A cylinder that raises or lowers a load holds it on trapped oil: a burst
@@ -74,6 +116,7 @@
 // All functions and methods are safe for concurrent use. Functions that
 // return an error validate every input and return errors matching
 // units.ErrRange that name the parameter or field; on error they return the
-// zero value. Sizing, buckling checks and the cylinder calculations
-// allocate nothing unless they return findings or fail.
+// zero value. Sizing, buckling checks, the oil spring, motions and the
+// cylinder and motor calculations allocate nothing unless they return
+// findings or fail.
 package actuator

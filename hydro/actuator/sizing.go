@@ -243,6 +243,13 @@ type CylinderSize struct {
 
 	Buckling *BucklingCheck // the buckling check of the chosen rod, when Duty.Buckling is set
 
+	// Flow and ReturnFlow are the chosen cylinder's inlet and outlet flows
+	// at Duty.Speed, v·A_in and v·A_out: what the pump and valve must
+	// deliver and what the return path must pass (φ times the inlet flow
+	// on a single-rod retract). Both are 0 without a speed or a cylinder;
+	// ReturnFlow is 0 for a single-acting cylinder.
+	Flow, ReturnFlow units.Flow
+
 	Findings components.Findings
 }
 
@@ -313,6 +320,11 @@ func (d Duty) Size() (CylinderSize, error) {
 	if !found {
 		r.Bore.Chosen, r.Cylinder, r.Buckling = 0, Cylinder{}, nil
 		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, need)
+	} else if d.Speed > 0 {
+		r.Flow = d.Speed.TimesArea(r.Cylinder.Area(d.Direction))
+		if d.Action == DoubleActing {
+			r.ReturnFlow = d.Speed.TimesArea(r.Cylinder.OutletArea(d.Direction))
+		}
 	}
 	r.Findings = d.findings(r, bores)
 	return r, nil

@@ -95,6 +95,13 @@ func TestSizePullStepsUp(t *testing.T) {
 	if len(r.Findings.Topic("actuator.second-choice-bore")) != 1 {
 		t.Errorf("findings %v; want the second-choice notice for 110 mm", r.Findings)
 	}
+	// At 0.1 m/s the 110/80 annulus takes 0.1·4476.8 mm² = 26.86 L/min and
+	// the cap side returns 0.1·9503.3 mm² = 57.02 L/min.
+	d.Speed = 0.1
+	r, _ = d.Size()
+	if !near(r.Flow, 26.861*units.LitrePerMinute, 1e-4) || !near(r.ReturnFlow, 57.020*units.LitrePerMinute, 1e-4) {
+		t.Errorf("flows %v, %v; want 26.86 and 57.02 L/min", r.Flow, r.ReturnFlow)
+	}
 }
 
 // TestSizeRoundTrip: for a spread of duties, the chosen cylinder delivers at

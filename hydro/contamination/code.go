@@ -2,6 +2,7 @@ package contamination
 
 import (
 	"fmt"
+	"strconv"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
@@ -9,17 +10,10 @@ import (
 
 // ErrOrder reports cumulative counts or scale numbers that grow with particle
 // size: a count at ≥6 µm(c) includes every particle at ≥14 µm(c), so c4 ≥ c6
-// ≥ c14 must hold. Errors that match ErrOrder also match units.ErrRange.
-var ErrOrder error = &rangeSentinel{"cumulative counts grow with particle size"}
-
-// rangeSentinel is a sentinel error that also matches units.ErrRange.
-type rangeSentinel struct{ msg string }
-
-// Error implements the error interface.
-func (e *rangeSentinel) Error() string { return e.msg }
-
-// Is reports whether target is units.ErrRange.
-func (e *rangeSentinel) Is(target error) bool { return target == units.ErrRange }
+// ≥ c14 must hold. ErrOrder matches units.ErrRange, and the errors that
+// carry it (except ParseCode's) are *units.RangeError values naming the
+// number that grows.
+var ErrOrder error = validate.Sentinel("cumulative counts grow with particle size")
 
 // FewCounted is the raw count below which ISO 4406 marks a scale number with
 // "≥": fewer than 20 particles counted in that size range (ISO 4406:2021).
@@ -173,36 +167,41 @@ func (c Code) IsZero() bool { return c == Code{} }
 
 // Validate checks that c is well formed: a known form, numbers in normal
 // form, N[2] zero in the microscope form, at least one size measured, and
-// numbers that do not grow with particle size. The error matches
+// numbers that do not grow with particle size. The error is a
+// *units.RangeError naming the field (Form, N[1], …) and matches
 // units.ErrRange (and ErrOrder for the last rule).
-func (c Code) Validate() error {
-	const fn = "contamination.Code.Validate"
+func (c Code) Validate() error { return c.validate("contamination.Code.Validate", "") }
+
+// validate is Validate for function fn, naming the fields prefix+field
+// ("target.N[1]" when the code is a caller's argument target).
+func (c Code) validate(fn, prefix string) error {
 	if c.Form != Counter && c.Form != Microscope {
-		return validate.Fail(fn, "Form", float64(c.Form), "Counter or Microscope (the zero Code is no code)")
+		return validate.Fail(fn, prefix+"Form", float64(c.Form), "Counter or Microscope (the zero Code is no code)")
 	}
 	if c.Form == Microscope && c.N[2] != (Number{}) {
-		return numberError(fn, 2, c.N[2], "zero (Number{}) in the microscope form")
+		return numberError(fn, prefix, 2, c.N[2], "zero (Number{}) in the microscope form")
 	}
 	measured := false
 	for i := range c.Len() {
 		if !c.N[i].valid() {
-			return numberError(fn, i, c.N[i], "a number in normal form (scale 0…28; 28 with MarkAbove; 0 with MarkNotMeasured or MarkTooMany)")
+			return numberError(fn, prefix, i, c.N[i], "a number in normal form (scale 0…28; 28 with MarkAbove; 0 with MarkNotMeasured or MarkTooMany)")
 		}
 		measured = measured || c.N[i].Mark != MarkNotMeasured
 	}
 	if !measured {
-		return validate.Fail(fn, "N", 0.0, "at least one size measured")
+		return &units.RangeError{Func: fn, Param: prefix + "N", Value: c.String(), Valid: "at least one size measured"}
 	}
 	if i, j, ok := c.ordered(); !ok {
-		return c.orderError(fn, fmt.Sprintf("N[%d]", i), fmt.Sprintf("N[%d]", j), i, j)
+		return c.orderError(fn, fmt.Sprintf("%sN[%d]", prefix, i), fmt.Sprintf("%sN[%d]", prefix, j), i, j)
 	}
 	return nil
 }
 
 // numberError reports number i of a code, shown with its mark, that is not
 // what valid asks for.
-func numberError(fn string, i int, n Number, valid string) error {
-	return &units.RangeError{Func: fn, Param: fmt.Sprintf("N[%d]", i), Value: fmt.Sprintf("Number{Scale: %d, Mark: %d}", n.Scale, n.Mark), Valid: valid}
+func numberError(fn, prefix string, i int, n Number, valid string) error {
+	return &units.RangeError{Func: fn, Param: fmt.Sprintf("%sN[%d]", prefix, i),
+		Value: fmt.Sprintf("Number{Scale: %d, Mark: %d}", n.Scale, n.Mark), Valid: valid}
 }
 
 // ordered reports whether the measured numbers of c do not grow with size;
@@ -223,25 +222,41 @@ func (c Code) ordered() (small, large int, ok bool) {
 }
 
 // orderError reports numbers i and j of c that grow with size; pi and pj
-// name them as the caller's parameters.
+// name them as the caller's parameters. The error names pj, the number at
+// the larger size, and asks for at most the number pi: "n6 = 16 (≥6 µm(c))
+// is out of range: want ≤ n4 = 13 (≥4 µm(c))".
 func (c Code) orderError(fn, pi, pj string, i, j int) error {
-	return fmt.Errorf("%s: %s = %v (%s) < %s = %v (%s); want %s ≥ %s: %w (%w)", fn,
-		pi, c.N[i], c.Form.SizeLabel(i), pj, c.N[j], c.Form.SizeLabel(j), pi, pj, ErrOrder, units.ErrRange)
+	return orderError(fn, pi, pj, c.N[i].String(), c.N[j].String(), c.Form.SizeLabel(i), c.Form.SizeLabel(j))
+}
+
+// orderError reports value vj of parameter pj (at size labelled sj) above
+// value vi of pi (at the smaller size si): a *units.RangeError for pj that
+// also matches ErrOrder.
+func orderError(fn, pi, pj, vi, vj, si, sj string) error {
+	return validate.Kind(&units.RangeError{Func: fn, Param: pj, Value: vj + " (" + sj + ")",
+		Valid: "≤ " + pi + " = " + vi + " (" + si + ")"}, ErrOrder)
 }
 
 // MakeCode returns the counter code n4/n6/n14 (≥4/≥6/≥14 µm(c)) of plain
-// scale numbers. Each must be 0…28 and n4 ≥ n6 ≥ n14; otherwise the error
-// matches units.ErrRange (and ErrOrder for the ordering).
+// scale numbers. Each must be 0…28 and n4 ≥ n6 ≥ n14; otherwise the code is
+// the zero Code and the error matches units.ErrRange (and ErrOrder for the
+// ordering).
 func MakeCode(n4, n6, n14 int) (Code, error) {
 	c := Code{Form: Counter, N: [3]Number{{Scale: n4}, {Scale: n6}, {Scale: n14}}}
-	return c, c.checkPlain("contamination.MakeCode", "n4", "n6", "n14")
+	if err := c.checkPlain("contamination.MakeCode", "n4", "n6", "n14"); err != nil {
+		return Code{}, err
+	}
+	return c, nil
 }
 
 // MakeMicroscopeCode returns the microscope code n5/n15 (≥5/≥15 µm) of plain
 // scale numbers, with the rules and errors of MakeCode.
 func MakeMicroscopeCode(n5, n15 int) (Code, error) {
 	c := Code{Form: Microscope, N: [3]Number{{Scale: n5}, {Scale: n15}}}
-	return c, c.checkPlain("contamination.MakeMicroscopeCode", "n5", "n15", "")
+	if err := c.checkPlain("contamination.MakeMicroscopeCode", "n5", "n15", ""); err != nil {
+		return Code{}, err
+	}
+	return c, nil
 }
 
 // checkPlain validates the plain numbers of a code built by MakeCode.
@@ -296,12 +311,17 @@ func checkCounts(fn, nA, nB, nC string, a, b, c float64) error {
 		return err
 	}
 	if a < b {
-		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nA, a, nB, b, nA, nB, ErrOrder, units.ErrRange)
+		return countOrderError(fn, nA, nB, a, b)
 	}
 	if b < c {
-		return fmt.Errorf("%s: %s = %g < %s = %g; want %s ≥ %s: %w (%w)", fn, nB, b, nC, c, nB, nC, ErrOrder, units.ErrRange)
+		return countOrderError(fn, nB, nC, b, c)
 	}
 	return nil
+}
+
+// countOrderError reports count b of parameter nb above count a of na.
+func countOrderError(fn, na, nb string, a, b float64) error {
+	return validate.Kind(validate.Fail(fn, nb, b, "≤ "+na+" = "+strconv.FormatFloat(a, 'g', -1, 64)), ErrOrder)
 }
 
 // CodeFromSample returns the counter code for raw cumulative counts n4, n6,

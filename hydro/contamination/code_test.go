@@ -1,13 +1,13 @@
 package contamination
 
 import (
-	"encoding/json"
 	"errors"
 	"math"
 	"math/rand/v2"
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -176,183 +176,6 @@ func TestMoreParticlesNeverLowerCode(t *testing.T) {
 	}
 }
 
-func TestParseCode(t *testing.T) {
-	cases := []struct {
-		in   string
-		want Code
-		out  string // String; "" means the input itself
-	}{
-		// Plain counter codes [S].
-		{"18/16/13", counter(num(18), num(16), num(13)), ""},
-		{"19/16/10", counter(num(19), num(16), num(10)), ""},
-		{"0/0/0", counter(num(0), num(0), num(0)), ""},
-		{"28/28/28", counter(num(28), num(28), num(28)), ""},
-		// Sizes not measured [M], few counted [S] in both spellings.
-		{"-/16/13", counter(notMeasured, num(16), num(13)), ""},
-		{"14/12/≥7", counter(num(14), num(12), few(7)), ""},
-		{"14/12/>=7", counter(num(14), num(12), few(7)), "14/12/≥7"},
-		{"≥3/≥1/≥0", counter(few(3), few(1), few(0)), ""},
-		// Above the table and too many to count [M].
-		{">28/26/20", counter(above28, num(26), num(20)), ""},
-		{"*/>28/28", counter(tooMany, above28, num(28)), ""},
-		// Two-number microscope codes [S].
-		{"16/13", micro(num(16), num(13)), ""},
-		{"-/≥3", micro(notMeasured, few(3)), ""},
-		// Spaces, leading zeros.
-		{" 18 / 16 /13\t", counter(num(18), num(16), num(13)), "18/16/13"},
-		{"08/07/06", counter(num(8), num(7), num(6)), "8/7/6"},
-	}
-	for _, c := range cases {
-		got, err := ParseCode(c.in)
-		if err != nil || got != c.want {
-			t.Errorf("ParseCode(%q) = %#v, %v; want %#v", c.in, got, err, c.want)
-			continue
-		}
-		want := c.out
-		if want == "" {
-			want = c.in
-		}
-		if s := got.String(); s != want {
-			t.Errorf("ParseCode(%q).String() = %q, want %q", c.in, s, want)
-		}
-		if a := got.ASCII(); strings.ContainsRune(a, '≥') || strings.ReplaceAll(a, ">=", "≥") != want {
-			t.Errorf("ParseCode(%q).ASCII() = %q", c.in, a)
-		}
-	}
-}
-
-func TestParseCodeBadInput(t *testing.T) {
-	cases := []struct {
-		in  string
-		pos int
-		err error
-	}{
-		// Malformed.
-		{"", 0, units.ErrSyntax},
-		{"18", 2, units.ErrSyntax},
-		{"18/", 3, units.ErrSyntax},
-		{"/16/13", 0, units.ErrSyntax},
-		{"18/16/13/10", 9, units.ErrSyntax},
-		{"18-16-13", 2, units.ErrSyntax},
-		{"18/16/13 x", 9, units.ErrSyntax},
-		{"18/16/1 3", 8, units.ErrSyntax},
-		{"a/16/13", 0, units.ErrSyntax},
-		{"18/16/≥", 9, units.ErrSyntax},
-		{"18/16/>27", 6, units.ErrSyntax},
-		{">280/20/10", 0, units.ErrSyntax},
-		{"118/16/13", 0, units.ErrSyntax},
-		{"18/+16/13", 3, units.ErrSyntax},
-		{"18/16/\xff", 6, units.ErrSyntax},
-		{"-/-/-", 0, units.ErrSyntax},
-		{"ISO 18/16/13", 0, units.ErrSyntax},
-		{"18//13", 3, units.ErrSyntax},
-		{"18/16/13/", 9, units.ErrSyntax},
-		{"14/12/≥≥7", 9, units.ErrSyntax},
-		{"18/16/13\n", 8, units.ErrSyntax},
-		// Look-alike characters: fullwidth digits and slash, ⩾ and ≧ for ≥,
-		// a no-break space.
-		{"１８/16/13", 0, units.ErrSyntax},
-		{"18／16/13", 2, units.ErrSyntax},
-		{"18/16/⩾7", 6, units.ErrSyntax},
-		{"18/16/≧7", 6, units.ErrSyntax},
-		{"18/16/\u00a013", 6, units.ErrSyntax},
-		// Out of the table.
-		{"29/16/13", 0, units.ErrRange},
-		{"29/1/0", 0, units.ErrRange},
-		{"18/16/99", 6, units.ErrRange},
-		// Numbers growing with size.
-		{"13/16/18", 3, ErrOrder},
-		{"18/16/*", 6, ErrOrder},
-		{"13/-/ 16", 6, ErrOrder},
-		{"13/16", 3, ErrOrder},
-	}
-	for _, c := range cases {
-		_, err := ParseCode(c.in)
-		var pe *units.ParseError
-		if !errors.As(err, &pe) || !errors.Is(err, c.err) || pe.Pos != c.pos || pe.Input != c.in {
-			t.Errorf("ParseCode(%q): err = %v; want *units.ParseError at %d matching %v", c.in, err, c.pos, c.err)
-			continue
-		}
-		if !strings.Contains(err.Error(), `"`) || !strings.HasPrefix(err.Error(), "contamination.ParseCode: ") {
-			t.Errorf("ParseCode(%q): message %q does not quote the input", c.in, err)
-		}
-		if c.err == ErrOrder && !errors.Is(err, units.ErrRange) {
-			t.Errorf("ParseCode(%q): order error does not match units.ErrRange", c.in)
-		}
-	}
-}
-
-// TestCodeRoundTrip formats every plain counter code and many marked ones
-// and parses them back.
-func TestCodeRoundTrip(t *testing.T) {
-	marks := []Number{notMeasured, above28, tooMany}
-	for a := range 29 {
-		for b := 0; b <= a; b += 3 {
-			for c := 0; c <= b; c += 2 {
-				codes := []Code{
-					counter(num(a), num(b), num(c)),
-					counter(num(a), few(b), few(c)),
-					micro(few(a), num(b)),
-				}
-				for _, m := range marks {
-					codes = append(codes, counter(m, num(b), num(c)))
-				}
-				for _, code := range codes {
-					roundTrip(t, code)
-				}
-			}
-		}
-	}
-}
-
-func roundTrip(t *testing.T, code Code) {
-	t.Helper()
-	if err := code.Validate(); err != nil {
-		t.Fatalf("%#v: %v", code, err)
-	}
-	for _, s := range []string{code.String(), code.ASCII()} {
-		back, err := ParseCode(s)
-		if err != nil || back != code {
-			t.Fatalf("ParseCode(%q) = %#v, %v; want %#v", s, back, err, code)
-		}
-	}
-	text, err := code.MarshalText()
-	if err != nil || string(text) != code.String() {
-		t.Fatalf("MarshalText(%v) = %q, %v", code, text, err)
-	}
-	var back Code
-	if err := back.UnmarshalText(text); err != nil || back != code {
-		t.Fatalf("UnmarshalText(%q) = %v, %v", text, back, err)
-	}
-}
-
-func TestCodeJSON(t *testing.T) {
-	type sample struct {
-		Tank   Code `json:"tank"`
-		Target Code `json:"target"`
-	}
-	in := sample{counter(num(19), num(16), few(10)), micro(num(16), num(13))}
-	data, err := json.Marshal(in)
-	if err != nil {
-		t.Fatal(err)
-	}
-	if want := `{"tank":"19/16/≥10","target":"16/13"}`; string(data) != want {
-		t.Errorf("json = %s, want %s", data, want)
-	}
-	var out sample
-	if err := json.Unmarshal(data, &out); err != nil || out != in {
-		t.Errorf("json round trip = %v, %v; want %v", out, err, in)
-	}
-	err = json.Unmarshal([]byte(`{"tank":"19/21/10"}`), &out)
-	if !errors.Is(err, ErrOrder) || !strings.Contains(err.Error(), "Code.UnmarshalText") {
-		t.Errorf("json bad code: err = %v", err)
-	}
-	keep := out
-	if err := out.Tank.UnmarshalText([]byte("nonsense")); err == nil || out != keep {
-		t.Errorf("UnmarshalText changed the code on error: %v", out)
-	}
-}
-
 func TestCodeLabels(t *testing.T) {
 	if Counter.SizeLabel(2) != "≥14 µm(c)" || Microscope.SizeLabel(0) != "≥5 µm" || Microscope.SizeLabel(2) != "" || Form(9).SizeLabel(0) != "" {
 		t.Error("SizeLabel")
@@ -395,20 +218,56 @@ func BenchmarkCodeFromCounts(b *testing.B) {
 	_ = sink
 }
 
-func BenchmarkParseCode(b *testing.B) {
-	b.ReportAllocs()
-	var sink Code
-	for b.Loop() {
-		sink, _ = ParseCode("14/12/≥7")
+// An ordering error is a range error for the number at the larger size:
+// it names that parameter and its value with its size, and the smaller
+// size's parameter and value in the valid range, and matches ErrOrder.
+func TestOrderErrorsNameNumbers(t *testing.T) {
+	mk := func(c Code, err error) error { return err }
+	cases := []struct {
+		name, fn, param, value, valid string
+		err                           error
+	}{
+		{"MakeCode", "contamination.MakeCode", "n6", "16 (≥6 µm(c))", "≤ n4 = 13 (≥4 µm(c))", mk(MakeCode(13, 16, 18))},
+		{"MakeMicroscopeCode", "contamination.MakeMicroscopeCode", "n15", "11 (≥15 µm)", "≤ n5 = 10 (≥5 µm)", mk(MakeMicroscopeCode(10, 11))},
+		{"Validate", "contamination.Code.Validate", "N[1]", "12 (≥6 µm(c))", "≤ N[0] = 10 (≥4 µm(c))", counter(num(10), num(12), num(1)).Validate()},
+		{"Validate marks", "contamination.Code.Validate", "N[1]", ">28 (≥6 µm(c))", "≤ N[0] = 28 (≥4 µm(c))", counter(num(28), above28, num(1)).Validate()},
+		{"Validate across -", "contamination.Code.Validate", "N[2]", "12 (≥14 µm(c))", "≤ N[0] = 10 (≥4 µm(c))", counter(num(10), notMeasured, num(12)).Validate()},
+		// Counts: the order error on counts says what is wanted, as the
+		// errors on codes do.
+		{"CodeFromCounts", "contamination.CodeFromCounts", "c6", "20", "≤ c4 = 10", mk(CodeFromCounts(10, 20, 1))},
+		{"CodeFromSample", "contamination.CodeFromSample", "n14", "6", "≤ n6 = 5", mk(CodeFromSample(10, 5, 6, units.Millilitre))},
+		{"MicroscopeCodeFromCounts", "contamination.MicroscopeCodeFromCounts", "c15", "2", "≤ c5 = 1", mk(MicroscopeCodeFromCounts(1, 2))},
 	}
-	_ = sink
+	for _, c := range cases {
+		if !errors.Is(c.err, ErrOrder) {
+			t.Errorf("%s: err = %v, want ErrOrder", c.name, c.err)
+		}
+		re := checktest.RangeErrorIn(t, c.err, c.fn, c.param)
+		if re != nil && (re.Value != c.value || re.Valid != c.valid) {
+			t.Errorf("%s: value %q, valid %q; want %q, %q", c.name, re.Value, re.Valid, c.value, c.valid)
+		}
+	}
+	// A constructor that fails returns the zero Code.
+	if c, _ := MakeCode(13, 16, 18); c != (Code{}) {
+		t.Errorf("MakeCode with an error = %#v, want the zero Code", c)
+	}
+	if c, _ := MakeMicroscopeCode(30, 1); c != (Code{}) {
+		t.Errorf("MakeMicroscopeCode with an error = %#v, want the zero Code", c)
+	}
 }
 
-func BenchmarkCodeAppendText(b *testing.B) {
-	b.ReportAllocs()
-	code := counter(num(19), num(16), few(10))
-	var buf [32]byte
-	for b.Loop() {
-		_, _ = code.AppendText(buf[:0])
+// TestBadNumberErrorsShowMark: a number refused for its mark is shown with
+// its mark, not as a bare scale that looks valid.
+func TestBadNumberErrorsShowMark(t *testing.T) {
+	for _, c := range []Code{
+		micro(num(10), num(2)).with(2, Number{Mark: MarkAbove}),
+		counter(Number{Scale: 3, Mark: MarkNotMeasured}, num(1), num(1)),
+	} {
+		err := c.Validate()
+		if !errors.Is(err, units.ErrRange) || !strings.Contains(err.Error(), "Mark:") {
+			t.Errorf("%#v.Validate() = %v; want an error that shows the mark", c, err)
+		}
 	}
 }
+
+func (c Code) with(i int, n Number) Code { c.N[i] = n; return c }

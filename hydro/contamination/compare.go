@@ -1,17 +1,19 @@
 package contamination
 
 import (
-	"errors"
 	"fmt"
 	"math"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/internal/validate"
+	"github.com/hydrosize/hydrosize/units"
 )
 
 // ErrForm reports two codes of different forms (counter and microscope)
 // that were to be compared: their sizes differ, so their numbers do not
-// compare.
-var ErrForm = errors.New("codes of different forms")
+// compare. It matches units.ErrRange, and Compare's error is a
+// *units.RangeError naming target.
+var ErrForm error = validate.Sentinel("codes of different forms")
 
 // Range returns the count range, in particles per mL, that number i of c
 // stands for: more than above, up to and including upTo (ISO 4406:2021,
@@ -70,6 +72,16 @@ type SizeCheck struct {
 	Size           string // e.g. "≥6 µm(c)"
 	Sample, Target Number
 	Status         Status
+	// Check holds the upper bound of the sample number's count range
+	// (Value) against that of the target number (Limit), in particles per
+	// mL (ISO 4406:2021, Table 1), at most: it passes when the sample
+	// meets the target, so it agrees with Status. Its Ratio is the ratio
+	// of the bounds (for 19 against 16: 5000/640 = 7.8125, against the
+	// nominal 8). For ">28" and "*" the sample's value is the smallest
+	// count above 2 500 000 (the count is "more than" that), so the check
+	// fails against every target and the ratio is a lower bound. The zero
+	// Check when the size is not compared.
+	Check components.Check[float64]
 	// Classes is the sample's number minus the target's: positive classes
 	// over the target (dirtier), negative under it (cleaner).
 	Classes int
@@ -83,11 +95,6 @@ type SizeCheck struct {
 	// Factor is the nominal count ratio 2^Classes: each scale number is
 	// about a doubling of the count (ISO 4406).
 	Factor float64
-	// BoundRatio is the ratio of the upper bounds of the two numbers' count
-	// ranges in ISO 4406:2021, Table 1 (for 19 against 16: 5000/640 =
-	// 7.8125, against the nominal 8). For ">28" and "*" the sample's bound
-	// is 2 500 000 and the ratio is a lower bound.
-	BoundRatio float64
 }
 
 // Comparison is the result of Compare: one SizeCheck per number of the
@@ -102,6 +109,10 @@ type Comparison struct {
 	Meets bool
 	// Worst is the largest Classes over the compared sizes (0 when none).
 	Worst int
+	// Findings: a caution for each size over the target
+	// (TopicOverTarget, hazard Contamination) and a notice for each "≥"
+	// number that meets it only as read (TopicFewCounted).
+	Findings components.Findings
 }
 
 // Compare checks sample against target size by size. A size is compared
@@ -111,30 +122,37 @@ type Comparison struct {
 // flagged AtLeast.
 //
 // The codes must pass Validate and share a form (ErrForm); target numbers
-// with "≥", ">28" or "*" give an error matching units.ErrRange. Compare does
-// not allocate unless it fails.
+// with "≥", ">28" or "*" give an error matching units.ErrRange. Errors are
+// *units.RangeError values naming sample or target (and the field:
+// sample.N[1], target.Form). Compare allocates only when it fails or has
+// findings to report.
 func Compare(sample, target Code) (Comparison, error) {
 	const fn = "contamination.Compare"
-	if err := sample.Validate(); err != nil {
+	if err := sample.validate(fn, "sample."); err != nil {
 		return Comparison{}, err
 	}
-	if err := target.Validate(); err != nil {
+	if err := target.validate(fn, "target."); err != nil {
 		return Comparison{}, err
 	}
 	if sample.Form != target.Form {
-		return Comparison{}, fmt.Errorf("%s: sample is a %v code, target a %v code: %w", fn, sample.Form, target.Form, ErrForm)
+		return Comparison{}, validate.Kind(codeError(fn, "target", target,
+			"a "+sample.Form.String()+" code like sample = "+sample.String()), ErrForm)
 	}
 	r := Comparison{Form: sample.Form}
 	for i := range sample.Len() {
 		t := target.N[i]
 		if t.Mark != MarkNone && t.Mark != MarkNotMeasured {
-			return Comparison{}, codeError(fn, "target", target, `plain scale numbers or "-" (no ≥, >28 or *)`)
+			return Comparison{}, &units.RangeError{Func: fn, Param: fmt.Sprintf("target.N[%d]", i), Value: t.String(),
+				Valid: `a plain scale number or "-" (no ≥, >28 or *)`}
 		}
 		sc := compareSize(sample.N[i], t)
 		sc.Size = sample.Form.SizeLabel(i)
 		r.Sizes[i] = sc
 		if sc.Status == NotCompared {
 			continue
+		}
+		if f, ok := sc.finding(); ok {
+			r.Findings = append(r.Findings, f)
 		}
 		if r.Compared == 0 || sc.Classes > r.Worst {
 			r.Worst = sc.Classes
@@ -145,6 +163,29 @@ func Compare(sample, target Code) (Comparison, error) {
 	return r, nil
 }
 
+// targetRule is where a comparison's limit comes from: the caller's target.
+var targetRule = components.CallerRule("target")
+
+// finding says what a compared size means for the reader, if anything.
+func (sc SizeCheck) finding() (components.Finding, bool) {
+	switch {
+	case sc.Status == Over && sc.AtLeast:
+		return components.NewFinding(components.Caution, components.Contamination, TopicOverTarget, targetRule,
+			"At %v the sample reads %v, above the target %v: at least about %v times the particles the target allows.",
+			sc.Size, sc.Sample, sc.Target, sc.Factor), true
+	case sc.Status == Over:
+		return components.NewFinding(components.Caution, components.Contamination, TopicOverTarget, targetRule,
+			"At %v the sample reads %v, above the target %v: about %v times the particles the target allows.",
+			sc.Size, sc.Sample, sc.Target, sc.Factor), true
+	case sc.Uncertain:
+		return components.NewFinding(components.Notice, components.Contamination, TopicFewCounted,
+			components.StandardRule("ISO 4406:2021, fewer than 20 particles counted"),
+			"At %v fewer than 20 particles were counted, so the fluid may be dirtier than its %v reads and the target %v is not assured.",
+			sc.Size, sc.Sample, sc.Target), true
+	}
+	return components.Finding{}, false
+}
+
 // compareSize compares one valid sample number with a plain or "-" target.
 func compareSize(s, t Number) SizeCheck {
 	sc := SizeCheck{Sample: s, Target: t}
@@ -153,12 +194,12 @@ func compareSize(s, t Number) SizeCheck {
 	}
 	top := upper[t.Scale]
 	n := s.Scale
+	bound := upper[min(n, MaxScale)]
 	if s.Mark == MarkAbove || s.Mark == MarkTooMany {
 		n, sc.AtLeast = AboveTable, true
-		sc.BoundRatio = upper[MaxScale] / top
-	} else {
-		sc.BoundRatio = upper[n] / top
+		bound = math.Nextafter(upper[MaxScale], math.Inf(1)) // more than 2 500 000: a lower bound
 	}
+	sc.Check = components.Within(bound, top, targetRule)
 	sc.Uncertain = s.Mark == MarkFewCounted
 	sc.Classes = n - t.Scale
 	sc.Factor = math.Ldexp(1, sc.Classes)

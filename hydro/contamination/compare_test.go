@@ -3,8 +3,10 @@ package contamination
 import (
 	"errors"
 	"math"
+	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -81,8 +83,11 @@ func TestCompare(t *testing.T) {
 		}
 		for i, w := range c.sizes {
 			g := r.Sizes[i]
+			// The check's ratio is the ratio of the table bounds, and its
+			// verdict agrees with the status.
 			if g.Status != w.status || g.Classes != w.classes || g.Factor != w.factor ||
-				math.Abs(g.BoundRatio-w.boundRatio) > 1e-15*w.boundRatio || g.AtLeast != w.atLeast || g.Uncertain != w.unsure {
+				math.Abs(g.Check.Ratio()-w.boundRatio) > 1e-15*w.boundRatio || g.AtLeast != w.atLeast || g.Uncertain != w.unsure ||
+				(g.Status != NotCompared && g.Check.OK() != (g.Status == Meets)) {
 				t.Errorf("%s vs %s size %s: got %+v; want %+v", c.sample, c.target, g.Size, g, w)
 			}
 		}
@@ -96,22 +101,74 @@ func TestCompareNothingInCommon(t *testing.T) {
 	}
 }
 
+// Every bad comparison names sample or target and the field, and matches
+// units.ErrRange and the sentinel that says more.
 func TestCompareBadInput(t *testing.T) {
+	ok := counter(num(18), num(16), num(13))
 	cases := []struct {
-		name           string
+		name, param    string
 		sample, target Code
 		err            error
 	}{
-		{"forms differ", counter(num(18), num(16), num(13)), micro(num(16), num(13)), ErrForm},
-		{"target with ≥", counter(num(18), num(16), num(13)), counter(num(18), num(16), few(13)), units.ErrRange},
-		{"target >28", counter(num(18), num(16), num(13)), counter(above28, num(16), num(13)), units.ErrRange},
-		{"bad sample", counter(num(18), num(19), num(13)), counter(num(18), num(16), num(13)), ErrOrder},
-		{"bad target", counter(num(18), num(16), num(13)), counter(num(40), num(16), num(13)), units.ErrRange},
+		{"forms differ", "target", ok, micro(num(16), num(13)), ErrForm},
+		{"target with ≥", "target.N[2]", ok, counter(num(18), num(16), few(13)), units.ErrRange},
+		{"target >28", "target.N[0]", ok, counter(above28, num(16), num(13)), units.ErrRange},
+		{"bad sample", "sample.N[1]", counter(num(18), num(19), num(13)), ok, ErrOrder},
+		{"bad target", "target.N[0]", ok, counter(num(40), num(16), num(13)), units.ErrRange},
+		{"zero sample", "sample.Form", Code{}, ok, units.ErrRange},
+		{"zero target", "target.Form", ok, Code{}, units.ErrRange},
 	}
 	for _, c := range cases {
-		if _, err := Compare(c.sample, c.target); !errors.Is(err, c.err) {
+		r, err := Compare(c.sample, c.target)
+		if !errors.Is(err, c.err) {
 			t.Errorf("%s: err = %v, want %v", c.name, err, c.err)
 		}
+		wantRangeError(t, err, c.param)
+		if r.Compared != 0 || r.Findings != nil || r.Form != NoForm {
+			t.Errorf("%s: %+v with an error, want the zero Comparison", c.name, r)
+		}
+	}
+}
+
+// A size over the target is a caution about contamination that quotes the
+// numbers; a "≥" number that meets the target is a notice; a clean sample
+// has no findings.
+func TestCompareFindings(t *testing.T) {
+	cases := []struct {
+		sample, target string
+		topics         []string // in size order
+	}{
+		{"16/14/11", "16/14/11", nil},
+		{"19/16/10", "16/15/11", []string{TopicOverTarget, TopicOverTarget}},
+		{"14/12/≥7", "16/14/11", []string{TopicFewCounted}},
+		{">28/26/20", "20/18/15", []string{TopicOverTarget, TopicOverTarget, TopicOverTarget}},
+		{"-/16/13", "18/-/14", nil},
+	}
+	for _, c := range cases {
+		r, err := Compare(mustParse(t, c.sample), mustParse(t, c.target))
+		if err != nil {
+			t.Fatal(err)
+		}
+		if len(r.Findings) != len(c.topics) {
+			t.Errorf("%s vs %s: findings %v, want topics %v", c.sample, c.target, r.Findings, c.topics)
+			continue
+		}
+		for i, f := range r.Findings {
+			sev := components.Caution
+			if c.topics[i] == TopicFewCounted {
+				sev = components.Notice
+			}
+			if f.Topic != c.topics[i] || f.Severity != sev || f.Hazard != components.Contamination || f.Rule.Kind == components.Unstated {
+				t.Errorf("%s vs %s: finding %d = %v (%s, %v), want %s, %v", c.sample, c.target, i, f, f.Topic, f.Rule, c.topics[i], sev)
+			}
+		}
+	}
+	// The over-target finding quotes the size, the numbers and the nominal
+	// factor as values.
+	r, _ := Compare(mustParse(t, "19/16/10"), mustParse(t, "16/15/11"))
+	args := r.Findings[0].Args()
+	if len(args) != 4 || args[0] != "≥4 µm(c)" || args[1] != num(19) || args[2] != num(16) || args[3] != 8.0 {
+		t.Errorf("finding quotes %v", args)
 	}
 }
 
@@ -162,10 +219,22 @@ func BenchmarkCompare(b *testing.B) {
 	}
 }
 
+// A sample that meets its target has nothing to report, and Compare then
+// allocates nothing (a monitoring loop compares a reading every few
+// seconds).
 func TestCompareAllocs(t *testing.T) {
-	s, _ := ParseCode("19/16/≥10")
+	s, _ := ParseCode("16/14/10")
 	tg, _ := ParseCode("17/15/12")
 	if a := testing.AllocsPerRun(100, func() { _, _ = Compare(s, tg) }); a != 0 {
 		t.Errorf("Compare allocates %v times, want 0", a)
+	}
+}
+
+// TestZeroCodeRangeError: the zero Code has no numbers; the error says so
+// instead of asking for an index "from 0 to -1".
+func TestZeroCodeRangeError(t *testing.T) {
+	_, _, err := Code{}.Range(0)
+	if !errors.Is(err, units.ErrRange) || strings.Contains(err.Error(), "-1") || !strings.Contains(err.Error(), "zero Code") {
+		t.Errorf("Code{}.Range(0): err = %v; want an error naming the zero Code", err)
 	}
 }

@@ -31,7 +31,9 @@
 // take precedence; callers can replace the table or the result.
 //
 // Filter performance follows ISO 16889: β_x(c) = upstream count ≥x ÷
-// downstream count ≥x, efficiency E = (1 − 1/β)·100 %.
+// downstream count ≥x, efficiency E = (1 − 1/β)·100 % (beta.go). The clean
+// element's pressure drop and its check against the bypass setting are in
+// element.go, the population balance in balance.go.
 //
 // # Population balance
 //
@@ -52,6 +54,32 @@
 // settling in the tank, particles made inside the filter, the change of β as
 // the element loads, flow surges and imperfect mixing: treat the results as
 // estimates and confirm them with samples.
+//
+// # Results that explain themselves
+//
+// Results speak the vocabulary of package components. A Target says where
+// its code comes from with a components.Rule (common practice, the caller's
+// base codes, or the caller's override) and cautions when an override is
+// dirtier than the table; each SizeCheck of a Comparison holds the sample's
+// count bound against the target's as a components.Check, and the
+// Comparison carries a finding for each size over the target; a BypassCheck
+// holds the clean drop against the bypass setting and against a third of it
+// as checks, with findings; placement Advice lists its findings and rule.
+// Findings have a severity, a hazard kind (filter bypass, stored energy, hot
+// surface, cavitation, contamination) and a stable topic key (the Topic…
+// constants) a program can act on; their sentences quote numbers as typed
+// quantities, so they read in metric or US customary units.
+//
+// # Errors
+//
+// Every error for bad input is a *units.RangeError (errors.As) matching
+// units.ErrRange, naming the function, the parameter or field (sample.N[1],
+// Bases[servo valve].N[0], at.Drop), the value and the valid range; parse
+// errors are *units.ParseError values. The package's sentinels ErrOrder,
+// ErrForm, ErrNoComponent and ErrUnreachable say more about a range error
+// and match units.ErrRange themselves. On error every function returns the
+// zero value; a result that must be positive but underflows to 0 is an
+// error.
 //
 // # Cautions
 //

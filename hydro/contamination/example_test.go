@@ -3,6 +3,7 @@ package contamination_test
 import (
 	"fmt"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/contamination"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -36,20 +37,25 @@ func ExampleCompare() {
 		fmt.Println(err)
 		return
 	}
-	fmt.Printf("target %v (%s, set by the %v, %v)\n", target.Code, target.Source, target.Basis, target.Band)
+	fmt.Printf("target %v (%v, set by the %v, %v)\n", target.Code, target.Rule.Kind, target.Basis, target.Band)
 
 	sample, _ := contamination.ParseCode("17/16/10")
 	r, _ := contamination.Compare(sample, target.Code)
 	for _, s := range r.Sizes[:r.Form.Len()] {
-		fmt.Printf("%-9s %-5v %+d classes, about ×%g (bounds ×%.3g)\n", s.Size, s.Status, s.Classes, s.Factor, s.BoundRatio)
+		fmt.Printf("%-9s %-5v %+d classes, about ×%g (bounds ×%.3g)\n", s.Size, s.Status, s.Classes, s.Factor, s.Check.Ratio())
 	}
 	fmt.Println("meets target:", r.Meets)
+	for _, f := range r.Findings {
+		fmt.Println(f)
+	}
 	// Output:
 	// target 16/14/11 (common practice, set by the proportional valve, over 210 bar)
 	// ≥4 µm(c)  over  +1 classes, about ×2 (bounds ×2.03)
 	// ≥6 µm(c)  over  +2 classes, about ×4 (bounds ×4)
 	// ≥14 µm(c) meets -1 classes, about ×0.5 (bounds ×0.5)
 	// meets target: false
+	// caution (contamination): At ≥4 µm(c) the sample reads 17, above the target 16: about 2 times the particles the target allows.
+	// caution (contamination): At ≥6 µm(c) the sample reads 16, above the target 14: about 4 times the particles the target allows.
 }
 
 // A sawmill log turner's power unit (demo data): 160 L/min through the
@@ -129,18 +135,30 @@ func ExampleEfficiency() {
 // 60 L/min and 30 mm²/s; bypass 3.5 bar; cold start at 900 mm²/s.
 func ExampleCheckBypass() {
 	at := contamination.ElementPoint{Drop: 0.25 * units.Bar, Flow: 60 * units.LitrePerMinute, Viscosity: 30 * units.Centistokes}
+	us := units.USCustomary()
 	for _, nu := range []units.KinematicViscosity{46 * units.Centistokes, 900 * units.Centistokes} {
 		r, _ := contamination.CheckBypass(at, 80*units.LitrePerMinute, nu, 3.5*units.Bar)
-		fmt.Printf("%v: clean drop %v, %.0f %% of bypass, opens %v\n", nu, r.Drop, 100*r.Share, r.Opens)
+		fmt.Printf("%v: clean drop %v, %.0f %% of bypass, stays shut %v\n", nu, r.Setting.Value, 100*r.Setting.Ratio(), r.Setting.OK())
+		for _, f := range r.Findings.Hazard(components.FilterBypass).AtLeast(components.Caution) {
+			fmt.Println(" ", f.Text(us))
+		}
 	}
 	// Output:
-	// 46 mm²/s: clean drop 0.5111 bar, 15 % of bypass, opens false
-	// 900 mm²/s: clean drop 10 bar, 286 % of bypass, opens true
+	// 46 mm²/s: clean drop 0.5111 bar, 15 % of bypass, stays shut true
+	//   Fit a clogging indicator, visual or electrical, set below the bypass setting, and change the element when it trips: an element in bypass passes unfiltered fluid.
+	// 900 mm²/s: clean drop 10 bar, 286 % of bypass, stays shut false
+	//   The clean element's drop of 145 psi at 21.13 gpm and 900 cSt is above the 50.76 psi bypass setting: fluid passes unfiltered; choose a larger element or a lower flow, or warm the fluid before load.
+	//   Fit a clogging indicator, visual or electrical, set below the bypass setting, and change the element when it trips: an element in bypass passes unfiltered fluid.
 }
 
 func ExamplePlacementAdvice() {
 	a, _ := contamination.PlacementAdvice(contamination.SuctionStrainer)
-	fmt.Println(a.Name+":", a.Rating, "("+a.Source+")")
+	fmt.Println(a.Name+":", a.Element, "("+a.Rule.String()+")")
+	for _, f := range a.Findings.AtLeast(components.Caution) {
+		fmt.Println(f)
+	}
 	// Output:
-	// suction strainer: coarse, about 100–250 µm (mesh) (common practice)
+	// suction strainer: coarse, about 100–250 µm (mesh) (common practice: filter placement and element fineness)
+	// caution (cavitation): Any element on the pump inlet adds pressure drop there and risks cavitation, worst with cold, thick oil and as it clogs: keep it coarse and generously sized, or leave it out where the pump maker advises.
+	// caution (filter bypass): Fit a clogging indicator, visual or electrical, set below the bypass setting, and change the element when it trips: an element in bypass passes unfiltered fluid.
 }

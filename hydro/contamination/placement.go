@@ -1,6 +1,10 @@
 package contamination
 
-import "fmt"
+import (
+	"fmt"
+
+	"github.com/hydrosize/hydrosize/components"
+)
 
 // Placement is where a filter sits in a circuit.
 type Placement uint8
@@ -27,95 +31,109 @@ func (p Placement) String() string {
 	return fmt.Sprintf("Placement(%d)", uint8(p))
 }
 
-// Advice describes one filter placement: what it is for, the usual rating
-// and the cautions. The ratings are common practice, not a standard; the
-// target code and the component makers' limits decide the real choice.
+// Advice describes one filter placement: what it is for, the usual element
+// and what to watch for. The elements are common practice, not a standard;
+// the target code and the component makers' limits decide the real choice.
 type Advice struct {
 	Placement Placement
 	Name      string
-	// Rating is the usual rating in words, e.g. "about 5–10 µm(c)".
-	Rating string
+	// Element is the usual element in words, e.g. "fine, about 5–10 µm(c)
+	// with β ≥ 200 or better" (a typed filter rating is a Rating).
+	Element string
 	// Purpose says what the filter protects and why it sits there.
 	Purpose string
-	// Cautions lists what to watch for with this placement.
-	Cautions []string
-	// Source labels the ratings: "common practice".
-	Source string
+	// Findings lists what to watch for with this placement, ending with
+	// the clogging indicator every element needs (TopicIndicator).
+	Findings components.Findings
+	// Rule labels the advice: common practice.
+	Rule components.Rule
 }
 
-// indicator is the caution that holds for every element.
-const indicator = "fit a clogging indicator (visual or electrical) and change the element when it trips; an element in bypass passes unfiltered fluid"
+// adviceRule labels every placement's advice.
+var adviceRule = components.PracticeRule("filter placement and element fineness")
 
+// note, caution and warning build the findings of the placement table.
+func note(hz components.Hazard, topic, text string) components.Finding {
+	return components.NewFinding(components.Notice, hz, topic, adviceRule, text)
+}
+
+func caution(hz components.Hazard, topic, text string) components.Finding {
+	return components.NewFinding(components.Caution, hz, topic, adviceRule, text)
+}
+
+func warning(hz components.Hazard, topic, text string) components.Finding {
+	return components.NewFinding(components.Warning, hz, topic, adviceRule, text)
+}
+
+// placementAdvice is built once and never written; PlacementAdvice returns
+// copies.
 var placementAdvice = [placementCount]Advice{
 	SuctionStrainer: {
 		Placement: SuctionStrainer,
 		Name:      "suction strainer",
-		Rating:    "coarse, about 100–250 µm (mesh)",
+		Element:   "coarse, about 100–250 µm (mesh)",
 		Purpose:   "keeps debris such as rags and scale out of the pump inlet; it does not clean the fluid to a target code",
-		Cautions: []string{
-			"any element on the pump inlet adds pressure drop there and risks cavitation, worst with cold, thick oil and as it clogs: keep it coarse and generously sized, or leave it out where the pump maker advises",
-			"many piston pump makers forbid fine suction filters: follow the pump's inlet pressure limit",
-			"a suction strainer inside the tank is out of sight: give it a vacuum gauge or switch and a bypass",
+		Findings: components.Findings{
+			caution(components.Cavitation, TopicSuctionDrop, "Any element on the pump inlet adds pressure drop there and risks cavitation, worst with cold, thick oil and as it clogs: keep it coarse and generously sized, or leave it out where the pump maker advises."),
+			note(components.Cavitation, TopicSuctionFine, "Many piston pump makers forbid fine suction filters: follow the pump's inlet pressure limit."),
+			note(components.Cavitation, TopicSuctionUnseen, "A suction strainer inside the tank is out of sight: give it a vacuum gauge or switch and a bypass."),
 		},
-		Source: "common practice",
 	},
 	PressureFilter: {
 		Placement: PressureFilter,
 		Name:      "pressure filter",
-		Rating:    "fine, about 5–10 µm(c) with β ≥ 200 or better; about 3–5 µm(c) ahead of servo and proportional valves",
+		Element:   "fine, about 5–10 µm(c) with β ≥ 200 or better; about 3–5 µm(c) ahead of servo and proportional valves",
 		Purpose:   "protects the components just downstream (servo and proportional valves above all) from pump wear debris and from dirt in a pump failure",
-		Cautions: []string{
-			"the housing must carry the full system pressure, including pressure peaks; check its fatigue rating",
-			"ahead of servo valves use an element without bypass (high-collapse element) so dirt cannot pass when it loads",
-			"relieve the pressure before opening the housing",
+		Findings: components.Findings{
+			warning(components.Burst, TopicHousingPressure, "The housing must carry the full system pressure, including pressure peaks: check its pressure and fatigue ratings."),
+			caution(components.FilterBypass, TopicServoNoBypass, "Ahead of servo valves use an element without bypass (a high-collapse element), so dirt cannot pass when it loads."),
+			relieveFinding(),
 		},
-		Source: "common practice",
 	},
 	ReturnFilter: {
 		Placement: ReturnFilter,
 		Name:      "return filter",
-		Rating:    "fine, about 5–10 µm(c) with β ≥ 200 or better",
+		Element:   "fine, about 5–10 µm(c) with β ≥ 200 or better",
 		Purpose:   "catches the dirt the circuit and cylinders bring back before it reaches the tank; often the main system filter",
-		Cautions: []string{
-			"size it for the largest return flow, which exceeds pump flow when a cylinder retracts (area ratio) or an accumulator discharges",
-			"flow surges shorten element life and can unload caught dirt",
-			"check the clean drop at cold start against the bypass setting",
+		Findings: components.Findings{
+			caution(components.FilterBypass, TopicReturnFlow, "Size it for the largest return flow, which exceeds pump flow when a cylinder retracts (area ratio) or an accumulator discharges."),
+			note(components.Contamination, TopicFlowSurge, "Flow surges shorten element life and can unload caught dirt."),
+			coldDropFinding(),
 		},
-		Source: "common practice",
 	},
 	OfflineFilter: {
 		Placement: OfflineFilter,
 		Name:      "off-line (kidney loop) filter",
-		Rating:    "very fine, about 3–6 µm(c) with β ≥ 1000, often with water removal",
+		Element:   "very fine, about 3–6 µm(c) with β ≥ 1000, often with water removal",
 		Purpose:   "cleans the tank continuously at steady flow, independent of the machine's cycle, so fine elements last long and can be changed while the machine runs",
-		Cautions: []string{
-			"turn the tank volume over often enough (its flow sets the steady cleanliness with the ingress)",
-			"take its suction and return far apart in the tank so it does not short-circuit",
+		Findings: components.Findings{
+			note(components.NoHazard, TopicTurnover, "Turn the tank volume over often enough: its flow and the ingress set the steady cleanliness."),
+			note(components.NoHazard, TopicShortCircuit, "Take its suction and return far apart in the tank, so that it does not short-circuit."),
 		},
-		Source: "common practice",
 	},
 	Breather: {
 		Placement: Breather,
 		Name:      "breather",
-		Rating:    "at least as fine as the finest system filter, about 3–10 µm; desiccant type where the air is damp",
+		Element:   "at least as fine as the finest system filter, about 3–10 µm; desiccant type where the air is damp",
 		Purpose:   "stops airborne dust, often the largest ingress source, from entering as the fluid level falls",
-		Cautions: []string{
-			"size it for the largest air flow: the fastest fall in tank level when cylinders extend",
-			"a blocked breather pulls a vacuum in the tank and can starve the pump",
+		Findings: components.Findings{
+			note(components.Contamination, TopicBreatherFlow, "Size it for the largest air flow: the fastest fall in tank level when cylinders extend."),
+			caution(components.Cavitation, TopicBreatherBlocked, "A blocked breather pulls a vacuum in the tank and can starve the pump."),
 		},
-		Source: "common practice",
 	},
 }
 
-// PlacementAdvice returns the advice for placement p, with the caution that
-// every element needs a clogging indicator added. An unknown p returns
-// false. The returned slices are fresh copies the caller may change.
+// PlacementAdvice returns the advice for placement p, with the clogging
+// indicator every element needs added to its findings and its rule set. An
+// unknown p returns false. The returned findings are a fresh copy the
+// caller may change.
 func PlacementAdvice(p Placement) (Advice, bool) {
 	if p >= placementCount {
 		return Advice{}, false
 	}
 	a := placementAdvice[p]
-	a.Cautions = append(append([]string(nil), a.Cautions...), indicator)
+	a.Findings = a.Findings.Merge(indicatorFinding())
+	a.Rule = adviceRule
 	return a, true
 }
 

@@ -126,7 +126,7 @@ func TestNoPanicNoNaN(t *testing.T) {
 			finite(t, "Code.Range", err, lo, hi)
 			if cmp, err := Compare(code, codes[r.IntN(len(codes))]); err == nil {
 				for _, sc := range cmp.Sizes {
-					finite(t, "Compare", nil, sc.Factor, sc.BoundRatio)
+					finite(t, "Compare", nil, sc.Factor, sc.Check.Ratio(), sc.Check.Value, sc.Check.Limit)
 				}
 			}
 		}
@@ -157,7 +157,7 @@ func TestNoPanicNoNaN(t *testing.T) {
 		dp, err := CleanDrop(at, units.Flow(d), units.KinematicViscosity(e))
 		finite(t, "CleanDrop", err, float64(dp))
 		bc, err := CheckBypass(at, units.Flow(d), units.KinematicViscosity(e), units.Pressure(wide(r)))
-		finite(t, "CheckBypass", err, float64(bc.Drop), float64(bc.Bypass), bc.Share)
+		finite(t, "CheckBypass", err, float64(bc.Setting.Value), float64(bc.Setting.Limit), bc.Setting.Ratio(), float64(bc.Room.Limit))
 
 		_, _ = BandFor(units.Pressure(a))
 		_, _ = BaseTarget(Component(k))

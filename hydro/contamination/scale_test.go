@@ -252,3 +252,14 @@ func TestSampleBoundsInEveryVolume(t *testing.T) {
 		t.Errorf("130 000 per 100 mL: %v, %v; want 17", c, err)
 	}
 }
+
+// TestNegativeZeroCount: a count of −0 is a count of zero; the count per mL
+// is +0, not "-0".
+func TestNegativeZeroCount(t *testing.T) {
+	negZero := math.Copysign(0, -1)
+	for name, f := range map[string]func(float64, units.Volume) (float64, error){"PerML": PerML, "Per100mL": Per100mL} {
+		if v, err := f(negZero, units.Millilitre); err != nil || v != 0 || math.Signbit(v) {
+			t.Errorf("%s(-0, 1 mL) = %g, %v; want +0", name, v, err)
+		}
+	}
+}

@@ -1,9 +1,10 @@
 package contamination
 
 import (
-	"errors"
 	"fmt"
+	"strconv"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -125,8 +126,10 @@ func BandFor(p units.Pressure) (PressureBand, error) {
 	return BandHigh, nil
 }
 
-// ErrNoComponent reports a target request that names no component.
-var ErrNoComponent = errors.New("no component given")
+// ErrNoComponent reports a target request that names no component. It
+// matches units.ErrRange, and RecommendTarget's error is a
+// *units.RangeError naming Components.
+var ErrNoComponent error = validate.Sentinel("no component given")
 
 // TargetInput describes a circuit for RecommendTarget.
 type TargetInput struct {
@@ -170,9 +173,14 @@ type Target struct {
 	Steps int
 	// Overridden tells that Code is the caller's override.
 	Overridden bool
-	// Source is "common practice" or, with an override or caller base
-	// codes, says so.
-	Source string
+	// Rule says where Code comes from: common practice (the table), the
+	// caller's base codes with common-practice adjustments
+	// (components.CallerValue, "Bases"), or the caller's override
+	// (components.CallerValue, "Override").
+	Rule components.Rule
+	// Findings: a caution when the override is dirtier than the table at
+	// some size (TopicOverrideLooser).
+	Findings components.Findings
 }
 
 // RecommendTarget returns a target ISO 4406 code (≥4/≥6/≥14 µm(c)) for a
@@ -183,13 +191,16 @@ type Target struct {
 // This is common practice, not a standard. The component makers' limits
 // take precedence; a sample that meets the target is no warranty of life.
 //
-// Errors: no component (ErrNoComponent), an unknown component, a pressure
-// that is not finite and > 0, or a bad base or override code
-// (units.ErrRange).
+// Errors are *units.RangeError values matching units.ErrRange that name
+// the TargetInput field: no component (Components, also ErrNoComponent), an
+// unknown component (Components[i]), a pressure that is not finite and > 0
+// (Pressure), or a bad base or override code (Bases[servo valve].N[1],
+// Override.Form, …).
 func RecommendTarget(in TargetInput) (Target, error) {
 	const fn = "contamination.RecommendTarget"
 	if len(in.Components) == 0 {
-		return Target{}, fmt.Errorf("%s: %w", fn, ErrNoComponent)
+		return Target{}, validate.Kind(&units.RangeError{Func: fn, Param: "Components", Value: "none",
+			Valid: "at least one component"}, ErrNoComponent)
 	}
 	if err := validate.Positive(fn, "Pressure", in.Pressure); err != nil {
 		return Target{}, err
@@ -198,10 +209,11 @@ func RecommendTarget(in TargetInput) (Target, error) {
 	if err != nil {
 		return Target{}, err
 	}
-	t := Target{Band: band, Steps: band.steps(), Source: "common practice", Base: Code{Form: Counter}}
+	t := Target{Band: band, Steps: band.steps(), Base: Code{Form: Counter},
+		Rule: components.PracticeRule("target code from the most sensitive component, pressure band, criticality and duty")}
 	bestSum := -1
 	for k, c := range in.Components {
-		base, err := baseFor(fn, in.Bases, c)
+		base, err := baseFor(fn, "Components["+strconv.Itoa(k)+"]", in.Bases, c)
 		if err != nil {
 			return Target{}, err
 		}
@@ -227,31 +239,52 @@ func RecommendTarget(in TargetInput) (Target, error) {
 	}
 	t.Code = t.Table
 	if len(in.Bases) > 0 {
-		t.Source = "caller's base codes and common-practice adjustments"
+		t.Rule = components.CallerRule("Bases, with common-practice adjustments for pressure, criticality and duty")
 	}
 	if in.Override != nil {
 		if err := checkTarget(fn, "Override", *in.Override); err != nil {
 			return Target{}, err
 		}
-		t.Code, t.Overridden, t.Source = *in.Override, true, "caller's override"
+		t.Code, t.Overridden, t.Rule = *in.Override, true, components.CallerRule("Override")
+		t.Findings = overrideFindings(t.Code, t.Table)
 	}
 	return t, nil
 }
 
-// baseFor returns the caller's base code for c if given, else the table's.
-func baseFor(fn string, bases map[Component]Code, c Component) (Code, error) {
+// overrideFindings cautions about each size at which the override is
+// dirtier than the table's code.
+func overrideFindings(override, table Code) components.Findings {
+	var out components.Findings
+	for i := range 3 {
+		if override.N[i].Scale > table.N[i].Scale {
+			out = append(out, components.NewFinding(components.Caution, components.Contamination, TopicOverrideLooser,
+				components.CallerRule("Override"),
+				"At %v the override %v allows %v where the common-practice target %v asks for %v: confirm it with the component makers' limits.",
+				Counter.SizeLabel(i), override, override.N[i], table, table.N[i]))
+		}
+	}
+	return out
+}
+
+// baseFor returns the caller's base code for c if given, else the table's;
+// param names c in the caller's input (Components[2]).
+func baseFor(fn, param string, bases map[Component]Code, c Component) (Code, error) {
 	if c >= componentCount {
-		return Code{}, validate.Fail(fn, "Components", float64(c), "known Component values")
+		return Code{}, validate.Fail(fn, param, float64(c), "a known Component")
 	}
 	if b, ok := bases[c]; ok {
-		return b, checkTarget(fn, "Bases["+c.String()+"]", b)
+		if err := checkTarget(fn, "Bases["+c.String()+"]", b); err != nil {
+			return Code{}, err
+		}
+		return b, nil
 	}
 	return BaseTarget(c)
 }
 
-// checkTarget accepts a valid counter code of plain numbers.
+// checkTarget accepts a valid counter code of plain numbers; errors name
+// param and the field (Bases[gear pump].N[1]).
 func checkTarget(fn, param string, c Code) error {
-	if err := c.Validate(); err != nil {
+	if err := c.validate(fn, param+"."); err != nil {
 		return err
 	}
 	if c.Form != Counter {
@@ -259,7 +292,8 @@ func checkTarget(fn, param string, c Code) error {
 	}
 	for i := range 3 {
 		if c.N[i].Mark != MarkNone {
-			return codeError(fn, param, c, "plain scale numbers (no -, ≥, >28 or *)")
+			return &units.RangeError{Func: fn, Param: fmt.Sprintf("%s.N[%d]", param, i), Value: c.N[i].String(),
+				Valid: "a plain scale number (no -, ≥, >28 or *)"}
 		}
 	}
 	return nil

@@ -3,8 +3,10 @@ package contamination
 import (
 	"errors"
 	"math"
+	"reflect"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -55,14 +57,40 @@ func TestRecommendTarget(t *testing.T) {
 		if err != nil || got.Code.String() != c.want || got.Basis != c.basis || got.Steps != c.steps || got.Code != got.Table || got.Overridden {
 			t.Errorf("%s: %+v, %v; want %s from %v, steps %d", c.name, got, err, c.want, c.basis, c.steps)
 		}
+		wantKind := components.CommonPractice
+		if c.in.Bases != nil {
+			wantKind = components.CallerValue
+		}
+		if got.Rule.Kind != wantKind || got.Rule.Source == "" || got.Findings != nil {
+			t.Errorf("%s: rule %v, findings %v; want a %v rule and no findings", c.name, got.Rule, got.Findings, wantKind)
+		}
 	}
 }
 
+// An override replaces the code and says so in the rule; one dirtier than
+// the table at a size carries a caution about contamination for that size.
 func TestRecommendTargetOverride(t *testing.T) {
 	o := counter(num(15), num(13), num(10))
 	got, err := RecommendTarget(TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Override: &o})
-	if err != nil || got.Code != o || got.Table.String() != "20/18/16" || !got.Overridden || got.Source != "caller's override" {
+	if err != nil || got.Code != o || got.Table.String() != "20/18/16" || !got.Overridden ||
+		got.Rule != components.CallerRule("Override") || got.Findings != nil {
 		t.Errorf("override: %+v, %v", got, err)
+	}
+	loose := counter(num(21), num(18), num(17)) // against 20/18/16: 1 and 1 class over at ≥4 and ≥14 µm(c)
+	got, err = RecommendTarget(TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Override: &loose})
+	if err != nil || got.Code != loose {
+		t.Fatalf("loose override: %+v, %v", got, err)
+	}
+	fs := got.Findings.Topic(TopicOverrideLooser)
+	if len(fs) != 2 || len(got.Findings) != 2 {
+		t.Fatalf("loose override findings %v, want two", got.Findings)
+	}
+	for i, size := range []string{"≥4 µm(c)", "≥14 µm(c)"} {
+		f := fs[i]
+		want := []any{size, loose, loose.N[2*i], got.Table, got.Table.N[2*i]}
+		if f.Severity != components.Caution || f.Hazard != components.Contamination || !reflect.DeepEqual(f.Args(), want) {
+			t.Errorf("finding %d = %v quoting %v; want a contamination caution quoting %v", i, f, f.Args(), want)
+		}
 	}
 }
 
@@ -103,30 +131,49 @@ func TestTargetClamp(t *testing.T) {
 	}
 }
 
+// Every bad input names the TargetInput field, down to the number of a
+// code, and gives the zero Target.
 func TestRecommendTargetBadInput(t *testing.T) {
 	bad := counter(num(18), few(16), num(13))
 	micro := micro(num(16), num(13))
+	rising := counter(num(16), num(18), num(13))
+	ok := counter(num(18), num(16), num(13))
+	p := 100 * units.Bar
 	cases := []struct {
-		name string
-		in   TargetInput
-		err  error
+		name, param string
+		in          TargetInput
+		err         error
 	}{
-		{"no component", TargetInput{Pressure: 100 * units.Bar}, ErrNoComponent},
-		{"unknown component", TargetInput{Components: []Component{componentCount}, Pressure: 100 * units.Bar}, units.ErrRange},
-		{"zero pressure", TargetInput{Components: []Component{GearPump}}, units.ErrRange},
-		{"negative pressure", TargetInput{Components: []Component{GearPump}, Pressure: -units.Bar}, units.ErrRange},
-		{"NaN pressure", TargetInput{Components: []Component{GearPump}, Pressure: units.Pressure(math.NaN())}, units.ErrRange},
-		{"marked base", TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Bases: map[Component]Code{GearPump: bad}}, units.ErrRange},
-		{"microscope override", TargetInput{Components: []Component{GearPump}, Pressure: 100 * units.Bar, Override: &micro}, units.ErrRange},
+		{"no component", "Components", TargetInput{Pressure: p}, ErrNoComponent},
+		{"unknown component", "Components[1]", TargetInput{Components: []Component{GearPump, componentCount}, Pressure: p}, units.ErrRange},
+		// A caller base code for an unknown component must not let it
+		// through.
+		{"unknown component with a base", "Components[0]", TargetInput{Components: []Component{componentCount + 3}, Pressure: p,
+			Bases: map[Component]Code{componentCount + 3: ok}}, units.ErrRange},
+		// An unset (zero) working pressure fell in the low band and gave a
+		// target one class dirtier; like the zero Code, an unset field must
+		// not loosen a target.
+		{"zero pressure", "Pressure", TargetInput{Components: []Component{GearPump}}, units.ErrRange},
+		{"negative pressure", "Pressure", TargetInput{Components: []Component{GearPump}, Pressure: -units.Bar}, units.ErrRange},
+		{"NaN pressure", "Pressure", TargetInput{Components: []Component{GearPump}, Pressure: units.Pressure(math.NaN())}, units.ErrRange},
+		{"marked base", "Bases[gear pump].N[1]", TargetInput{Components: []Component{GearPump}, Pressure: p, Bases: map[Component]Code{GearPump: bad}}, units.ErrRange},
+		{"rising base", "Bases[gear pump].N[1]", TargetInput{Components: []Component{GearPump}, Pressure: p, Bases: map[Component]Code{GearPump: rising}}, ErrOrder},
+		{"zero base", "Bases[gear pump].Form", TargetInput{Components: []Component{GearPump}, Pressure: p, Bases: map[Component]Code{GearPump: {}}}, units.ErrRange},
+		{"microscope override", "Override", TargetInput{Components: []Component{GearPump}, Pressure: p, Override: &micro}, units.ErrRange},
+		{"marked override", "Override.N[1]", TargetInput{Components: []Component{GearPump}, Pressure: p, Override: &bad}, units.ErrRange},
 	}
 	for _, c := range cases {
-		if _, err := RecommendTarget(c.in); !errors.Is(err, c.err) {
+		tg, err := RecommendTarget(c.in)
+		if !errors.Is(err, c.err) {
 			t.Errorf("%s: err = %v, want %v", c.name, err, c.err)
 		}
+		wantRangeError(t, err, c.param)
+		if !reflect.DeepEqual(tg, Target{}) {
+			t.Errorf("%s: %+v with an error, want the zero Target", c.name, tg)
+		}
 	}
-	if _, err := BaseTarget(componentCount); !errors.Is(err, units.ErrRange) {
-		t.Errorf("BaseTarget(unknown): %v", err)
-	}
+	_, err := BaseTarget(componentCount)
+	wantRangeError(t, err, "c")
 }
 
 func TestTargetStrings(t *testing.T) {

@@ -60,7 +60,7 @@ func ExampleSelectMotor() {
 	fmt.Printf("%v motor for %.2f: thermal ok %v, torque ok %v (peak %.1f)\n",
 		m.Rating.Chosen, m.Rating.Required, m.Thermal.OK(), m.Torque.OK(), m.PeakTorque)
 	for _, f := range m.Findings {
-		fmt.Println(f.Text(nil))
+		fmt.Println(f.Text(units.Metric()))
 	}
 	// Output:
 	// peak 9.41 kW, average 2.32 kW, RMS 4.24 kW

@@ -26,7 +26,7 @@ type Start struct {
 // the cold path's own findings (a failed rating is a burst warning, a
 // failed bypass setting a filter-bypass caution).
 //
-// cold must be below running; q and the path as Path.Drop needs them, and
+// cold must be at or below running; q and the path as Path.Drop needs them, and
 // both temperatures within the fluid's curve and above its pour point.
 func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperature) (Start, error) {
 	const fn = "line.ColdStart"
