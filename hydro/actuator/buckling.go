@@ -121,7 +121,10 @@ func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, Buc
 		}
 	}
 	p, m := critical(d, lk, e, yield)
-	return p, m, validate.Result(fn, "P", p)
+	if err := validate.Result(fn, "P", p); err != nil {
+		return 0, Euler, err
+	}
+	return p, m, nil
 }
 
 func critical(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod) {
@@ -255,7 +258,10 @@ func (c Column) Check() (BucklingCheck, error) {
 	if err := validate.Result(fn, "Critical", r.Critical); err != nil {
 		return BucklingCheck{}, err
 	}
-	return r, validate.Result(fn, "Thrust", r.Thrust)
+	if err := validate.Result(fn, "Thrust", r.Thrust); err != nil {
+		return BucklingCheck{}, err
+	}
+	return r, nil
 }
 
 func (c Column) check() BucklingCheck {
