@@ -92,6 +92,19 @@ func TestFittingK(t *testing.T) {
 			t.Errorf("ID %g mm: elbow K %.3f (table %.2f), tee K %.3f (table %.2f), %v", c.id, ke, c.elbow, kt, c.teeBr, err)
 		}
 	}
+	// The rough-pipe f_T needs ε/D within the friction range (ε = 0.045 mm
+	// at most a tenth of the bore): at ε/(3.7·D) = 1 the formula divides by
+	// log²(1) = 0, and below 0.45 mm it means nothing.
+	for _, bore := range []units.Length{CommercialSteel / 3.7, 10 * units.Micrometre, 0.44 * units.Millimetre} {
+		k, _, err := Elbow90.K(bore)
+		if k != 0 {
+			t.Errorf("Elbow90.K(%v) = %v beside %v, want 0", bore, k, err)
+		}
+		wantRangeError(t, "tiny bore "+bore.String(), err, "bore")
+	}
+	if k, _, err := Elbow90.K(0.45 * units.Millimetre); err != nil || !(k > 0) {
+		t.Errorf("Elbow90.K(0.45 mm) = %v, %v; want a K", k, err)
+	}
 	if k, _, _ := Exit.K(0.01); k != 1 {
 		t.Errorf("exit K = %g, want 1", k)
 	}
