@@ -27,7 +27,9 @@ type Start struct {
 // failed bypass setting a filter-bypass caution).
 //
 // cold must be at or below running; q and the path as Path.Drop needs them, and
-// both temperatures within the fluid's curve and above its pour point.
+// both temperatures within the fluid's curve and above its pour point. A
+// flow so small that the running drop underflows to 0 leaves no ratio: the
+// error names Ratio.
 func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperature) (Start, error) {
 	const fn = "line.ColdStart"
 	if err := validate.Finite(fn, "running", running); err != nil {
@@ -51,7 +53,9 @@ func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperat
 	if s.Running, err = p.Drop(q, or); err != nil {
 		return Start{}, err
 	}
-	s.Ratio = float64(s.Cold.Total / s.Running.Total)
+	if s.Ratio, err = validate.Checked(fn, "Ratio", float64(s.Cold.Total/s.Running.Total)); err != nil {
+		return Start{}, err // both drops underflowed to 0
+	}
 	s.Findings = components.Findings{components.NewFinding(components.Notice, components.ColdStart,
 		"line.cold-drop", components.PhysicsRule("Darcy–Weisbach at the oil's viscosity at each temperature"),
 		"at %v the path %v drops %v, %v times its %v at %v",

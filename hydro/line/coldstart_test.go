@@ -47,4 +47,12 @@ func TestColdStart(t *testing.T) {
 	// Bad input: cold above running.
 	_, err = ColdStart(p, 60*units.LitrePerMinute, oil, run, cold)
 	wantRangeError(t, "cold above running", err, "cold")
+	// A flow so small that every drop underflows to 0 has no ratio: an
+	// error, not NaN.
+	tiny := Path{Elements: []Element{Rated{Drop: units.Bar, Flow: 1}}}
+	s, err = ColdStart(tiny, 1e-200, oil, cold, run)
+	if s.Ratio != 0 || s.Cold.Elements != nil {
+		t.Errorf("underflowing drops: ratio %v beside %v", s.Ratio, err)
+	}
+	wantRangeError(t, "underflowing drops", err, "Ratio")
 }

@@ -92,6 +92,8 @@ func TestSurgeBadInput(t *testing.T) {
 		{"length", bad(func(c *Closure) { c.Length = units.Length(math.Inf(1)) }), "Length"},
 		{"rating", bad(func(c *Closure) { c.Rating = -1 }), "Rating"},
 		{"wall od", bad(func(c *Closure) { c.Wall = Wall{Bore: 0.02, OD: 0.01, Modulus: 2e11} }), "do"},
+		// 2L/a beyond what a time.Duration holds (about 292 years).
+		{"round trip", bad(func(c *Closure) { c.Length = 1e300 }), "Length"},
 	} {
 		wantRangeError(t, c.name, c.err, c.param)
 	}
