@@ -29,7 +29,9 @@ type Start struct {
 // cold must be at or below running; q and the path as Path.Drop needs them, and
 // both temperatures within the fluid's curve and above its pour point. A
 // flow so small that the running drop underflows to 0 leaves no ratio: the
-// error names Ratio.
+// error names Ratio. Errors name ColdStart's parameters: cold or running for
+// a temperature the fluid refuses, f.… for the fluid's data, p.Elements[i].…
+// for the path.
 func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperature) (Start, error) {
 	const fn = "line.ColdStart"
 	if err := validate.Finite(fn, "running", running); err != nil {
@@ -40,18 +42,18 @@ func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperat
 	}
 	oc, err := OilAt(f, cold)
 	if err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"t": "cold"}))
 	}
 	or, err := OilAt(f, running)
 	if err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"t": "running"}))
 	}
 	var s Start
 	if s.Cold, err = p.Drop(q, oc); err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, pathFields)
 	}
 	if s.Running, err = p.Drop(q, or); err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, pathFields)
 	}
 	if s.Ratio, err = validate.Checked(fn, "Ratio", float64(s.Cold.Total/s.Running.Total)); err != nil {
 		return Start{}, err // both drops underflowed to 0
@@ -71,6 +73,10 @@ func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperat
 	s.Findings = s.Findings.Merge(s.Cold.Findings...)
 	return s, nil
 }
+
+// pathFields maps the parameters of Path.Drop to ColdStart's: q stays q, a
+// field of the path goes under p.
+var pathFields = validate.Fields("p.", map[string]string{"q": "q"})
 
 func pathName(p Path) string {
 	if p.Name == "" {

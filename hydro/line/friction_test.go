@@ -203,3 +203,10 @@ func wantRangeError(t *testing.T, name string, err error, param string) {
 	t.Helper()
 	t.Run(name, func(t *testing.T) { checktest.RangeError(t, err, param) })
 }
+
+// wantRangeErrorIn is wantRangeError that also checks the function the
+// error names: the one the caller called.
+func wantRangeErrorIn(t *testing.T, name string, err error, fn, param string) {
+	t.Helper()
+	t.Run(name, func(t *testing.T) { checktest.RangeErrorIn(t, err, fn, param) })
+}

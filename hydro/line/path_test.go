@@ -195,7 +195,8 @@ func TestPathBadInput(t *testing.T) {
 		{"pipe length", Path{Elements: []Element{good, Pipe{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[1].Length"},
 		{"pipe bore", Path{Elements: []Element{Pipe{Length: 1}}}, 1e-3, vg46At50, "Elements[0].Bore"},
 		{"rough", Path{Elements: []Element{Pipe{Length: 1, Bore: 0.01, Roughness: 0.002}}}, 1e-3, vg46At50, "Elements[0].Roughness"},
-		{"fitting custom", Path{Elements: []Element{Fitting{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[0].kind"},
+		{"fitting custom", Path{Elements: []Element{Fitting{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[0].Kind"},
+		{"fitting tiny bore", Path{Elements: []Element{Fitting{Kind: Elbow90, Bore: 1e-5}}}, 1e-3, vg46At50, "Elements[0].Bore"},
 		{"fitting K", Path{Elements: []Element{Fitting{Bore: 0.01, K: -1}}}, 1e-3, vg46At50, "Elements[0].K"},
 		{"fitting count", Path{Elements: []Element{Fitting{Bore: 0.01, K: 1, Count: -2}}}, 1e-3, vg46At50, "Elements[0].Count"},
 		{"rated drop", Path{Elements: []Element{Rated{Flow: 1}}}, 1e-3, vg46At50, "Elements[0].Drop"},
@@ -207,6 +208,6 @@ func TestPathBadInput(t *testing.T) {
 		if d.Total != 0 || d.Elements != nil {
 			t.Errorf("%s: non-zero result beside the error", c.name)
 		}
-		wantRangeError(t, c.name, err, c.param)
+		wantRangeErrorIn(t, c.name, err, "line.Path.Drop", c.param)
 	}
 }
