@@ -117,7 +117,7 @@ func FuzzConvert(f *testing.F) {
 		got, err := Convert(v, from, to)
 		if err != nil {
 			known := false
-			for _, sentinel := range []error{ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange, ErrReference} {
+			for _, sentinel := range []error{ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange, ErrReference, ErrAmbiguous} {
 				known = known || errors.Is(err, sentinel)
 			}
 			if !known || got != 0 {

@@ -99,7 +99,7 @@ func checkParseError(t *testing.T, fn, s string, v float64, err error) {
 		t.Errorf("%s(%q) = %g with error %v; want 0", fn, s, v, err)
 	}
 	known := false
-	for _, sentinel := range []error{ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange, ErrReference} {
+	for _, sentinel := range []error{ErrSyntax, ErrUnknownUnit, ErrDimension, ErrRange, ErrReference, ErrAmbiguous} {
 		known = known || errors.Is(err, sentinel)
 	}
 	if !known {
