@@ -62,11 +62,13 @@ const (
 	Runaway                       // uncontrolled speed of an actuator or load
 	Contamination                 // particles or water beyond what a component tolerates
 	ColdStart                     // sluggish or damaging flow in cold oil
+	Structural                    // a part that can buckle, break or tear loose: a rod, a mount, a tie
 )
 
 var hazardNames = [...]string{
 	"none", "stored energy", "suspended load", "overrunning load", "burst", "hot surface",
 	"injection", "cavitation", "filter bypass", "overpressure", "runaway", "contamination", "cold start",
+	"structural failure",
 }
 
 // String returns the hazard's name in words: "stored energy".

@@ -121,7 +121,32 @@ func (s Series[T]) PreferredOnly() Series[T] {
 	return out
 }
 
-// Next returns the smallest size at or above min. It fails with an error
+// Tolerance is the relative amount by which a requirement may exceed a
+// size and still be met by it: 1e-9 (our choice). Binary arithmetic leaves
+// 80 L/min for one minute at 80.000000000000014 L, which must select the
+// 80 L reservoir, not the next; no engineering requirement is stated to
+// nine significant digits. [Series.Next], [Series.Select], [Series.Above],
+// [Series.Below], [Series.Floor] and [Choice.OK] all use it.
+const Tolerance = 1e-9
+
+// from returns the index of the first size that meets v (≥ v within
+// Tolerance), or len(s.values).
+func (s Series[T]) from(v T) int {
+	i, _ := slices.BinarySearch(s.values, v*(1-Tolerance))
+	return i
+}
+
+// beyondIndex returns the index of the first size above v by more than
+// Tolerance, or len(s.values).
+func (s Series[T]) beyondIndex(v T) int {
+	i, found := slices.BinarySearch(s.values, v*(1+Tolerance))
+	if found {
+		i++
+	}
+	return i
+}
+
+// Next returns the smallest size at or above min (within [Tolerance]). It fails with an error
 // matching units.ErrRange when min is not finite and > 0, or is above the
 // largest size (the error names the largest).
 func (s Series[T]) Next(min T) (T, error) {
@@ -129,7 +154,7 @@ func (s Series[T]) Next(min T) (T, error) {
 	if err := validate.Positive(fn, "min", min); err != nil {
 		return 0, err
 	}
-	i, _ := slices.BinarySearch(s.values, min)
+	i := s.from(min)
 	if i == len(s.values) {
 		return 0, s.beyond(fn, "min", min)
 	}
@@ -145,10 +170,7 @@ func (s Series[T]) Above(v T) (T, error) {
 	if err := validate.Positive(fn, "v", v); err != nil {
 		return 0, err
 	}
-	i, found := slices.BinarySearch(s.values, v)
-	if found {
-		i++
-	}
+	i := s.beyondIndex(v)
 	if i == len(s.values) {
 		if i == 0 {
 			return 0, s.beyond(fn, "v", v)
@@ -168,10 +190,7 @@ func (s Series[T]) Floor(max T) (T, error) {
 	if err := validate.Positive(fn, "max", max); err != nil {
 		return 0, err
 	}
-	i, found := slices.BinarySearch(s.values, max)
-	if found {
-		return s.values[i], nil
-	}
+	i := s.beyondIndex(max)
 	if i == 0 {
 		return 0, s.beneath(fn, "max", max)
 	}
@@ -213,7 +232,7 @@ func (s Series[T]) Sizes() []T { return slices.Clone(s.values) }
 // preferredFrom returns the index of the first preferred size ≥ v, or
 // len(s.values).
 func (s Series[T]) preferredFrom(v T) int {
-	i, _ := slices.BinarySearch(s.values, v)
+	i := s.from(v)
 	for i < len(s.values) && s.second != nil && s.second[i] {
 		i++
 	}
@@ -228,7 +247,7 @@ func (s Series[T]) Below(v T) (T, error) {
 	if err := validate.Positive(fn, "v", v); err != nil {
 		return 0, err
 	}
-	i, _ := slices.BinarySearch(s.values, v)
+	i := s.from(v)
 	if i == 0 {
 		return 0, validate.Fail(fn, "v", v, "> "+format(s.Smallest())+", the smallest of "+s.label())
 	}
@@ -270,7 +289,7 @@ func (s Series[T]) Select(required T) (Choice[T], error) {
 		return Choice[T]{}, err
 	}
 	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
-	if i, _ := slices.BinarySearch(s.values, required); i < len(s.values) {
+	if i := s.from(required); i < len(s.values) {
 		c.Chosen = s.values[i]
 	}
 	return c, nil
@@ -379,7 +398,8 @@ type Choice[T ~float64] struct {
 }
 
 // OK reports whether a size was chosen that meets the requirement.
-func (c Choice[T]) OK() bool { return c.Chosen > 0 && c.Chosen >= c.Required }
+// A size within [Tolerance] below the requirement meets it.
+func (c Choice[T]) OK() bool { return c.Chosen > 0 && c.Chosen >= c.Required*(1-Tolerance) }
 
 // Margin returns Chosen/Required − 1, the fraction the chosen size is above
 // the requirement (0.12 for 12 %), or 0 when nothing was chosen or the
@@ -388,7 +408,11 @@ func (c Choice[T]) Margin() float64 {
 	if c.Chosen == 0 || c.Required == 0 {
 		return 0
 	}
-	return float64(c.Chosen/c.Required) - 1
+	m := float64(c.Chosen/c.Required) - 1
+	if m < 0 && c.OK() {
+		return 0 // within Tolerance: the size meets the requirement exactly
+	}
+	return m
 }
 
 type choiceJSON[T ~float64] struct {

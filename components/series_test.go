@@ -6,6 +6,7 @@ import (
 	"math"
 	"slices"
 	"testing"
+	"time"
 
 	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
@@ -292,5 +293,38 @@ func first[T any](v T, _ error) T { return v }
 func TestSeriesAboveEmpty(t *testing.T) {
 	if _, err := (Series[units.Length]{}).Above(1); !errors.Is(err, units.ErrRange) {
 		t.Errorf("Above on an empty series: error = %v; want ErrRange", err)
+	}
+}
+
+// Binary arithmetic leaves 80 L/min for one minute at 80.000000000000014 L:
+// the 80 L size must meet it (Tolerance), and a real excess must not.
+func TestSeriesTolerance(t *testing.T) {
+	l := units.Litre
+	s, err := NewSeries("tanks", Rule{}, []units.Volume{63 * l, 80 * l, 100 * l}, nil)
+	if err != nil {
+		t.Fatal(err)
+	}
+	v := (80 * units.LitrePerMinute).TimesDuration(time.Minute)
+	if v == 80*l {
+		t.Skip("the product rounded exactly; the case this test guards did not arise")
+	}
+	c, err := s.Select(v)
+	if err != nil || c.Chosen != 80*l || !c.OK() || c.Margin() != 0 {
+		t.Errorf("Select(%v) = %+v (OK %v, margin %g), %v; want 80 L, OK, margin 0", float64(v), c, c.OK(), c.Margin(), err)
+	}
+	if n, _ := s.Next(v); n != 80*l {
+		t.Errorf("Next = %v; want 80 L", n)
+	}
+	if f, _ := s.Floor(v); f != 80*l {
+		t.Errorf("Floor = %v; want 80 L", f)
+	}
+	if a, _ := s.Above(v); a != 100*l {
+		t.Errorf("Above = %v; want 100 L", a)
+	}
+	if b, _ := s.Below(v); b != 63*l {
+		t.Errorf("Below = %v; want 63 L", b)
+	}
+	if n, _ := s.Next(80.001 * l); n != 100*l {
+		t.Errorf("Next(80.001 L) = %v; want 100 L (a real excess)", n)
 	}
 }

@@ -32,7 +32,10 @@ const maxExp = 24
 // it. On failure it returns the byte offset within u and the sentinel, with
 // detail text.
 func resolveUnit(u string) (resolved, failure) {
-	if i, ok := spellings[u]; ok {
+	if i, e, ok := lookupName(u); ok {
+		if i < 0 {
+			return resolved{}, failure{err: ErrAmbiguous, detail: ambiguousDetail(u, e)}
+		}
 		return resolvedOf(&unitTable[i]), failure{}
 	}
 	p := exprParser{s: u}
@@ -312,16 +315,20 @@ func (p *exprParser) name() (float64, Dimension, error) {
 			break
 		}
 		j += 1 + n
-		if _, ok := spellings[p.s[start:j]]; ok {
+		if _, _, ok := lookupName(p.s[start:j]); ok {
 			p.i = j
 			word = p.s[start:j]
 		}
 	}
-	k, ok := spellings[word]
-	if !ok {
+	k, e, ok := lookupName(word)
+	switch {
+	case !ok:
 		p.i = start
 		p.word = word
 		return 0, Dimension{}, p.fail(ErrUnknownUnit, unknownDetail(word, nil))
+	case k < 0:
+		p.i = start
+		return 0, Dimension{}, p.fail(ErrAmbiguous, ambiguousDetail(word, e))
 	}
 	u := &unitTable[k]
 	if u.isVacuum() {

@@ -5,7 +5,12 @@ package units
 // carry, the descriptions of the quantity types, and the map from every
 // accepted spelling to its unit.
 
-import "strings"
+import (
+	"sort"
+	"strings"
+	"unicode"
+	"unicode/utf8"
+)
 
 // reference says what a pressure or temperature spelling is measured from.
 type reference uint8
@@ -94,4 +99,149 @@ func buildSpellings() map[string]int {
 		}
 	}
 	return m
+}
+
+// Letter case. A spelling that matches no registered spelling exactly is
+// looked up again with letters folded to lower case (see the package
+// documentation, under Parsing). folds maps each folded registered spelling
+// to the unit it reads as, or, when that could be more than one unit, to
+// the spellings it could be. Among those are the prefix twins of the
+// prefixed spellings: the m of milli and the M of mega differ only in case,
+// so "MPa" folds together with "mPa" (which is not registered) and "Mpa" is
+// ambiguous rather than a silent factor of 10⁹. Built once at start-up and
+// never changed.
+var folds = buildFolds()
+
+// foldEntry is what a folded spelling reads as.
+type foldEntry struct {
+	unit  int      // index in unitTable, or −1 when ambiguous
+	could []string // when ambiguous: the spellings it could be, sorted
+	twins []string // those of them that are m/M prefix twins, not registered
+}
+
+// maxFold is the longest spelling, in bytes, that is looked up by case.
+const maxFold = 64
+
+func buildFolds() map[string]foldEntry {
+	// A candidate is a spelling that folds to the key: a registered spelling
+	// of unit, or (twin) the prefix twin of one.
+	type cand struct {
+		s    string
+		unit int
+		twin bool
+	}
+	all := map[string][]cand{}
+	for s, i := range spellings {
+		var buf [maxFold]byte
+		k := string(appendFold(buf[:0], s))
+		all[k] = append(all[k], cand{s, i, false})
+		if twin, ok := prefixTwin(s, i); ok {
+			k := string(appendFold(buf[:0], twin))
+			all[k] = append(all[k], cand{twin, i, true})
+		}
+	}
+	m := make(map[string]foldEntry, len(all))
+	for k, cs := range all {
+		// One spelling per reading: the unit's symbol where it folds to k
+		// (or its twin), else the first in order.
+		sort.Slice(cs, func(a, b int) bool { return cs[a].s < cs[b].s })
+		pick := map[cand]string{}
+		for _, c := range cs {
+			key := cand{unit: c.unit, twin: c.twin}
+			sym := unitTable[c.unit].sym
+			if c.twin {
+				sym, _ = prefixTwin(sym, c.unit)
+			}
+			if _, seen := pick[key]; !seen || c.s == sym {
+				pick[key] = c.s
+			}
+		}
+		if len(pick) == 1 && !cs[0].twin {
+			m[k] = foldEntry{unit: cs[0].unit}
+			continue
+		}
+		e := foldEntry{unit: -1}
+		for key, s := range pick {
+			e.could = append(e.could, s)
+			if key.twin {
+				e.twins = append(e.twins, s)
+			}
+		}
+		sort.Strings(e.could)
+		m[k] = e
+	}
+	return m
+}
+
+// prefixTwin returns the spelling s with its milli or mega prefix in the
+// other case ("MPa" for "mPa", "Mm" for "mm"), when s is a prefixed spelling
+// of unit i (the rest, "Pa" or "m", is a registered spelling of the same
+// dimension) and the twin is not itself registered.
+func prefixTwin(s string, i int) (string, bool) {
+	if len(s) < 2 || (s[0] != 'm' && s[0] != 'M') {
+		return "", false
+	}
+	j, ok := spellings[s[1:]]
+	if !ok || unitTable[j].dim != unitTable[i].dim {
+		return "", false
+	}
+	twin := string(s[0]^0x20) + s[1:]
+	if _, taken := spellings[twin]; taken {
+		return "", false
+	}
+	return twin, true
+}
+
+// appendFold appends s to b with every letter in lower case.
+func appendFold(b []byte, s string) []byte {
+	for i := 0; i < len(s); {
+		c := s[i]
+		if c < utf8.RuneSelf {
+			if 'A' <= c && c <= 'Z' {
+				c += 'a' - 'A'
+			}
+			b = append(b, c)
+			i++
+			continue
+		}
+		r, n := utf8.DecodeRuneInString(s[i:])
+		b = utf8.AppendRune(b, unicode.ToLower(r))
+		i += n
+	}
+	return b
+}
+
+// lookupFold looks s up by letter case. It returns the unit, or −1 with the
+// entry when s could be more than one unit, or ok false when nothing folds
+// to s. It allocates nothing.
+func lookupFold(s string) (unit int, e foldEntry, ok bool) {
+	if len(s) > maxFold/2 { // folding grows UTF-8 by at most half: the buffer holds it
+		return 0, foldEntry{}, false
+	}
+	var buf [maxFold]byte
+	e, ok = folds[string(appendFold(buf[:0], s))]
+	for _, t := range e.twins {
+		if s == t { // "mPa" is no unit: unknown, not ambiguous
+			return 0, foldEntry{}, false
+		}
+	}
+	return e.unit, e, ok
+}
+
+// lookupName returns the unit of spelling s: exactly, else by letter case.
+// A spelling that folds to more than one unit gives −1 and its entry.
+func lookupName(s string) (int, foldEntry, bool) {
+	if i, ok := spellings[s]; ok {
+		return i, foldEntry{}, true
+	}
+	return lookupFold(s)
+}
+
+// ambiguousDetail says what s could be, for an ErrAmbiguous error.
+func ambiguousDetail(s string, e foldEntry) string {
+	d := `"` + s + `" matches no spelling exactly; ignoring letter case it could be "` + strings.Join(e.could, `" or "`) + `"`
+	if len(e.twins) > 0 {
+		d += " (m is milli, 10⁻³; M is mega, 10⁶)"
+	}
+	return d + ": write the one you mean"
 }

@@ -103,9 +103,13 @@ const (
 //	λ < λ_c  Johnson:  P = A·σ_y·(1 − σ_y·λ²/(4π²E)), A = π·d²/4
 //
 // Johnson's parabola meets Euler's curve tangentially at λ_c, where both
-// give σ_y/2 (Johnson's parabolic formula; Shigley's Mechanical Engineering
-// Design, section on columns, from memory). All inputs must be finite and
-// > 0; errors match units.ErrRange.
+// give σ_y/2 (J. B. Johnson's parabolic column formula, as in Shigley's
+// Mechanical Engineering Design, section on columns, from memory; the form
+// and the tangency were confirmed in the Wikipedia article "Johnson's
+// parabolic formula"). The rod is taken straight and centrally loaded; side
+// load, eccentric mounting and a bent rod lower the real critical load,
+// which the safety factor must cover. All inputs must be finite and > 0;
+// errors match units.ErrRange.
 func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod, error) {
 	const fn = "actuator.CriticalLoad"
 	for _, c := range [...]struct {
@@ -117,7 +121,10 @@ func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, Buc
 		}
 	}
 	p, m := critical(d, lk, e, yield)
-	return p, m, validate.Result(fn, "P", p)
+	if err := validate.Result(fn, "P", p); err != nil {
+		return 0, Euler, err
+	}
+	return p, m, nil
 }
 
 func critical(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod) {
@@ -251,7 +258,10 @@ func (c Column) Check() (BucklingCheck, error) {
 	if err := validate.Result(fn, "Critical", r.Critical); err != nil {
 		return BucklingCheck{}, err
 	}
-	return r, validate.Result(fn, "Thrust", r.Thrust)
+	if err := validate.Result(fn, "Thrust", r.Thrust); err != nil {
+		return BucklingCheck{}, err
+	}
+	return r, nil
 }
 
 func (c Column) check() BucklingCheck {
@@ -264,7 +274,7 @@ func (c Column) check() BucklingCheck {
 	r.Thrust = c.Relief.TimesArea(c.Cylinder.Area(Extend))
 	r.Safety = components.Reaches(float64(r.Critical/r.Thrust), n, nr)
 	if !r.Safety.OK() {
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling", nr,
 			"the %v rod buckles at %v (%v), only %v times the relief-valve thrust of %v; choose a thicker rod, a shorter free length or a stiffer mounting",
 			c.Cylinder.Rod, r.Critical, r.Method.String(), r.Safety.Value, r.Thrust)}
@@ -308,7 +318,7 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
 		r.Rod.Chosen = 0
 		_, _, _, _, n, nr := c.setup()
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling-no-rod", nr,
 			"no standard rod below the %v bore reaches a buckling safety factor of %v (at least %v is needed); shorten the free length, stiffen the mounting or choose a larger bore",
 			c.Cylinder.Bore, n, least)}

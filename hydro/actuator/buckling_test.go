@@ -15,8 +15,10 @@ const (
 )
 
 // TestEffectiveLengthFactor: Euler's cases, K = 0.5 fixed–fixed, 0.7
-// fixed–pinned, 1 pinned–pinned, 2 fixed–free (any strength-of-materials
-// text; the four values as CHECKS of the project list them [S]).
+// fixed–pinned (0.699 exactly, rounded as design texts print it),
+// 1 pinned–pinned, 2 fixed–free (Timoshenko and Gere, Theory of Elastic
+// Stability, 2nd ed., chapter 2, from memory; the same four in any
+// strength-of-materials text).
 func TestEffectiveLengthFactor(t *testing.T) {
 	for _, w := range []struct {
 		body BodyMount
@@ -43,8 +45,9 @@ func TestEffectiveLengthFactor(t *testing.T) {
 	checktest.RangeError(t, err, "rod")
 }
 
-// TestEulerClosedForm: P = π²·E·I/(K·L)², I = π·d⁴/64 (Euler; CHECKS of the
-// project [S]). A 40 mm steel rod, 2 m between pins: I = 1.2566·10⁻⁷ m⁴,
+// TestEulerClosedForm: P = π²·E·I/(K·L)², I = π·d⁴/64 (Euler's column
+// formula; Timoshenko and Gere, Theory of Elastic Stability, 2nd ed., from
+// memory). A 40 mm steel rod, 2 m between pins: I = 1.2566·10⁻⁷ m⁴,
 // P = 65.11 kN; λ = 200, above λ_c = 108 for 355 MPa steel. The same rod
 // 3 m long under each K carries π²EI/(3K)² (λ ≥ 150: Euler throughout).
 func TestEulerClosedForm(t *testing.T) {
@@ -166,7 +169,7 @@ func TestColumnCheck(t *testing.T) {
 		!near(r.Safety.Value, float64(wantP/r.Thrust), 1e-12) {
 		t.Errorf("safety = %+v; want a failed check against 3.5 (common practice)", r.Safety)
 	}
-	if len(r.Findings.AtLeast(components.Warning).Topic("actuator.buckling")) != 1 {
+	if len(r.Findings.AtLeast(components.Warning).Topic("actuator.buckling").Hazard(components.Structural)) != 1 {
 		t.Errorf("findings %v; want a buckling warning", r.Findings)
 	}
 	// Passing: a short stocky rod.
@@ -226,7 +229,7 @@ func TestMinimumRod(t *testing.T) {
 	c := balerColumn()
 	c.Retracted = 3 * units.Metre
 	r, err := c.MinimumRod(components.Series[units.Length]{})
-	if err != nil || r.Rod.OK() || r.Rod.Chosen != 0 || len(r.Findings.Topic("actuator.buckling-no-rod")) != 1 {
+	if err != nil || r.Rod.OK() || r.Rod.Chosen != 0 || len(r.Findings.Topic("actuator.buckling-no-rod").Hazard(components.Structural)) != 1 {
 		t.Errorf("no rod passes: %+v, %v", r, err)
 	}
 }

@@ -122,7 +122,10 @@ func (c Cylinder) Move(dir Direction, p Profile) (StrokeMotion, error) {
 	if c.Action == DoubleActing {
 		r.PeakReturn = m.PeakSpeed.TimesArea(c.OutletArea(dir))
 	}
-	return r, validate.Result(fn, "PeakFlow", r.PeakFlow)
+	if err := validate.Result(fn, "PeakFlow", r.PeakFlow); err != nil {
+		return StrokeMotion{}, err
+	}
+	return r, nil
 }
 
 // Ramp holds a ramp time t (an acceleration or deceleration time, in

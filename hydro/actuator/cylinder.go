@@ -239,7 +239,7 @@ func (c Cylinder) FlowFor(dir Direction, v units.Velocity) (units.Flow, error) {
 		return 0, err
 	}
 	q := v.TimesArea(c.Area(dir))
-	return q, validate.Result(fn, "Q", q)
+	return validate.Checked(fn, "Q", q)
 }
 
 // ReturnFlow returns the flow leaving the outlet side when flow q enters
@@ -259,7 +259,7 @@ func (c Cylinder) ReturnFlow(dir Direction, q units.Flow) (units.Flow, error) {
 		return 0, nil
 	}
 	r := q * units.Flow(c.OutletArea(dir)/c.Area(dir))
-	return r, validate.Result(fn, "Q_out", r)
+	return validate.Checked(fn, "Q_out", r)
 }
 
 // StrokeTime returns the time for a full stroke dir at constant inlet flow

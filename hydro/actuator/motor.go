@@ -77,7 +77,7 @@ func (m Motor) Torque(dp units.Pressure) (units.Torque, error) {
 		return 0, err
 	}
 	t := m.Displacement.TimesPressure(dp) * units.Torque(m.Mechanical)
-	return t, validate.Result(fn, "T", t)
+	return validate.Checked(fn, "T", t)
 }
 
 // StartingTorque returns the breakaway torque at pressure difference dp
@@ -89,7 +89,7 @@ func (m Motor) StartingTorque(dp units.Pressure) (units.Torque, error) {
 	}
 	eta, _ := m.starting()
 	t := m.Displacement.TimesPressure(dp) * units.Torque(eta)
-	return t, validate.Result(fn, "T", t)
+	return validate.Checked(fn, "T", t)
 }
 
 // PressureFor returns the pressure difference that gives running torque t
@@ -100,7 +100,7 @@ func (m Motor) PressureFor(t units.Torque) (units.Pressure, error) {
 		return 0, err
 	}
 	p := units.Pressure(2 * math.Pi * float64(t) / (float64(m.Displacement) * m.Mechanical))
-	return p, validate.Result(fn, "dp", p)
+	return validate.Checked(fn, "dp", p)
 }
 
 // Speed returns the shaft speed on flow q (finite, > 0): n = Q·η_v/D.
@@ -110,7 +110,7 @@ func (m Motor) Speed(q units.Flow) (units.RotationalSpeed, error) {
 		return 0, err
 	}
 	n := units.RotationalSpeed(float64(q) * m.Volumetric / float64(m.Displacement))
-	return n, validate.Result(fn, "n", n)
+	return validate.Checked(fn, "n", n)
 }
 
 // FlowFor returns the flow that turns the shaft at speed n (finite, > 0):
@@ -122,7 +122,7 @@ func (m Motor) FlowFor(n units.RotationalSpeed) (units.Flow, error) {
 		return 0, err
 	}
 	q := m.Displacement.TimesSpeed(n) / units.Flow(m.Volumetric)
-	return q, validate.Result(fn, "Q", q)
+	return validate.Checked(fn, "Q", q)
 }
 
 // Power returns the shaft power with pressure difference dp and flow q
@@ -138,7 +138,7 @@ func (m Motor) Power(dp units.Pressure, q units.Flow) (units.Power, error) {
 		return 0, err
 	}
 	p := dp.TimesFlow(q) * units.Power(m.Volumetric*m.Mechanical)
-	return p, validate.Result(fn, "P", p)
+	return validate.Checked(fn, "P", p)
 }
 
 // checkMotor validates the motor and one positive argument.

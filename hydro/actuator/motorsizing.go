@@ -85,7 +85,10 @@ func (d MotorDuty) Size() (MotorSize, error) {
 			d.Pressure, components.CallerRule("MotorDuty.Pressure"))
 	}
 	r.Findings = d.findings(r)
-	return r, validate.Result(fn, "Flow", r.Flow)
+	if err := validate.Result(fn, "Flow", r.Flow); err != nil {
+		return MotorSize{}, err
+	}
+	return r, nil
 }
 
 // displacementFor returns D = 2π·T/(Δp·η).

@@ -54,5 +54,8 @@ func (c Cylinder) Regenerative(q units.Flow, p units.Pressure) (Regeneration, er
 	if err := validate.Result(fn, "Force", r.Force); err != nil {
 		return Regeneration{}, err
 	}
-	return r, validate.Result(fn, "CapFlow", r.CapFlow)
+	if err := validate.Result(fn, "CapFlow", r.CapFlow); err != nil {
+		return Regeneration{}, err
+	}
+	return r, nil
 }

@@ -217,7 +217,7 @@ func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
 			"< "+units.Pressure(float64(d.Pressure)*in/out).String()+" (the inlet pressure times the area ratio)")
 	}
 	bore := diameterOf(units.Area(float64(total) / net))
-	return bore, validate.Result(fn, "bore", bore)
+	return validate.Checked(fn, "bore", bore)
 }
 
 // CylinderSize is the result of sizing a cylinder for a [Duty]: the forces,

@@ -36,7 +36,7 @@ func WaveSpeed(rho units.Density, fluidBulk, wallBulk units.Pressure) (units.Vel
 		inv += 1 / float64(wallBulk)
 	}
 	a := units.Velocity(math.Sqrt(1 / inv / float64(rho)))
-	return a, validate.Result(fn, "a", a)
+	return validate.Checked(fn, "a", a)
 }
 
 // Joukowsky returns the pressure rise when a column of oil of density rho
@@ -57,7 +57,7 @@ func Joukowsky(rho units.Density, a, dv units.Velocity) (units.Pressure, error) 
 		return 0, err
 	}
 	p := units.Pressure(float64(rho) * float64(a) * float64(dv))
-	return p, validate.Result(fn, "Δp", p)
+	return validate.Checked(fn, "Δp", p)
 }
 
 // Wall is the elastic wall of a line for the wave speed: a tube of inside

@@ -1,7 +1,6 @@
 package thermal
 
 import (
-	"strconv"
 	"time"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -65,9 +64,8 @@ func reservoirVolumes() components.Series[units.Volume] { return components.Rese
 
 // SizeReservoir returns the nominal volume V = Q·t for pump flow q and
 // dwell d, and the next volume of components.ReservoirVolumes (R10 litres,
-// common practice). V is rounded to 12 significant digits first, so that
-// 80 L/min for a minute is 80 L, not the 80.000000000000014 L of binary
-// arithmetic that would select 100 L. A volume above the series comes back
+// common practice); components.Tolerance lets 80 L/min for a minute select
+// 80 L despite binary rounding. A volume above the series comes back
 // unchosen (Volume.OK() false). q must be finite and > 0, d.Time > 0.
 func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 	const fn = "thermal.SizeReservoir"
@@ -77,7 +75,7 @@ func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 	if d.Time <= 0 {
 		return ReservoirSize{}, validate.Fail(fn, "d.Time", d.Time.Seconds(), "> 0 s")
 	}
-	v := decimal(q.TimesDuration(d.Time))
+	v := q.TimesDuration(d.Time)
 	if err := validate.Positive(fn, "volume", v); err != nil {
 		return ReservoirSize{}, err
 	}
@@ -86,12 +84,6 @@ func SizeReservoir(q units.Flow, d Dwell) (ReservoirSize, error) {
 		return ReservoirSize{}, err
 	}
 	return ReservoirSize{Volume: ch, Dwell: d}, nil
-}
-
-// decimal rounds v to 12 significant digits.
-func decimal(v units.Volume) units.Volume {
-	r, _ := strconv.ParseFloat(strconv.FormatFloat(float64(v), 'g', 12, 64), 64)
-	return units.Volume(r)
 }
 
 // Tank is a rectangular reservoir: inside length, width and height, and
@@ -123,7 +115,7 @@ func (t Tank) OilVolume() (units.Volume, error) {
 		return 0, err
 	}
 	v := units.Volume(float64(t.Length) * float64(t.Width) * float64(t.Level))
-	return v, validate.Result(fn, "volume", v)
+	return validate.Checked(fn, "volume", v)
 }
 
 // WettedArea returns the wall area the oil touches, through which it gives
@@ -137,7 +129,7 @@ func (t Tank) WettedArea() (units.Area, error) {
 	}
 	l, w := float64(t.Length), float64(t.Width)
 	a := units.Area(l*w + 2*(l+w)*float64(t.Level))
-	return a, validate.Result(fn, "area", a)
+	return validate.Checked(fn, "area", a)
 }
 
 // SurfaceArea returns the whole outside area of the box, 2·(LW + LH + WH),
@@ -149,7 +141,7 @@ func (t Tank) SurfaceArea() (units.Area, error) {
 	}
 	l, w, h := float64(t.Length), float64(t.Width), float64(t.Height)
 	a := units.Area(2 * (l*w + l*h + w*h))
-	return a, validate.Result(fn, "area", a)
+	return validate.Checked(fn, "area", a)
 }
 
 // StillAir is the usual heat-transfer coefficient of a steel reservoir wall
@@ -171,7 +163,7 @@ func Dissipation(h units.HeatTransferCoefficient, a units.Area) (Conductance, er
 		return 0, err
 	}
 	c := Conductance(float64(h) * float64(a))
-	return c, validate.Result(fn, "h·A", c)
+	return validate.Checked(fn, "h·A", c)
 }
 
 // SteadyTemperature returns the oil temperature at which surfaces of
@@ -190,5 +182,5 @@ func SteadyTemperature(load units.Power, ua Conductance, ambient units.Temperatu
 		return 0, err
 	}
 	t := ambient.Add(units.TemperatureDifference(float64(load) / float64(ua)))
-	return t, validate.Result(fn, "T", t)
+	return validate.Checked(fn, "T", t)
 }

@@ -67,3 +67,16 @@ func TestNoAllocationsWhenValid(t *testing.T) {
 		t.Errorf("Positive allocates %v times on a valid value", n)
 	}
 }
+
+func TestChecked(t *testing.T) {
+	if v, err := validate.Checked("pkg.F", "Q", 2.5); v != 2.5 || err != nil {
+		t.Errorf("Checked(2.5) = %v, %v", v, err)
+	}
+	for _, bad := range []float64{math.NaN(), math.Inf(1), math.Inf(-1)} {
+		v, err := validate.Checked("pkg.F", "Q", bad)
+		var re *units.RangeError
+		if v != 0 || !errors.As(err, &re) || re.Param != "Q" || re.Func != "pkg.F" {
+			t.Errorf("Checked(%v) = %v, %v; want 0 and a RangeError naming Q", bad, v, err)
+		}
+	}
+}
