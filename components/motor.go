@@ -49,8 +49,8 @@ func NEMAMotorRatings() Series[units.Power] { return nemaMotorRatings }
 // (f in Hz, p poles; a machine with p poles has p/2 pole pairs). At 50 Hz a
 // 4-pole motor turns at 1500 rev/min synchronous, at 60 Hz 1800 rev/min; an
 // induction motor runs a few per cent below it by its slip. It fails with an
-// error matching units.ErrRange when poles is not an even number ≥ 2 or
-// mains is not finite and > 0.
+// error matching units.ErrRange when poles is not an even number ≥ 2,
+// mains is not finite and > 0, or the speed underflows to 0.
 func SynchronousSpeed(poles int, mains units.Frequency) (units.RotationalSpeed, error) {
 	const fn = "components.SynchronousSpeed"
 	if poles < 2 || poles%2 != 0 {
@@ -59,5 +59,9 @@ func SynchronousSpeed(poles int, mains units.Frequency) (units.RotationalSpeed, 
 	if err := validate.Positive(fn, "mains", mains); err != nil {
 		return 0, err
 	}
-	return units.RotationalSpeed(float64(mains) / float64(poles/2)), nil
+	n := units.RotationalSpeed(float64(mains) / float64(poles/2))
+	if err := validate.PositiveResult(fn, "n", n); err != nil {
+		return 0, err // a mains frequency so small that the speed underflows to 0
+	}
+	return n, nil
 }
