@@ -116,7 +116,9 @@
 // All functions and methods are safe for concurrent use. Functions that
 // return an error validate every input and return errors matching
 // units.ErrRange that name the parameter or field; on error they return the
-// zero value. Sizing, buckling checks, the oil spring, motions and the
+// zero value. Inputs at the ends of the float range whose arithmetic
+// overflows (a denormal rod, a 1e300 m bore) give an error naming the
+// result, never a NaN or ±Inf beside a nil error. Sizing, buckling checks, the oil spring, motions and the
 // cylinder and motor calculations allocate nothing unless they return
 // findings or fail.
 package actuator

@@ -77,7 +77,11 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	if err != nil {
 		return Intensification{}, rename(err, fn)
 	}
-	r := Intensification{Pressure: po, Ratio: float64(po / p),
+	ratio, err := checked(fn, "Ratio", float64(po/p))
+	if err != nil {
+		return Intensification{}, err // an inlet pressure so small that p_out/p overflows
+	}
+	r := Intensification{Pressure: po, Ratio: ratio,
 		Rating: components.Within(po, c.Rating, components.CallerRule("Cylinder.Rating"))}
 	if !r.Rating.OK() {
 		r.Findings = components.Findings{components.NewFinding(components.Danger, components.Overpressure,

@@ -84,7 +84,20 @@ func (d Duty) Forces() (LoadForces, error) {
 	if err := d.validate(fn); err != nil {
 		return LoadForces{}, err
 	}
-	return d.forces(), nil
+	return d.loads(fn)
+}
+
+// loads returns the breakdown of the force, or an error naming the first
+// term that overflows (a mass or friction coefficient so large that m·g·μ
+// is not finite).
+func (d Duty) loads(fn string) (LoadForces, error) {
+	l := d.forces()
+	if err := finite(fn, output{"Gravity", float64(l.Gravity)}, output{"Friction", float64(l.Friction)},
+		output{"Accel", float64(l.Accel)}, output{"Acceleration", float64(l.Acceleration)},
+		output{"Total", float64(l.Total())}); err != nil {
+		return LoadForces{}, err
+	}
+	return l, nil
 }
 
 func (d Duty) forces() LoadForces {
@@ -193,7 +206,11 @@ func (d Duty) MinimumBore() (units.Length, error) {
 	if err := d.validate(fn); err != nil {
 		return 0, err
 	}
-	return d.minimumBore(fn, d.forces().Total())
+	l, err := d.loads(fn)
+	if err != nil {
+		return 0, err
+	}
+	return d.minimumBore(fn, l.Total())
 }
 
 func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
@@ -216,8 +233,7 @@ func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
 		return 0, validate.Fail(fn, "Duty.BackPressure", d.BackPressure,
 			"< "+units.Pressure(float64(d.Pressure)*in/out).String()+" (the inlet pressure times the area ratio)")
 	}
-	bore := diameterOf(units.Area(float64(total) / net))
-	return bore, validate.Result(fn, "bore", bore)
+	return checked(fn, "bore", diameterOf(units.Area(float64(total)/net)))
 }
 
 // CylinderSize is the result of sizing a cylinder for a [Duty]: the forces,
@@ -281,7 +297,11 @@ func (d Duty) Size() (CylinderSize, error) {
 	if err := d.validate(fn); err != nil {
 		return CylinderSize{}, err
 	}
-	r := CylinderSize{Forces: d.forces()}
+	forces, err := d.loads(fn)
+	if err != nil {
+		return CylinderSize{}, err
+	}
+	r := CylinderSize{Forces: forces}
 	r.SealEfficiency, r.SealRule = d.efficiency()
 	r.AreaRatio, r.AreaRatioRule = d.ratio()
 	if d.Buckling != nil {
@@ -324,6 +344,9 @@ func (d Duty) Size() (CylinderSize, error) {
 		r.Flow = d.Speed.TimesArea(r.Cylinder.Area(d.Direction))
 		if d.Action == DoubleActing {
 			r.ReturnFlow = d.Speed.TimesArea(r.Cylinder.OutletArea(d.Direction))
+		}
+		if err := finite(fn, output{"Flow", float64(r.Flow)}, output{"ReturnFlow", float64(r.ReturnFlow)}); err != nil {
+			return CylinderSize{}, err
 		}
 	}
 	r.Findings = d.findings(r, bores)
