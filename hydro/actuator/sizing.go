@@ -193,9 +193,13 @@ func (d Duty) ratio() (float64, components.Rule) {
 // (see [LoadForces]) at the available pressure, with the seal efficiency η
 // and a rod that gives the least area ratio φ = A₁/A₂:
 //
-//	η·(p·A_in − p_back·A_out) ≥ F,  A₁ = F / (η·(p·a_in − p_back·a_out)),  D = √(4·A₁/π)
+//	η·p·A_in − p_back·A_out ≥ F,  A₁ = F / (η·p·a_in − p_back·a_out),  D = √(4·A₁/π)
 //
-// where a_in, a_out are 1 for the cap side and 1/φ for an annulus side. It
+// where a_in, a_out are 1 for the cap side and 1/φ for an annulus side.
+// Seal friction takes its share (1 − η) of the driving force p·A_in (the
+// allowance grows with the working pressure, as seal friction does); the
+// back pressure opposes the motion in full, friction never helping against
+// it. It
 // fails with an error matching units.ErrRange for a bad field (see
 // [Duty.Size]), when the total force is not > 0 (a lowering stroke the load
 // drives on its own has nothing to size: size the lifting stroke, and hold
@@ -228,10 +232,11 @@ func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
 	default:
 		out = 1
 	}
-	net := eta * (float64(d.Pressure)*in - float64(d.BackPressure)*out)
+	net := eta*float64(d.Pressure)*in - float64(d.BackPressure)*out
 	if net <= 0 {
 		return 0, validate.Fail(fn, "Duty.BackPressure", d.BackPressure,
-			"< "+units.Pressure(float64(d.Pressure)*in/out).String()+" (the inlet pressure times the area ratio)")
+			"< "+units.Pressure(eta*float64(d.Pressure)*in/out).String()+
+				" (the inlet pressure after seal friction times the area ratio)")
 	}
 	return checked(fn, "bore", diameterOf(units.Area(float64(total)/net)))
 }
@@ -246,8 +251,9 @@ type CylinderSize struct {
 	Cylinder Cylinder                        // the chosen cylinder; zero when no standard size meets the duty
 
 	// Pressure is the pressure the chosen cylinder needs at the inlet for
-	// the total force (after seal friction, against the back pressure),
-	// held at most at Duty.Pressure. When no standard size meets the duty
+	// the total force, p = (F + p_back·A_out)/(η·A_in) (seal friction takes
+	// its share of p·A_in; the back pressure opposes in full), held at most
+	// at Duty.Pressure. When no standard size meets the duty
 	// it is the failed check of the largest bore with a rod of exactly the
 	// least area ratio.
 	Pressure components.Check[units.Pressure]
@@ -316,7 +322,6 @@ func (d Duty) Size() (CylinderSize, error) {
 	}
 	bores, rods := boresOr(d.Bores), rodsOr(d.Rods)
 	r.Bore = components.Choice[units.Length]{Required: minBore, Series: bores.Name(), Rule: bores.Rule()}
-	need := total / units.Force(r.SealEfficiency)
 	found := false
 	for b := range bores.All() {
 		if b < minBore {
@@ -327,7 +332,7 @@ func (d Duty) Size() (CylinderSize, error) {
 			r.Rod = rod
 			continue
 		}
-		p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+		p, err := d.needs(c, total, r.SealEfficiency)
 		if err != nil {
 			return CylinderSize{}, rename(err, fn)
 		}
@@ -339,7 +344,7 @@ func (d Duty) Size() (CylinderSize, error) {
 	}
 	if !found {
 		r.Bore.Chosen, r.Cylinder, r.Buckling = 0, Cylinder{}, nil
-		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, need)
+		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, total, r.SealEfficiency)
 	} else if d.Speed > 0 {
 		r.Flow = d.Speed.TimesArea(r.Cylinder.Area(d.Direction))
 		if d.Action == DoubleActing {
@@ -353,12 +358,23 @@ func (d Duty) Size() (CylinderSize, error) {
 	return r, nil
 }
 
+// needs returns the inlet pressure cylinder c needs for total force f with
+// seal efficiency eta: p = (F + p_back·A_out)/(η·A_in).
+func (d Duty) needs(c Cylinder, f units.Force, eta float64) (units.Pressure, error) {
+	const fn = "actuator.Duty.Size"
+	p, err := c.PressureFor(d.Direction, f, d.BackPressure)
+	if err != nil {
+		return 0, err
+	}
+	return checked(fn, "p", p/units.Pressure(eta))
+}
+
 // largestNeeds returns the failed pressure check of a duty no standard size
 // meets: the pressure the largest bore would need with a rod of exactly the
 // least area ratio.
-func (d Duty) largestNeeds(bore units.Length, phi float64, need units.Force) components.Check[units.Pressure] {
+func (d Duty) largestNeeds(bore units.Length, phi float64, f units.Force, eta float64) components.Check[units.Pressure] {
 	c := Cylinder{Bore: bore, Rod: bore * units.Length(math.Sqrt(1-1/phi)), Stroke: d.Stroke, Ends: d.Ends}
-	p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+	p, err := d.needs(c, f, eta)
 	if err != nil {
 		p = units.Pressure(math.MaxFloat64) // beyond any finite limit: still a failed check
 	}
