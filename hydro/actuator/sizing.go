@@ -253,8 +253,10 @@ type CylinderSize struct {
 	// Pressure is the pressure the chosen cylinder needs at the inlet for
 	// the total force, p = (F + p_back·A_out)/(η·A_in) (seal friction takes
 	// its share of p·A_in; the back pressure opposes in full), held at most
-	// at Duty.Pressure. When no standard size meets the duty
-	// it is the failed check of the largest bore with a rod of exactly the
+	// at Duty.Pressure. When no standard size meets the duty it is the
+	// failed check of the largest bore tried with its standard rod, or, when
+	// no bore could be tried (the minimum bore is beyond the series, or no
+	// rod fits), the check of the largest bore with a rod of exactly the
 	// least area ratio.
 	Pressure components.Check[units.Pressure]
 
@@ -283,8 +285,9 @@ type CylinderSize struct {
 // that cylinder actually needs.
 //
 // A requirement beyond the largest standard bore or rod is not an error:
-// the result carries a failed choice (Chosen 0, OK false), a zero Cylinder
-// and a finding, so a report can show it beside the rest.
+// the result carries failed bore and rod choices (Chosen 0, OK false), a
+// zero Cylinder and a finding (with the buckling warning when no standard
+// rod passes the buckling check), so a report can show it beside the rest.
 //
 // The result's findings include the load-holding cautions: a load the stroke
 // raises (its weight along the path exceeding its friction) would drive the
@@ -322,29 +325,33 @@ func (d Duty) Size() (CylinderSize, error) {
 	}
 	bores, rods := boresOr(d.Bores), rodsOr(d.Rods)
 	r.Bore = components.Choice[units.Length]{Required: minBore, Series: bores.Name(), Rule: bores.Rule()}
-	found := false
+	found, tried := false, false
+	var why components.Findings // why the last bore tried had no rod
 	for b := range bores.All() {
 		if b < minBore {
 			continue
 		}
-		c, rod, bk, ok := d.tryBore(b, rods, r.AreaRatio)
+		f, ok := d.tryBore(b, rods, r.AreaRatio)
 		if !ok {
-			r.Rod = rod
+			r.Rod, why = f.rod, f.why
 			continue
 		}
-		p, err := d.needs(c, total, r.SealEfficiency)
+		p, err := d.needs(f.cyl, total, r.SealEfficiency)
 		if err != nil {
 			return CylinderSize{}, rename(err, fn)
 		}
-		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling = b, rod, c, bk
+		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling, why = b, f.rod, f.cyl, f.bk, nil
 		r.Pressure = components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
+		tried = true
 		if found = r.Pressure.OK(); found {
 			break
 		}
 	}
 	if !found {
-		r.Bore.Chosen, r.Cylinder, r.Buckling = 0, Cylinder{}, nil
-		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, total, r.SealEfficiency)
+		r.Bore.Chosen, r.Rod.Chosen, r.Cylinder, r.Buckling = 0, 0, Cylinder{}, nil
+		if !tried {
+			r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, total, r.SealEfficiency)
+		}
 	} else if d.Speed > 0 {
 		r.Flow = d.Speed.TimesArea(r.Cylinder.Area(d.Direction))
 		if d.Action == DoubleActing {
@@ -354,7 +361,7 @@ func (d Duty) Size() (CylinderSize, error) {
 			return CylinderSize{}, err
 		}
 	}
-	r.Findings = d.findings(r, bores)
+	r.Findings = d.findings(r, bores, why)
 	return r, nil
 }
 
@@ -381,27 +388,38 @@ func (d Duty) largestNeeds(bore units.Length, phi float64, f units.Force, eta fl
 	return components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
 }
 
+// fit is a bore with the rod chosen for it: the cylinder, the rod choice,
+// the buckling check when one was asked for, and, when no rod fits the
+// bore, the findings that say why.
+type fit struct {
+	cyl Cylinder
+	rod components.Choice[units.Length]
+	bk  *BucklingCheck
+	why components.Findings
+}
+
 // tryBore picks the rod for bore b: the smallest standard rod giving at
 // least area ratio phi and, when d.Buckling is set, passing the buckling
-// check. ok is false when no standard rod below the bore does.
-func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (Cylinder, components.Choice[units.Length], *BucklingCheck, bool) {
+// check. ok is false when no standard rod below the bore does; the fit's
+// rod then has Chosen 0.
+func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (fit, bool) {
 	c := Cylinder{Bore: b, Stroke: d.Stroke, Ends: d.Ends, Action: d.Action}
 	least := b * units.Length(math.Sqrt(1-1/phi))
 	rod, err := rods.Select(least)
 	if err != nil || !rod.OK() || rod.Chosen >= b {
 		rod.Chosen = 0
-		return Cylinder{}, rod, nil, false
+		return fit{rod: rod}, false
 	}
 	c.Rod = rod.Chosen
 	if d.Buckling == nil {
-		return c, rod, nil, true
+		return fit{cyl: c, rod: rod}, true
 	}
 	col := *d.Buckling
 	col.Cylinder = c
 	bk, err := col.MinimumRod(rods)
 	if err != nil || !bk.Rod.OK() || bk.Rod.Chosen >= b {
-		rod.Chosen = 0
-		return Cylinder{}, rod, nil, false
+		bk.Rod.Chosen = 0
+		return fit{rod: bk.Rod, why: bk.Findings}, false
 	}
 	if bk.Rod.Chosen > rod.Chosen {
 		rod = bk.Rod
@@ -410,13 +428,16 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 	col.Cylinder = c
 	chk, err := col.Check()
 	if err != nil {
-		return Cylinder{}, rod, nil, false
+		rod.Chosen = 0
+		return fit{rod: rod}, false
 	}
-	return c, rod, &chk, true
+	return fit{cyl: c, rod: rod, bk: &chk}, true
 }
 
-// findings gathers the cautions and design notes of a sizing.
-func (d Duty) findings(r CylinderSize, bores components.Series[units.Length]) components.Findings {
+// findings gathers the cautions and design notes of a sizing; why says why
+// the last bore tried had no rod (a buckling warning), when that is why no
+// size was chosen.
+func (d Duty) findings(r CylinderSize, bores components.Series[units.Length], why components.Findings) components.Findings {
 	var fs components.Findings
 	if f, ok := d.holding(r.Forces); ok {
 		fs = append(fs, f)
@@ -439,6 +460,9 @@ func (d Duty) findings(r CylinderSize, bores components.Series[units.Length]) co
 	}
 	if r.Buckling != nil {
 		fs = fs.Merge(r.Buckling.Findings...)
+	}
+	if r.Bore.Chosen == 0 {
+		fs = fs.Merge(why...)
 	}
 	return fs
 }

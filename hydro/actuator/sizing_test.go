@@ -226,6 +226,28 @@ func TestSizeBeyondSeries(t *testing.T) {
 	}
 }
 
+// TestSizeNoBoreNoRod: the minimum bore, 499 mm, is within ISO 3320, but
+// the 500 mm bore with the 360 mm rod its least area ratio 2 asks for needs
+// 880 kN/(0.9·π/4·(0.5² − 0.36²)) = 114.9 bar for the pull, more than the
+// 100 bar available (hand arithmetic [X]): no cylinder is chosen, so no rod
+// is chosen either.
+func TestSizeNoBoreNoRod(t *testing.T) {
+	d := Duty{Direction: Retract, Force: 880 * units.Kilonewton, Pressure: 100 * units.Bar, AreaRatio: 2, Stroke: 1}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Bore.Required, 499.0*mm, 1e-3) || r.Bore.Chosen != 0 || r.Cylinder != (Cylinder{}) {
+		t.Errorf("bore %+v, cylinder %+v; want 499 mm required and none chosen", r.Bore, r.Cylinder)
+	}
+	if r.Rod.Chosen != 0 || r.Rod.OK() {
+		t.Errorf("rod %+v; want no rod chosen when no bore is", r.Rod)
+	}
+	if r.Pressure.OK() || len(r.Findings.Topic("actuator.no-standard-size")) != 1 {
+		t.Errorf("pressure %+v, findings %v; want a failed check and the no-standard-size notice", r.Pressure, r.Findings)
+	}
+}
+
 func TestSizeCallerSeries(t *testing.T) {
 	in := units.Inch
 	bores, _ := components.NewSeries("test inch bores", components.PracticeRule("test"),
