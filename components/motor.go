@@ -13,7 +13,7 @@ const (
 )
 
 var (
-	iecMotorRatings = fixed("IEC 60072-1 motor ratings", StandardRule("IEC 60072-1:1991, clause 9"),
+	iecMotorRatings = fixed("IEC 60072-1 motor ratings", StandardRule("IEC 60072-1:1991, rated output series"),
 		[]units.Power{0.06 * kW, 0.09 * kW, 0.12 * kW, 0.18 * kW, 0.25 * kW, 0.37 * kW, 0.55 * kW, 0.75 * kW,
 			1.1 * kW, 1.5 * kW, 2.2 * kW, 3 * kW, 4 * kW, 5.5 * kW, 7.5 * kW, 11 * kW, 15 * kW, 18.5 * kW,
 			22 * kW, 30 * kW, 37 * kW, 45 * kW, 55 * kW, 75 * kW, 90 * kW, 110 * kW, 132 * kW, 160 * kW,
@@ -27,11 +27,12 @@ var (
 		nil)
 )
 
-// IECMotorRatings returns the preferred rated outputs of IEC 60072-1
-// (clause 9, "Preferred rated output values") for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
+// IECMotorRatings returns the rated outputs of the IEC 60072-1 output
+// series for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
 // 0.25 0.37 0.55 0.75 1.1 1.5 2.2 3 4 5.5 7.5 11 15 18.5 22 30 37 45 55 75 90
 // 110 132 160 200 250 315 kW. The values to 55 kW were confirmed in a
-// published list; 75 kW and up are recalled (from memory).
+// published list; 75 kW and up are recalled (from memory). The Rule names
+// the standard without a clause number, which was not confirmed.
 func IECMotorRatings() Series[units.Power] { return iecMotorRatings }
 
 // NEMAMotorRatings returns the horsepower ratings of NEMA MG 1 for

@@ -21,8 +21,9 @@ import (
 // load is more than p·A_in can push (the piston stalls and the outlet side
 // is not compressed).
 //
-// This is the one implementation of the intensification balance: the
-// meter-out checks of hydro/valve call it. p must be finite and > 0, the
+// This is the one implementation of the intensification balance: a family
+// that checks a meter-out circuit calls it rather than repeating it. p must
+// be finite and > 0, the
 // areas finite and > 0, resist finite; errors match units.ErrRange.
 func IntensifiedPressure(p units.Pressure, inlet, outlet units.Area, resist units.Force) (units.Pressure, error) {
 	const fn = "actuator.IntensifiedPressure"
