@@ -377,7 +377,7 @@ func (s Series[T]) MarshalJSON() ([]byte, error) {
 // series, say — with the checks of [NewSeries].
 func (s *Series[T]) UnmarshalJSON(b []byte) error {
 	var j seriesJSON[T]
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Series.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	v, err := NewSeries(j.Name, j.Rule, j.Sizes, j.Second)
@@ -434,15 +434,22 @@ type choiceJSON[T ~float64] struct {
 }
 
 // MarshalJSON writes {"required","chosen","series","margin","ok","rule"}.
+// It fails with a *units.RangeError naming Required, Chosen or Margin when
+// one is not finite, which JSON cannot hold.
 func (c Choice[T]) MarshalJSON() ([]byte, error) {
-	return json.Marshal(choiceJSON[T]{c.Required, c.Chosen, c.Series, c.Margin(), c.OK(), c.Rule})
+	const fn = "components.Choice.MarshalJSON"
+	margin := c.Margin()
+	if err := finiteFields(fn, "Required", c.Required, "Chosen", c.Chosen, "Margin", margin); err != nil {
+		return nil, err
+	}
+	return json.Marshal(choiceJSON[T]{c.Required, c.Chosen, c.Series, margin, c.OK(), c.Rule})
 }
 
 // UnmarshalJSON reads the form MarshalJSON writes; margin and ok are
 // recomputed, not read.
 func (c *Choice[T]) UnmarshalJSON(b []byte) error {
 	var j choiceJSON[T]
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Choice.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	*c = Choice[T]{Required: j.Required, Chosen: j.Chosen, Series: j.Series, Rule: j.Rule}

@@ -547,14 +547,30 @@ Temperature.Add takes one.
 
 # Parsing
 
-The typed parsers (ParsePressure, ParseFlow, …) read a decimal number, optional
-spaces, then a unit:
+The typed parsers (ParsePressure, ParseFlow, …) and Parse read a number,
+optional spaces, then a unit:
 
-	number = [ "+" | "-" ] ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+	number   = [ "+" | "-" ] ( decimal | fraction | mixed )
+	decimal  = ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+	fraction = digits "/" digits
+	mixed    = digits ( "-" | " " ) digits "/" digits
 
-No hexadecimal, underscores, NaN or Inf. Leading and trailing spaces are
-ignored. The unit is any registered spelling of the type (listed below) or a
-unit expression of registered names with the right dimension:
+No hexadecimal, underscores, NaN or Inf. A fraction is of whole numbers of at
+most seven digits, with a denominator other than 0, and in a mixed number it
+is less than one: "3/8 in", "1-1/2 in", "1 1/2 in", "1/2 gpm". (A unit that
+starts with a digit still reads as a unit: "9 1/min" is 9 rpm.)
+
+A comma in a number is refused with ErrAmbiguous, and the error says why:
+"3,000" is three thousand where a comma groups thousands (as in the US) and
+three where it is the decimal mark (as in much of Europe). A Parser reads the
+one convention its caller names: Parser{Decimal: ','} reads "2,5 bar" and
+Parser{Group: ','} reads "3,000 psi", each with the grammar otherwise
+unchanged. In JSON a quantity is a string with its unit ("210 bar"); a bare
+number is refused with ErrSyntax and the text to write.
+
+Leading and trailing spaces are ignored. The unit is any registered spelling of the type
+(listed below) or a unit expression of registered names with the right
+dimension:
 
 	expr    = product { "/" product }
 	product = power { ( "*" | "·" | "⋅" | "." | "-" | " " ) power }
@@ -567,6 +583,16 @@ temperature point); inside a longer expression temperatures are intervals, as
 in BTU/(lbm·°F). Parse reads into a dynamic Quantity that carries its SI
 dimension and converts to a typed value only when the dimensions match;
 Convert converts a number between two unit expressions.
+
+ParseLength also reads feet and inches together, as US drawings write them:
+
+	length = number foot [ " " ] number inch
+
+where foot is a spelling of ft (ft, foot, feet, ' or ′) and inch one of in
+(in, inch, inches, " or ″), as in 2 ft 6 in, 2' 6" and 5' 3-1/2". The value
+is (12·feet + inches) inches, so 2 ft 6 in is exactly 30 in; a sign before
+the feet applies to the whole. The inch and foot marks are spellings of in
+and ft anywhere (1.5", 6').
 
 Letter case. A unit, or a name inside an expression, is first looked up
 exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
@@ -794,11 +820,29 @@ func (q *{{$q.Name}}) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 {{$q.Metric}}").
+func (q *{{$q.Name}}) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.{{$q.Name}}.UnmarshalJSON", data, &unitTable[metric{{$q.Name}}], &type{{$q.Name}})
+	if set {
+		*q = {{$q.Name}}(v)
+	}
+	return err
+}
+
 // Parse{{$q.Name}} reads a {{$q.Kind}}: a decimal number, optional spaces,
 // then a unit of {{$q.Kind}} such as {{examples $q}} (see the package doc
 // for the grammar and every spelling).
 func Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
 	v, err := parseTyped("units.Parse{{$q.Name}}", s, &type{{$q.Name}})
+	return {{$q.Name}}(v), err
+}
+
+// Parse{{$q.Name}} is units.Parse{{$q.Name}} with the number convention of p.
+func (p Parser) Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
+	v, err := p.parseTyped("units.Parser.Parse{{$q.Name}}", s, &type{{$q.Name}})
 	return {{$q.Name}}(v), err
 }
 

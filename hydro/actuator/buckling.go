@@ -121,7 +121,7 @@ func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, Buc
 		}
 	}
 	p, m := critical(d, lk, e, yield)
-	if _, err := checked(fn, "P", p); err != nil {
+	if _, err := validate.Checked(fn, "P", p); err != nil {
 		return 0, Euler, err
 	}
 	return p, m, nil

@@ -78,7 +78,7 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	if err != nil {
 		return Intensification{}, rename(err, fn)
 	}
-	ratio, err := checked(fn, "Ratio", float64(po/p))
+	ratio, err := validate.Checked(fn, "Ratio", float64(po/p))
 	if err != nil {
 		return Intensification{}, err // an inlet pressure so small that p_out/p overflows
 	}

@@ -51,16 +51,6 @@ func prefixed(err error, prefix string) error {
 // inverse of units.CircleArea.
 func diameterOf(a units.Area) units.Length { return units.Length(math.Sqrt(4 * float64(a) / math.Pi)) }
 
-// checked returns v, or 0 and an error naming the result name when v is
-// NaN or ±Inf (inputs so extreme that the arithmetic overflows), so that an
-// error never comes beside a non-zero value.
-func checked[T ~float64](fn, name string, v T) (T, error) {
-	if err := validate.Result(fn, name, v); err != nil {
-		return 0, err
-	}
-	return v, nil
-}
-
 // output is one number of a result, named for the error that reports it.
 type output struct {
 	name string

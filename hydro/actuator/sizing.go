@@ -238,7 +238,7 @@ func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
 			"< "+units.Pressure(eta*float64(d.Pressure)*in/out).String()+
 				" (the inlet pressure after seal friction times the area ratio)")
 	}
-	return checked(fn, "bore", diameterOf(units.Area(float64(total)/net)))
+	return validate.Checked(fn, "bore", diameterOf(units.Area(float64(total)/net)))
 }
 
 // CylinderSize is the result of sizing a cylinder for a [Duty]: the forces,
@@ -373,7 +373,7 @@ func (d Duty) needs(c Cylinder, f units.Force, eta float64) (units.Pressure, err
 	if err != nil {
 		return 0, err
 	}
-	return checked(fn, "p", p/units.Pressure(eta))
+	return validate.Checked(fn, "p", p/units.Pressure(eta))
 }
 
 // largestNeeds returns the failed pressure check of a duty no standard size

@@ -154,7 +154,7 @@ func (o OilSpring) NaturalFrequency(x units.Length) (units.Frequency, error) {
 	if err != nil {
 		return 0, err
 	}
-	return checked(fn, "f", frequency(k, float64(o.Mass)))
+	return validate.Checked(fn, "f", frequency(k, float64(o.Mass)))
 }
 
 func frequency(k, m float64) units.Frequency {
@@ -198,7 +198,7 @@ func (o OilSpring) Lowest() (Resonance, error) {
 	if err := validate.Result(fn, "k", r.Stiffness); err != nil {
 		return Resonance{}, err
 	}
-	if r.Frequency, err = checked(fn, "Frequency", frequency(float64(r.Stiffness), float64(o.Mass))); err != nil {
+	if r.Frequency, err = validate.Checked(fn, "Frequency", frequency(float64(r.Stiffness), float64(o.Mass))); err != nil {
 		return Resonance{}, err
 	}
 	n, rule := o.RampFactor, components.CallerRule("OilSpring.RampFactor")
