@@ -62,11 +62,13 @@ const (
 	Runaway                       // uncontrolled speed of an actuator or load
 	Contamination                 // particles or water beyond what a component tolerates
 	ColdStart                     // sluggish or damaging flow in cold oil
+	Structural                    // a part that can buckle, break or tear loose: a rod, a mount, a tie
 )
 
 var hazardNames = [...]string{
 	"none", "stored energy", "suspended load", "overrunning load", "burst", "hot surface",
 	"injection", "cavitation", "filter bypass", "overpressure", "runaway", "contamination", "cold start",
+	"structural failure",
 }
 
 // String returns the hazard's name in words: "stored energy".
@@ -160,7 +162,7 @@ func (f Finding) MarshalJSON() ([]byte, error) {
 // as fixed text.
 func (f *Finding) UnmarshalJSON(b []byte) error {
 	var j findingJSON
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Finding.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	*f = Finding{Severity: j.Severity, Hazard: j.Hazard, Topic: j.Topic, Rule: j.Rule,

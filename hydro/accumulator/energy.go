@@ -43,7 +43,7 @@ func StoredEnergy(v0 units.Volume, p0, p units.AbsolutePressure, n float64) (uni
 	} else {
 		w *= math.Expm1((n-1)/n*lr) / (n - 1)
 	}
-	return units.Energy(w), validate.Result(fn, "W", w)
+	return validate.Checked(fn, "W", units.Energy(w))
 }
 
 // iso4413 is the rule behind the shutdown finding.

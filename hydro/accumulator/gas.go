@@ -115,7 +115,7 @@ func (c Cycle) Delivered(v0 units.Volume) (units.Volume, error) {
 		return 0, err
 	}
 	dv := v0 * units.Volume(c.yield())
-	return dv, validate.Result(fn, "ΔV", dv)
+	return validate.Checked(fn, "ΔV", dv)
 }
 
 // Size returns the nominal gas volume that delivers oil volume dv from p₂
@@ -132,5 +132,5 @@ func (c Cycle) Size(dv units.Volume) (units.Volume, error) {
 		return 0, err
 	}
 	v0 := dv / units.Volume(c.yield())
-	return v0, validate.Result(fn, "V₀", v0)
+	return validate.Checked(fn, "V₀", v0)
 }

@@ -33,7 +33,7 @@ func PrechargeAt(p units.AbsolutePressure, from, to units.Temperature) (units.Ab
 		return 0, err
 	}
 	r := p * units.AbsolutePressure(to/from)
-	return r, validate.Result(fn, "p", r)
+	return validate.Checked(fn, "p", r)
 }
 
 // Kind is the construction of an accumulator, which limits how far its gas

@@ -121,7 +121,10 @@ func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, Buc
 		}
 	}
 	p, m := critical(d, lk, e, yield)
-	return p, m, validate.Result(fn, "P", p)
+	if _, err := validate.Checked(fn, "P", p); err != nil {
+		return 0, Euler, err
+	}
+	return p, m, nil
 }
 
 func critical(d, lk units.Length, e, yield units.Pressure) (units.Force, BucklingMethod) {
@@ -251,11 +254,21 @@ func (c Column) Check() (BucklingCheck, error) {
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return BucklingCheck{}, err
 	}
+	return c.checked(fn)
+}
+
+// checked returns the check of the column, or an error naming the first of
+// its numbers that is NaN or ±Inf (inputs so extreme that the arithmetic
+// overflows: a rod of a denormal diameter, a thrust that underflows to 0).
+func (c Column) checked(fn string) (BucklingCheck, error) {
 	r := c.check()
-	if err := validate.Result(fn, "Critical", r.Critical); err != nil {
+	if err := finite(fn, output{"Length", float64(r.Length)}, output{"FreeLength", float64(r.FreeLength)},
+		output{"Slenderness", r.Slenderness}, output{"Transition", r.Transition},
+		output{"Critical", float64(r.Critical)}, output{"Thrust", float64(r.Thrust)},
+		output{"Safety", r.Safety.Value}); err != nil {
 		return BucklingCheck{}, err
 	}
-	return r, validate.Result(fn, "Thrust", r.Thrust)
+	return r, nil
 }
 
 func (c Column) check() BucklingCheck {
@@ -268,7 +281,7 @@ func (c Column) check() BucklingCheck {
 	r.Thrust = c.Relief.TimesArea(c.Cylinder.Area(Extend))
 	r.Safety = components.Reaches(float64(r.Critical/r.Thrust), n, nr)
 	if !r.Safety.OK() {
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling", nr,
 			"the %v rod buckles at %v (%v), only %v times the relief-valve thrust of %v; choose a thicker rod, a shorter free length or a stiffer mounting",
 			c.Cylinder.Rod, r.Critical, r.Method.String(), r.Safety.Value, r.Thrust)}
@@ -312,14 +325,16 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
 		r.Rod.Chosen = 0
 		_, _, _, _, n, nr := c.setup()
-		r.Findings = components.Findings{components.NewFinding(components.Warning, components.NoHazard,
+		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling-no-rod", nr,
 			"no standard rod below the %v bore reaches a buckling safety factor of %v (at least %v is needed); shorten the free length, stiffen the mounting or choose a larger bore",
 			c.Cylinder.Bore, n, least)}
 		return r, nil
 	}
 	c.Cylinder.Rod = ch.Chosen
-	r.Check = c.check()
+	if r.Check, err = c.checked(fn); err != nil {
+		return RodChoice{}, err
+	}
 	return r, nil
 }
 

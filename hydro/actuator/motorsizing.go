@@ -84,8 +84,11 @@ func (d MotorDuty) Size() (MotorSize, error) {
 		r.Pressure = components.Within(units.Pressure(float64(d.Pressure)*float64(r.Displacement.Required/d.Displacements.Largest())),
 			d.Pressure, components.CallerRule("MotorDuty.Pressure"))
 	}
+	if err := finite(fn, output{"Pressure", float64(r.Pressure.Value)}, output{"Flow", float64(r.Flow)}); err != nil {
+		return MotorSize{}, err
+	}
 	r.Findings = d.findings(r)
-	return r, validate.Result(fn, "Flow", r.Flow)
+	return r, nil
 }
 
 // displacementFor returns D = 2π·T/(Δp·η).

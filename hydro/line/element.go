@@ -71,7 +71,10 @@ func (p Pipe) loss(q units.Flow, o Oil) (ElementDrop, error) {
 	}
 	d.Drop = units.Pressure(d.Friction * float64(p.Length/p.Bore) * float64(velocityHead(o.Density, d.Velocity)))
 	d.Rule = components.PhysicsRule("Darcy–Weisbach, f by Colebrook–White (64/Re laminar)")
-	return d, validate.Result(fn, "drop", d.Drop)
+	if err := validate.Result(fn, "drop", d.Drop); err != nil {
+		return ElementDrop{}, err
+	}
+	return d, nil
 }
 
 // flowIn fills velocity, Reynolds number and regime of flow q in bore.
@@ -119,7 +122,7 @@ func (f Fitting) loss(q units.Flow, o Oil) (ElementDrop, error) {
 	if k == 0 {
 		var err error
 		if k, rule, err = f.Kind.K(f.Bore); err != nil {
-			return ElementDrop{}, err
+			return ElementDrop{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"kind": "Kind", "bore": "Bore"}))
 		}
 	} else if err := validate.InRange(fn, "K", k, 0, 1e4); err != nil {
 		return ElementDrop{}, err
@@ -133,7 +136,10 @@ func (f Fitting) loss(q units.Flow, o Oil) (ElementDrop, error) {
 	}
 	d.Name, d.K, d.Rule = f.Name, k*n, rule
 	d.Drop = units.Pressure(d.K * float64(velocityHead(o.Density, d.Velocity)))
-	return d, validate.Result(fn, "drop", d.Drop)
+	if err := validate.Result(fn, "drop", d.Drop); err != nil {
+		return ElementDrop{}, err
+	}
+	return d, nil
 }
 
 // Law is how a Rated component's pressure drop scales with flow.
@@ -209,7 +215,10 @@ func (r Rated) loss(q units.Flow, o Oil) (ElementDrop, error) {
 	}
 	d := ElementDrop{Name: r.Name, Drop: r.Drop * units.Pressure(scale),
 		Rule: components.CallerRule("Rated.Drop at Rated.Flow, scaled by the " + r.Law.String() + " law")}
-	return d, validate.Result(fn, "drop", d.Drop)
+	if err := validate.Result(fn, "drop", d.Drop); err != nil {
+		return ElementDrop{}, err
+	}
+	return d, nil
 }
 
 func (r Rated) check(fn string) error {

@@ -20,7 +20,10 @@ func Velocity(q units.Flow, bore units.Length) (units.Velocity, error) {
 	}
 	v, err := q.PerArea(units.CircleArea(bore))
 	if err != nil {
-		return 0, validate.Result(fn, "v", math.Inf(1))
+		if err := validate.Result(fn, "v", math.Inf(1)); err != nil {
+			return 0, err
+		}
+		return 0, nil
 	}
 	return v, nil
 }

@@ -89,7 +89,10 @@ func Barlow(od, wall units.Length, strength units.Pressure, safety float64, basi
 	burst := units.Pressure(2 * float64(strength) * float64(wall/d))
 	r := WallRating{Working: burst / units.Pressure(safety), Burst: burst, Diameter: d, Basis: basis, Safety: safety,
 		Rule: components.PhysicsRule("Barlow, p = 2·S·t/(D·SF) on the " + basis.String())}
-	return r, validate.Result(fn, "burst", r.Burst)
+	if err := validate.Result(fn, "burst", r.Burst); err != nil {
+		return WallRating{}, err
+	}
+	return r, nil
 }
 
 // HoseDesignFactor is the ratio of minimum burst pressure to maximum working

@@ -1,11 +1,11 @@
 package pump
 
 import (
-	"errors"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/valve"
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -167,22 +167,21 @@ func TestCompatibilityStall(t *testing.T) {
 
 func TestCompatibilityBadInput(t *testing.T) {
 	good := Circuit{Center: valve.ClosedCenter, Relief: 2e7, Demands: []Demand{{Pressure: 1e7, Flow: 1e-4}}}
-	for name, mut := range map[string]func(*Circuit){
-		"unset center":      func(c *Circuit) { c.Center = 0 },
-		"zero relief":       func(c *Circuit) { c.Relief = 0 },
-		"negative drop":     func(c *Circuit) { c.CenterDrop = -1 },
-		"zero demand flow":  func(c *Circuit) { c.Demands = []Demand{{Pressure: 1e7}} },
-		"negative pressure": func(c *Circuit) { c.Demands = []Demand{{Pressure: -1, Flow: 1e-4}} },
-		"series on closed":  func(c *Circuit) { c.Series = true },
+	for param, mut := range map[string]func(*Circuit){
+		"Center":              func(c *Circuit) { c.Center = 0 },
+		"Relief":              func(c *Circuit) { c.Relief = 0 },
+		"CenterDrop":          func(c *Circuit) { c.CenterDrop = -1 },
+		"Demands[0].Flow":     func(c *Circuit) { c.Demands = []Demand{{Pressure: 1e7}} },
+		"Demands[1].Pressure": func(c *Circuit) { c.Demands = []Demand{{Pressure: 1e7, Flow: 1e-4}, {Pressure: -1, Flow: 1e-4}} },
+		"Series":              func(c *Circuit) { c.Series = true },
 	} {
 		c := good
 		mut(&c)
 		fs, err := baler().Compatibility(c)
-		if !errors.Is(err, units.ErrRange) || fs != nil {
-			t.Errorf("%s: %v, %v; want no findings and ErrRange", name, fs, err)
+		if checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", param); fs != nil {
+			t.Errorf("%s: findings %v beside the error", param, fs)
 		}
 	}
-	if _, err := (Pump{}).Compatibility(good); !errors.Is(err, units.ErrRange) {
-		t.Errorf("zero Pump: error = %v; want ErrRange", err)
-	}
+	_, err := (Pump{}).Compatibility(good)
+	checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", "Displacement")
 }

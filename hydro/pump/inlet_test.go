@@ -13,12 +13,10 @@ import (
 //
 //   - ISO 2533:1975 / ICAO Doc 7488 table values (from memory): 89 875 Pa
 //     at 1000 m, 79 495 Pa at 2000 m, 70 109 Pa at 3000 m, 22 632 Pa at the
-//     tropopause, 11 000 m. The MATLAB Aerospace Toolbox documentation of
-//     atmosisa (R2021a) prints the same 8.9875e+04 Pa at 1000 m and
-//     2.2632e+04 Pa at 11 000 m.
-//   - The formula's constants as usually printed, p = 101 325·(1 − 2.25577·10⁻⁵·h)^5.25588
-//     (and (1 − h/44 330.8 m)^5.255876 in the U.S. Standard Atmosphere, 1976),
-//     which must follow from T₀, L, g₀, M and R*.
+//     tropopause, 11 000 m.
+//   - The formula's constants as printed, p = 101 325·(1 − 2.25577·10⁻⁵·h)^5.25588,
+//     and the exponent 5.255876 of the U.S. Standard Atmosphere, 1976
+//     (NOAA/NASA/USAF), layer 1, which must follow from T₀, L, g₀, M and R*.
 //
 // Tolerance: ±1 Pa for the tables, which print whole pascals; the printed
 // constants to their last digit.

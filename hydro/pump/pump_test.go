@@ -5,6 +5,7 @@ import (
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -264,24 +265,26 @@ func TestPumpPowerProperties(t *testing.T) {
 func TestPumpBadInput(t *testing.T) {
 	nan := math.NaN()
 	good := baler()
-	for name, p := range map[string]Pump{
-		"zero displacement":      {Speed: 10, Volumetric: 0.9, Mechanical: 0.9},
-		"negative speed":         {Displacement: 1e-5, Speed: -1, Volumetric: 0.9, Mechanical: 0.9},
-		"volumetric above 1":     {Displacement: 1e-5, Speed: 10, Volumetric: 1.01, Mechanical: 0.9},
-		"mechanical zero":        {Displacement: 1e-5, Speed: 10, Volumetric: 0.9},
-		"mechanical NaN":         {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: nan},
-		"fixed but compensated":  {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Control: PressureCompensated, Cutoff: 1e7},
-		"compensator unset":      {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: PressureCompensated},
-		"margin above cutoff":    {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: LoadSensing, Cutoff: 1e6, Margin: 2e6},
-		"power limit unset":      {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: PowerLimited},
-		"unknown control":        {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: 9},
-		"negative leak pressure": {Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, LeakagePressure: -1},
+	for _, c := range []struct {
+		param string
+		p     Pump
+	}{
+		{"Displacement", Pump{Speed: 10, Volumetric: 0.9, Mechanical: 0.9}},
+		{"Speed", Pump{Displacement: 1e-5, Speed: -1, Volumetric: 0.9, Mechanical: 0.9}},
+		{"Volumetric", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 1.01, Mechanical: 0.9}},
+		{"Mechanical", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9}},
+		{"Mechanical", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: nan}},
+		{"Control", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Control: PressureCompensated, Cutoff: 1e7}},
+		{"Cutoff", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: PressureCompensated}},
+		{"Margin", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: LoadSensing, Cutoff: 1e6, Margin: 2e6}},
+		{"PowerLimit", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: PowerLimited}},
+		{"Control", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, Variable: true, Control: 9}},
+		{"LeakagePressure", Pump{Displacement: 1e-5, Speed: 10, Volumetric: 0.9, Mechanical: 0.9, LeakagePressure: -1}},
 	} {
-		if err := p.Validate(); !errors.Is(err, units.ErrRange) {
-			t.Errorf("%s: Validate() = %v; want ErrRange", name, err)
-		}
-		if pt, err := p.At(1e7); !errors.Is(err, units.ErrRange) || pt != (Point{}) {
-			t.Errorf("%s: At = %+v, %v; want the zero Point and ErrRange", name, pt, err)
+		checktest.RangeErrorIn(t, c.p.Validate(), "pump.Pump.Validate", c.param)
+		pt, err := c.p.At(1e7)
+		if checktest.RangeErrorIn(t, err, "pump.Pump.At", c.param); pt != (Point{}) {
+			t.Errorf("%s: At = %+v; want the zero Point beside the error", c.param, pt)
 		}
 	}
 	var re *units.RangeError

@@ -25,7 +25,7 @@ func ThrottleRise(dp units.Pressure, rho units.Density, c units.SpecificHeatCapa
 		return 0, err
 	}
 	d := units.TemperatureDifference(float64(dp) / (float64(rho) * float64(c)))
-	return d, validate.Result(fn, "ΔT", d)
+	return validate.Checked(fn, "ΔT", d)
 }
 
 // ThrottleRiseOf returns ThrottleRise with the density and specific heat

@@ -60,8 +60,11 @@ func PumpLoss(name string, p units.Pressure, q units.Flow, overall float64) (Loa
 	if err := validate.InRange(fn, "overall", overall, 1e-3, 1); err != nil {
 		return Load{}, err
 	}
-	in := hyd / units.Power(overall)
-	return Load{Source: FromPump, Name: name, Power: in - hyd, Input: in, Rule: energyRule}, validate.Result(fn, "input", in)
+	in, err := validate.Checked(fn, "input", hyd/units.Power(overall))
+	if err != nil {
+		return Load{}, err
+	}
+	return Load{Source: FromPump, Name: name, Power: in - hyd, Input: in, Rule: energyRule}, nil
 }
 
 // MotorLoss returns the heat a hydraulic motor (or cylinder) makes taking
@@ -126,7 +129,7 @@ func hydraulic(fn string, p units.Pressure, q units.Flow) (units.Power, error) {
 		return 0, err
 	}
 	w := p.TimesFlow(q)
-	return w, validate.Result(fn, "p·Q", w)
+	return validate.Checked(fn, "p·Q", w)
 }
 
 func simple(fn string, s Source, name string, p units.Pressure, q units.Flow) (Load, error) {

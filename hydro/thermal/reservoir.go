@@ -115,7 +115,7 @@ func (t Tank) OilVolume() (units.Volume, error) {
 		return 0, err
 	}
 	v := units.Volume(float64(t.Length) * float64(t.Width) * float64(t.Level))
-	return v, validate.Result(fn, "volume", v)
+	return validate.Checked(fn, "volume", v)
 }
 
 // WettedArea returns the wall area the oil touches, through which it gives
@@ -129,7 +129,7 @@ func (t Tank) WettedArea() (units.Area, error) {
 	}
 	l, w := float64(t.Length), float64(t.Width)
 	a := units.Area(l*w + 2*(l+w)*float64(t.Level))
-	return a, validate.Result(fn, "area", a)
+	return validate.Checked(fn, "area", a)
 }
 
 // SurfaceArea returns the whole outside area of the box, 2·(LW + LH + WH),
@@ -141,7 +141,7 @@ func (t Tank) SurfaceArea() (units.Area, error) {
 	}
 	l, w, h := float64(t.Length), float64(t.Width), float64(t.Height)
 	a := units.Area(2 * (l*w + l*h + w*h))
-	return a, validate.Result(fn, "area", a)
+	return validate.Checked(fn, "area", a)
 }
 
 // StillAir is the usual heat-transfer coefficient of a steel reservoir wall
@@ -163,7 +163,7 @@ func Dissipation(h units.HeatTransferCoefficient, a units.Area) (Conductance, er
 		return 0, err
 	}
 	c := Conductance(float64(h) * float64(a))
-	return c, validate.Result(fn, "h·A", c)
+	return validate.Checked(fn, "h·A", c)
 }
 
 // SteadyTemperature returns the oil temperature at which surfaces of
@@ -182,5 +182,5 @@ func SteadyTemperature(load units.Power, ua Conductance, ambient units.Temperatu
 		return 0, err
 	}
 	t := ambient.Add(units.TemperatureDifference(float64(load) / float64(ua)))
-	return t, validate.Result(fn, "T", t)
+	return validate.Checked(fn, "T", t)
 }

@@ -131,6 +131,16 @@ func Result[T ~float64](fn, name string, v T) error {
 	return nil
 }
 
+// Checked returns v and nil when v is finite, and the zero value with a
+// Result error otherwise: the way a function returns a computed result, so
+// that no error ever travels beside a NaN or ±Inf.
+func Checked[T ~float64](fn, name string, v T) (T, error) {
+	if err := Result(fn, name, v); err != nil {
+		return 0, err
+	}
+	return v, nil
+}
+
 // PositiveDuration checks d > 0.
 func PositiveDuration(fn, param string, d time.Duration) error {
 	if d <= 0 {
