@@ -8,9 +8,15 @@ import (
 )
 
 // chargeBand is how far above the lowest working pressure an accumulator
-// that supplements the pump is charged: 20 % (our choice: enough oil per
-// litre of gas without a wide swing of the pump pressure).
+// that supplements the pump is charged at least: 20 % (our choice); it is
+// charged up to the design's working pressure where that is higher, for
+// more oil per litre of gas.
 const chargeBand = 1.2
+
+// chargeTo is the pressure a supplementing accumulator is charged to.
+func (z *sizer) chargeTo() units.Pressure {
+	return max(units.Pressure(float64(z.pumpP)*chargeBand), z.basis.Pressure.Value)
+}
 
 // fillTemperature is where a precharge is set: 20 °C, a workshop (our
 // choice).
@@ -49,7 +55,7 @@ func (z *sizer) supplement() (accumulator.SupplementSizing, error) {
 	if z.idle > 0 {
 		phases = append(phases, accumulator.Phase{Name: "idle", Duration: z.idle})
 	}
-	c, _, err := z.accCycle(z.pumpP, units.Pressure(float64(z.pumpP)*chargeBand))
+	c, _, err := z.accCycle(z.pumpP, z.chargeTo())
 	if err != nil {
 		return accumulator.SupplementSizing{}, err
 	}
@@ -66,7 +72,7 @@ func (z *sizer) accumulatorResult() (*AccumulatorResult, components.Findings, er
 		if err != nil {
 			return nil, nil, err
 		}
-		c, pc, err := z.accCycle(z.pumpP, units.Pressure(float64(z.pumpP)*chargeBand))
+		c, pc, err := z.accCycle(z.pumpP, z.chargeTo())
 		if err != nil {
 			return nil, nil, err
 		}

@@ -143,12 +143,25 @@ func (z *sizer) sizeCylinder(a *act) error {
 	if a.cyl.Stroke == 0 {
 		a.cyl.Stroke = a.spec.Stroke
 	}
+	return z.workMoves(a)
+}
+
+// workMoves works out every move of actuator a with the size chosen, at
+// the back pressures of the last drops: port pressures and flows, and a
+// cylinder's load-holding valve.
+func (z *sizer) workMoves(a *act) error {
+	if !a.ok {
+		return nil
+	}
+	if !a.cylinder() {
+		return z.motorMoves(a)
+	}
 	for _, m := range a.moves {
 		if err := z.cylinderMove(a, m); err != nil {
 			return err
 		}
 	}
-	return nil
+	return z.fitHolder(a)
 }
 
 // larger orders cylinders by bore, then rod.
@@ -173,7 +186,14 @@ func (z *sizer) cylinderMove(a *act, m *mv) error {
 	switch {
 	case m.spec.Regenerative:
 		return z.regenerative(c, m, eta)
-	case m.forces.Total() <= 0: // overrunning: the counterbalance valve holds the load back
+	case m.forces.Total() <= 0: // no load, or overrunning: a counterbalance valve holds the load back
+		if m.forces.Total() == 0 {
+			p, err := c.PressureFor(m.dir, 0, m.back) // only the back pressure to push out
+			if err != nil {
+				return err
+			}
+			m.port = p
+		}
 		if m.speed > 0 {
 			q, err := c.FlowFor(m.dir, m.speed)
 			if err != nil {
@@ -251,10 +271,15 @@ func (z *sizer) sizeMotor(a *act) error {
 		}
 	}
 	a.msize, a.ok = best, found && !failed
-	if !a.ok {
-		return nil
+	if a.ok {
+		a.motor = best.Motor
 	}
-	a.motor = best.Motor
+	return z.workMoves(a)
+}
+
+// motorMoves works out each move of a motor: the pressure for its torque
+// over the back pressure, and its flow.
+func (z *sizer) motorMoves(a *act) error {
 	for _, m := range a.moves {
 		m.port, m.flow, m.capFlow, m.ret = 0, 0, 0, 0
 		if m.spec.Torque > 0 {

@@ -1,14 +1,15 @@
 package hydro
 
 import (
+	"slices"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/fluid"
-	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/drive"
 	"github.com/hydrosize/hydrosize/hydro/line"
 	"github.com/hydrosize/hydrosize/hydro/pump"
+	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -31,53 +32,60 @@ func (z *sizer) report(res *result) (Report, error) {
 	if s.Units == "us" {
 		r.Units = "us"
 	}
-	fs := z.notes
+	fs := slices.Clone(z.notes) // gathered, then merged once: Merge copies
 	for _, a := range z.acts {
 		ar, f := z.actuatorResult(a)
 		r.Actuators = append(r.Actuators, ar)
-		fs = fs.Merge(f...)
+		fs = append(fs, f...)
 	}
-	fs = fs.Merge(res.sizing.Findings...)
-	r.Valves = z.valveResult()
+	fs = append(fs, res.sizing.Findings...)
 	r.Lines = z.lineResults(res.lines)
-	for _, l := range r.lineRuns(z, res.lines) {
-		fs = fs.Merge(l.findings...)
+	valves, f, err := z.valveResult(res)
+	if err != nil {
+		return Report{}, err
+	}
+	r.Valves = valves
+	fs = append(fs, f...)
+	for _, l := range z.allLines(res.lines) {
+		fs = append(fs, l.findings...)
 	}
 	if !res.pumped {
 		r.Pump = z.pumpResult(res)
-		r.Findings = fs.Sorted()
+		r.Findings = components.Findings(nil).Merge(fs...).Sorted()
 		return r, nil
 	}
 	for i, ph := range z.phases {
 		r.Phases = append(r.Phases, z.phaseResult(ph, res.heats[i]))
 	}
-	var err error
-	var f components.Findings
+	if z.idle > 0 { // the idle time between cycles, last of the heats
+		h := res.heats[len(res.heats)-1]
+		r.Phases = append(r.Phases, z.phaseResult(&phase{name: h.name, time: h.time}, h))
+	}
 	if r.Pump, f, err = z.pumpDetails(res); err != nil {
 		return Report{}, err
 	}
-	fs = fs.Merge(f...)
+	fs = append(fs, f...)
 	if r.Drive, f, err = z.driveResult(res); err != nil {
 		return Report{}, err
 	}
-	fs = fs.Merge(f...)
+	fs = append(fs, f...)
 	if r.Accumulator, f, err = z.accumulatorResult(); err != nil {
 		return Report{}, &FieldError{Path: "circuit.accumulator", Err: err}
 	}
-	fs = fs.Merge(f...)
+	fs = append(fs, f...)
 	r.Heat, f = z.heatResult(res.bal)
-	fs = fs.Merge(f...)
+	fs = append(fs, f...)
 	var nuRun, nuCold units.KinematicViscosity
 	if r.Fluid, nuRun, nuCold, f, err = z.fluidResult(); err != nil {
 		return Report{}, err
 	}
-	fs = fs.Merge(f...)
+	fs = append(fs, f...)
 	if r.Cleanliness, f, err = z.cleanliness(res.lines, nuRun, nuCold); err != nil {
 		return Report{}, err
 	}
-	fs = fs.Merge(f...)
-	r.Bill = z.bill(&r, res)
-	r.Findings = fs.Sorted()
+	fs = append(fs, f...)
+	r.Bill = z.bill(&r)
+	r.Findings = components.Findings(nil).Merge(fs...).Sorted()
 	return r, nil
 }
 
@@ -102,6 +110,10 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		fs = a.msize.Findings
 	}
 	fs = fs.Merge(z.holdingFindings(a)...)
+	if h, f, err := z.holdingResult(a); err == nil {
+		r.Holding = h
+		fs = fs.Merge(f...)
+	}
 	for _, m := range a.moves {
 		r.Moves = append(r.Moves, moveResult(a, m))
 	}
@@ -314,12 +326,39 @@ func (z *sizer) driveResult(res *result) (DriveResult, components.Findings, erro
 	return r, fs, nil
 }
 
-func (z *sizer) valveResult() ValveResult {
-	rule := reliefRule
+// valveResult sets the main relief with the ratings of what it protects
+// (valve.ReliefSetting), checks that a relief reaches every rated part
+// (valve.Protection), and lists each actuator's directional valve.
+func (z *sizer) valveResult(res *result) (ValveResult, components.Findings, error) {
+	ml := res.lines
+	work := func(l *lineRun) units.Pressure {
+		if l.rating.Limit > 0 && l.inner > 0 {
+			return l.rating.Limit
+		}
+		return 0
+	}
+	ratings := []units.Pressure{res.sizing.RatedPressure, work(ml.pressure)}
+	for _, a := range z.acts {
+		ratings = append(ratings, work(a.lineA), work(a.lineB))
+	}
+	relief, err := z.setRelief(ratings...)
+	if err != nil {
+		return ValveResult{}, nil, &FieldError{Path: "design.relief_margin", Err: err}
+	}
+	rule := relief.MarginRule
 	if z.spec.Design.ReliefMargin != nil {
 		rule = components.CallerRule("design.relief_margin")
 	}
-	r := ValveResult{Relief: Value[units.Pressure]{z.reliefP, rule}, Center: z.center().String()}
+	r := ValveResult{Relief: Value[units.Pressure]{relief.Setting, rule}, Center: z.center().String()}
+	parts := []valve.Part{}
+	part := func(name string, rating, relief units.Pressure) {
+		if rating > 0 {
+			parts = append(parts, valve.Part{Name: name, Rating: rating, Relief: relief})
+		}
+	}
+	part("pump", res.sizing.RatedPressure, relief.FullFlow)
+	part(ml.pressure.name, work(ml.pressure), relief.FullFlow)
+	traits, _ := z.centerTraits()
 	for _, a := range z.acts {
 		v := DirectionalValve{Actuator: a.spec.Name}
 		var q units.Flow
@@ -331,12 +370,31 @@ func (z *sizer) valveResult() ValveResult {
 			v.Size, v.Listed = valveSizes[a.valve].name, Value[units.Flow]{valveSizes[a.valve].flow, valveFigures}
 		}
 		r.Directional = append(r.Directional, v)
+		// A center that blocks the actuator ports traps the work lines:
+		// only a counterbalance valve's relief function reaches them.
+		reach := relief.FullFlow
+		if traits.Holds() {
+			reach = 0
+			if a.holder != nil {
+				reach = a.holder.cb.Setting
+			}
+		}
+		part(a.lineA.name, work(a.lineA), reach)
+		part(a.lineB.name, work(a.lineB), reach)
 	}
-	return r
+	fs := relief.Findings
+	if len(parts) > 0 {
+		f, err := valve.Protection(parts)
+		if err != nil {
+			return ValveResult{}, nil, &FieldError{Path: "circuit", Err: err}
+		}
+		fs = fs.Merge(f...)
+	}
+	return r, fs, nil
 }
 
-// lineRuns lists every line: the main lines, then each actuator's.
-func (r *Report) lineRuns(z *sizer, ml mainLines) []*lineRun {
+// allLines lists every line: the main lines, then each actuator's.
+func (z *sizer) allLines(ml mainLines) []*lineRun {
 	out := []*lineRun{ml.suction, ml.pressure, ml.ret}
 	for _, a := range z.acts {
 		out = append(out, a.lineA, a.lineB)
@@ -346,7 +404,7 @@ func (r *Report) lineRuns(z *sizer, ml mainLines) []*lineRun {
 
 func (z *sizer) lineResults(ml mainLines) []LineResult {
 	var out []LineResult
-	for _, l := range (&Report{}).lineRuns(z, ml) {
+	for _, l := range z.allLines(ml) {
 		if l.flow <= 0 {
 			continue
 		}
@@ -416,7 +474,7 @@ func (z *sizer) fluidResult() (FluidResult, units.KinematicViscosity, units.Kine
 		return r, 0, 0, nil, &FieldError{Path: "fluid", Err: err}
 	}
 	r.Hot = components.Reaches(nuRun, z.win.Min, components.PracticeRule("pump's permissible minimum viscosity"))
-	if err == nil && vi > 0 {
+	if (!r.Hot.OK() || errCold != nil || !r.Cold.OK()) && vi > 0 { // the grades that would suit instead
 		if cs, err := fluid.SelectGrades(site, vi, z.win); err == nil {
 			for _, c := range cs {
 				r.Suits = append(r.Suits, c.Grade.String())
@@ -437,7 +495,7 @@ func (z *sizer) fluidResult() (FluidResult, units.KinematicViscosity, units.Kine
 }
 
 // bill lists the sized components.
-func (z *sizer) bill(r *Report, res *result) []BillItem {
+func (z *sizer) bill(r *Report) []BillItem {
 	var b []BillItem
 	add := func(item, what string) { b = append(b, BillItem{Item: item, What: what, Count: 1}) }
 	sys := z.sys
@@ -488,9 +546,5 @@ func (z *sizer) bill(r *Report, res *result) []BillItem {
 	if acc := r.Accumulator; acc != nil && acc.Volume.OK() {
 		add("accumulator", "bladder "+sys.FormatVolume(acc.Volume.Chosen)+", precharge "+sys.FormatAbsolutePressure(acc.Precharge.Value))
 	}
-	_ = res
 	return b
 }
-
-// direction names for the record.
-var _ = actuator.Extend

@@ -6,6 +6,7 @@ import (
 	"github.com/hydrosize/hydrosize/hydro/drive"
 	"github.com/hydrosize/hydrosize/hydro/line"
 	"github.com/hydrosize/hydrosize/hydro/pump"
+	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -87,7 +88,9 @@ func (z *sizer) sizeValvesAndLines(ml *mainLines) error {
 	for _, ph := range z.phases {
 		ret = max(ret, ph.ret)
 	}
-	ml.suction.flow, ml.pressure.flow, ml.ret.flow = z.delivery, z.delivery, ret
+	// The pressure line carries the pump's delivery, or more where an
+	// accumulator adds its oil to it.
+	ml.suction.flow, ml.pressure.flow, ml.ret.flow = z.delivery, max(z.delivery, z.peakDemand()), ret
 	ml.pressure.hold = z.reliefP
 	for _, l := range []*lineRun{ml.suction, ml.pressure, ml.ret} {
 		if err := z.choose(l); err != nil {
@@ -96,7 +99,7 @@ func (z *sizer) sizeValvesAndLines(ml *mainLines) error {
 	}
 	ml.returnFilter = pickFilter(ret)
 	if z.pressureFiltered() {
-		ml.pressureFilter = pickFilter(z.delivery)
+		ml.pressureFilter = pickFilter(ml.pressure.flow)
 	}
 	return nil
 }
@@ -241,10 +244,27 @@ func (z *sizer) sizePump(flow units.Flow) (pump.Sizing, pump.Pump, error) {
 // acts before the relief opens).
 func (z *sizer) cutoff() units.Pressure { return (z.pumpP + z.reliefP) / 2 }
 
-// relief sets the main relief the margin above the highest working pump
-// pressure.
-func (z *sizer) setRelief() {
-	z.reliefP = units.Pressure(float64(max(z.pumpP, units.Bar)) * (1 + z.relief))
+// setRelief sets the main relief its margin above the highest working pump
+// pressure (valve.ReliefSetting), held against the lowest rating among
+// ratings (the pump's rated pressure and the lines' wall ratings; the
+// working pressure ×10, which any setting meets, when none is known yet).
+func (z *sizer) setRelief(ratings ...units.Pressure) (valve.Relief, error) {
+	var lowest units.Pressure
+	for _, r := range ratings {
+		if r > 0 && (lowest == 0 || r < lowest) {
+			lowest = r
+		}
+	}
+	working := max(z.pumpP, units.Bar)
+	if lowest == 0 {
+		lowest = 10 * working
+	}
+	r, err := valve.ReliefSetting(valve.ReliefNeed{Working: working, Margin: z.spec.Design.ReliefMargin, Rating: lowest})
+	if err != nil {
+		return valve.Relief{}, err
+	}
+	z.reliefP = r.Setting
+	return r, nil
 }
 
 // operating is a phase's working point: how the pump runs and where its
@@ -255,12 +275,16 @@ type operating struct {
 	relief   units.Flow     // flow over the relief valve
 	throttle units.Pressure // drop across the flow control, for the demand
 	center   units.Pressure // P→T drop through an unloading center
+	bleed    units.Flow     // surplus bled to tank through an open center at the pump's pressure
 	use      drive.Use
 }
 
 // operate finds how the pump runs in phase ph (or, with ph nil, in the
 // idle time between cycles).
 func (z *sizer) operate(ph *phase, model pump.Pump) (operating, error) {
+	if z.spec.Circuit.Accumulator.Use == "cycle" {
+		return z.charging(ph, model)
+	}
 	if ph != nil && ph.working() {
 		return z.working(ph, model)
 	}
@@ -296,6 +320,19 @@ func (z *sizer) operate(ph *phase, model pump.Pump) (operating, error) {
 	return operating{mode: "standby", point: pt, use: drive.Standby}, err
 }
 
+// charging is a phase of a circuit whose accumulator covers the peaks: the
+// pump charges it at full flow up to its charge pressure, and the moves
+// draw on it at that pressure through their flow controls.
+func (z *sizer) charging(ph *phase, model pump.Pump) (operating, error) {
+	p := z.chargeTo()
+	pt, err := model.At(p)
+	op := operating{mode: "charging", point: pt, use: drive.Working}
+	if ph != nil && ph.working() {
+		op.mode, op.throttle = "working", max(p-ph.pumpP, 0)
+	}
+	return op, err
+}
+
 // working is a phase in which actuators move: the pump gives the demand, a
 // fixed pump's surplus going over the relief and a compensated pump
 // stroking back, with a flow control metering the demand.
@@ -313,6 +350,11 @@ func (z *sizer) working(ph *phase, model pump.Pump) (operating, error) {
 	pt, err := model.At(p)
 	if err != nil || ph.demand >= pt.Flow || pt.Deadheaded {
 		return operating{mode: "working", point: pt, use: drive.Working}, err
+	}
+	if traits, _ := z.centerTraits(); model.Control == pump.NoControl && traits.Unloads() {
+		// An open or tandem center meters a fixed pump by bleeding the
+		// surplus to tank through the center at the load's pressure.
+		return operating{mode: "working", point: pt, bleed: pt.Flow - ph.demand, use: drive.Working}, nil
 	}
 	if model.Control == pump.NoControl {
 		full, err := model.At(z.reliefP)

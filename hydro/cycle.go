@@ -26,6 +26,7 @@ type act struct {
 	valve     int                   // index into valveSizes, −1 when none is large enough
 	lineA     *lineRun              // work line to the cap side (or motor port A)
 	lineB     *lineRun              // work line to the annulus side (or port B)
+	holder    *holder               // the counterbalance valve fitted, if any
 }
 
 func (a *act) cylinder() bool { return a.spec.Kind == "cylinder" }
@@ -56,9 +57,9 @@ type mv struct {
 func (m *mv) hold() bool { return m.spec.Direction == "hold" }
 
 // overruns reports a cylinder move whose load drives it (its total force
-// is not > 0): the pump only fills the inlet; a counterbalance valve holds
+// is below 0): the pump only fills the inlet; a counterbalance valve holds
 // the load back.
-func (m *mv) overruns() bool { return m.act.cylinder() && !m.hold() && m.forces.Total() <= 0 }
+func (m *mv) overruns() bool { return m.act.cylinder() && !m.hold() && m.forces.Total() < 0 }
 
 // phase is one phase of the cycle.
 type phase struct {

@@ -75,11 +75,17 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 	if err := add(thermal.LineLoss("unloading center", op.center, op.point.Flow)); err != nil {
 		return nil, 0, err
 	}
+	if err := add(thermal.Throttling("center bleed-off", op.point.Pressure, op.bleed)); err != nil {
+		return nil, 0, err
+	}
 	if ph == nil {
 		return loads, 0, nil
 	}
 	if ph.working() {
 		q := min(ph.demand, op.point.Flow)
+		if z.spec.Circuit.Accumulator.Use == "cycle" {
+			q = ph.demand // the flow controls meter the accumulator's flow too
+		}
 		if err := add(thermal.Throttling("flow control", op.throttle, q)); err != nil {
 			return nil, 0, err
 		}
@@ -91,6 +97,11 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 		}
 	}
 	var driving units.Power
+	if z.spec.Circuit.Accumulator.Use == "cycle" && ph.demand > op.point.Flow {
+		// The accumulator gives the flow the pump does not, at about the
+		// pump's pressure: stored energy, which ends as heat like the rest.
+		driving += z.chargeTo().TimesFlow(ph.demand - op.point.Flow)
+	}
 	for _, m := range ph.moves {
 		p, err := z.moveLoads(m, add)
 		if err != nil {
@@ -113,6 +124,9 @@ func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Pow
 			return 0, err
 		}
 		p := (-m.forces.Total()).TimesVelocity(m.speed)
+		if h := m.act.holder; h != nil && h.lowering == m {
+			return p, add(thermal.Throttling(name+" counterbalance valve", h.lower.Throttled, m.ret))
+		}
 		return p, add(thermal.Other(name+" lowered load", p, components.PhysicsRule("P = F·v of the load driving the actuator")))
 	}
 	if err := add(thermal.LineLoss(name+" valve and lines in", m.supplyDrop, m.capFlow)); err != nil {
@@ -125,6 +139,9 @@ func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Pow
 		return 0, nil
 	}
 	if m.act.cylinder() {
+		if m.forces.Total() <= 0 {
+			return 0, nil // no load: the port pressure only pushes the outlet oil out
+		}
 		return 0, add(thermal.MotorLoss(name+" seal friction", m.port, m.capFlow, m.act.size.SealEfficiency))
 	}
 	return 0, add(thermal.MotorLoss(name+" motor losses", m.port-m.back, m.capFlow, motorVolumetric*motorMechanical))
@@ -139,7 +156,6 @@ type balance struct {
 	steady    units.Temperature
 	running   units.Temperature
 	cooler    *thermal.Cooler
-	duty      drive.Duty
 }
 
 // balanceHeat sums the cycle's heat (thermal.Budget), sizes the reservoir
@@ -153,7 +169,11 @@ func (z *sizer) balanceHeat(hs []phaseHeat) (balance, error) {
 		// Input counts the power of a load driving its actuator beside the
 		// pump's shaft power: thermal.Budget holds a phase's heat to its
 		// input, and a lowered weight heats the oil too.
-		phases[i] = thermal.Phase{Name: h.name, Duration: h.time, Loads: h.loads, Input: h.op.point.Shaft + h.driving}
+		// A phase whose items are consistent adds up exactly to its input
+		// (every watt in ends as heat or work); the 1e-9 headroom covers
+		// the rounding of the sum, which thermal.Budget would refuse.
+		in := h.op.point.Shaft + h.driving
+		phases[i] = thermal.Phase{Name: h.name, Duration: h.time, Loads: h.loads, Input: in + in*1e-9}
 	}
 	var err error
 	if b.load, err = thermal.Budget(phases); err != nil {

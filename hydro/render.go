@@ -187,6 +187,9 @@ func (r Report) basisSection(sys units.System) section {
 		vq(sys, "rod yield strength", b.RodYield),
 		[3]string{"bores from", b.BoreSeries, ""},
 		[3]string{"motors from", b.MotorSeries, ""})
+	if b.MotorVolumetric.Value > 0 {
+		s.kv(vf("hydraulic motor volumetric efficiency", b.MotorVolumetric, pct), vf("hydraulic motor mechanical efficiency", b.MotorMechanical, pct))
+	}
 	v := r.Solve
 	state := "converged"
 	if !v.Converged {
@@ -376,7 +379,7 @@ func (r Report) fluidSection(sys units.System) section {
 	}
 	pairs = append(pairs, [3]string{"running, " + q(sys, r.Heat.Running.Value), check(sys, f.Hot), rule(f.Hot.Rule)})
 	if len(f.Suits) > 0 {
-		pairs = append(pairs, [3]string{"grades that suit the site", strings.Join(f.Suits, ", "), "fluid.SelectGrades, best first"})
+		pairs = append(pairs, [3]string{"grades that would suit the site", strings.Join(f.Suits, ", "), "fluid.SelectGrades, best first"})
 	}
 	s.kv(pairs...)
 	return s
@@ -445,3 +448,55 @@ func (r Report) findingSection(sys units.System) section {
 
 // width is a string's width in runes.
 func width(s string) int { return utf8.RuneCountInString(s) }
+
+// Text renders the comparison as a plain-text table in its unit system.
+func (c Comparison) Text() string { return writeText(c.doc()) }
+
+// Markdown renders the comparison as a Markdown table.
+func (c Comparison) Markdown() string { return writeMarkdown(c.doc()) }
+
+func (c Comparison) doc() doc {
+	sys := Report{Units: c.Units}.system()
+	title := c.Name
+	if title == "" {
+		title = "Hydraulic power unit"
+	}
+	d := doc{title: title + " — the design at each working pressure"}
+	s := section{title: "Comparison"}
+	var rows [][]string
+	var errs []string
+	for _, r := range c.Rows {
+		if r.Error != "" {
+			errs = append(errs, q(sys, r.Pressure)+": "+r.Error)
+			continue
+		}
+		var sizes []string
+		for _, a := range r.Actuators {
+			if a.Displacement > 0 {
+				sizes = append(sizes, a.Name+" "+q(sys, a.Displacement))
+			} else {
+				sizes = append(sizes, a.Name+" "+q(sys, a.Bore)+"/"+q(sys, a.Rod))
+			}
+		}
+		motor := "-"
+		if r.Motor > 0 {
+			motor = q(sys, r.Motor)
+		}
+		line := ""
+		for _, l := range r.Lines {
+			if l.Name == "pressure line" {
+				line = l.Size
+			}
+		}
+		rows = append(rows, []string{q(sys, r.Pressure), q(sys, r.PumpSpeed), strings.Join(sizes, ", "), q(sys, r.Pump),
+			motor, q(sys, r.RMS), q(sys, r.Heat), q(sys, r.Cooler), q(sys, r.Reservoir), q(sys, r.Oil), line,
+			strconv.Itoa(r.Findings) + " (" + r.Worst + ")"})
+	}
+	s.table([]string{"pressure", "pump speed", "actuators", "pump", "motor", "RMS", "heat", "cooler", "reservoir", "oil", "pressure line", "findings"}, rows,
+		"each row is the whole sizing at that working pressure (hydro.Size); oil is the running temperature, held at the highest allowed where a cooler is needed")
+	for _, e := range errs {
+		s.para(e)
+	}
+	d.sections = append(d.sections, s)
+	return d
+}

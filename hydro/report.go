@@ -58,6 +58,8 @@ type Basis struct {
 	PumpSpeed         Value[units.RotationalSpeed] `json:"pump_speed"`          // pump shaft speed
 	PumpVolumetric    Value[float64]               `json:"pump_volumetric"`     // pump volumetric efficiency
 	PumpMechanical    Value[float64]               `json:"pump_mechanical"`     // pump hydromechanical efficiency
+	MotorVolumetric   Value[float64]               `json:"motor_volumetric"`    // hydraulic motor efficiencies, when there is a motor
+	MotorMechanical   Value[float64]               `json:"motor_mechanical"`    //
 	SuctionVelocity   Value[units.Velocity]        `json:"suction_velocity"`    // line velocity limits
 	PressureVelocity  Value[units.Velocity]        `json:"pressure_velocity"`   //
 	ReturnVelocity    Value[units.Velocity]        `json:"return_velocity"`     //
@@ -98,8 +100,19 @@ type ActuatorResult struct {
 	// Motors.
 	Displacement components.Choice[units.Displacement] `json:"displacement"`
 
+	Holding   *Holding     `json:"holding"`   // the load-holding valve, for a load that can fall or run away
 	Governing string       `json:"governing"` // the phase whose move set the size
 	Moves     []MoveResult `json:"moves"`
+}
+
+// Holding is the counterbalance valve fitted at a cylinder port to hold a
+// suspended or overrunning load (hydro/valve).
+type Holding struct {
+	Valve   string                `json:"valve"`
+	Load    Value[units.Pressure] `json:"load"`    // the highest load-induced pressure on the held side
+	Setting Value[units.Pressure] `json:"setting"` // the valve's setting
+	Pilot   Value[units.Pressure] `json:"pilot"`   // the pilot pressure that opens it: the inlet pressure to lower the load
+	Ratio   Value[float64]        `json:"pilot_ratio"`
 }
 
 // Buckling is the buckling check of a cylinder's rod.

@@ -8,7 +8,6 @@ import (
 	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/drive"
 	"github.com/hydrosize/hydrosize/hydro/line"
-	"github.com/hydrosize/hydrosize/hydro/pump"
 	"github.com/hydrosize/hydrosize/hydro/thermal"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -63,6 +62,12 @@ func newSizer(s Spec, p units.Pressure, pRule components.Rule) (*sizer, error) {
 	z.basis.Pressure = Value[units.Pressure]{p, pRule}
 	z.basis.PumpVolumetric = Value[float64]{z.kind.volumetric, pumpFigures}
 	z.basis.PumpMechanical = Value[float64]{z.kind.mechanical, pumpFigures}
+	for _, a := range s.Actuators {
+		if a.Kind == "motor" {
+			z.basis.MotorVolumetric = Value[float64]{motorVolumetric, motorFigures}
+			z.basis.MotorMechanical = Value[float64]{motorMechanical, motorFigures}
+		}
+	}
 	z.resolveSeries()
 	z.resolveFactors()
 	if err := z.resolveSpeed(); err != nil {
@@ -208,6 +213,3 @@ func rodEnd(e string) actuator.RodEnd {
 	}
 	return actuator.RodPinned
 }
-
-// control returns the pump family's control for the spec's pump.
-func (z *sizer) control() pump.Control { return z.kind.control }

@@ -139,8 +139,15 @@ func (z *sizer) pass(res *result, n int, prevP units.Pressure) (bool, error) {
 	if err := z.drops(&res.lines); err != nil {
 		return false, &FieldError{Path: "circuit", Err: err}
 	}
+	for _, a := range z.acts { // again, with this pass's back pressures
+		if err := z.workMoves(a); err != nil {
+			return false, &FieldError{Path: index("actuators", a.index), Err: err}
+		}
+	}
 	z.loads()
-	z.setRelief()
+	if _, err := z.setRelief(); err != nil {
+		return false, &FieldError{Path: "design.relief_margin", Err: err}
+	}
 	flow := z.pumpFlow()
 	res.solve.Iterations = n
 	if flow <= 0 {
