@@ -242,6 +242,9 @@ func (f Fluid) DynamicViscosity(t units.Temperature, p units.Pressure) (units.Dy
 // Thermal (linear in temperature).
 func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, error) {
 	const fn = "fluid.Fluid.SpecificHeat"
+	if err := validate.Positive(fn, "Thermal.C40", f.thermal.C40); err != nil { // the zero Fluid
+		return 0, err
+	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
@@ -253,6 +256,9 @@ func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, er
 // Thermal (linear in temperature).
 func (f Fluid) ThermalConductivity(t units.Temperature) (units.ThermalConductivity, error) {
 	const fn = "fluid.Fluid.ThermalConductivity"
+	if err := validate.Positive(fn, "Thermal.K40", f.thermal.K40); err != nil { // the zero Fluid
+		return 0, err
+	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}

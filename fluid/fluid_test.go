@@ -83,8 +83,8 @@ func TestFluidBadInput(t *testing.T) {
 	_, err = CragoeSpecificHeat(2, celsius(40))
 	wantRangeError(t, err, "sg")
 	g := f // a model FromDataSheet would refuse, set inside the package
-	g.thermal.C40 = -5
-	_, err = g.SpecificHeat(celsius(40))
+	g.thermal.CSlope = -50 // c < 0 at 200 °C
+	_, err = g.SpecificHeat(celsius(200))
 	wantRangeError(t, err, "c")
 	_, err = Fluid{}.BulkModulus(IsothermalTangent, celsius(40), 0)
 	wantRangeError(t, err, "Bulk.K0")
@@ -120,6 +120,8 @@ func TestFluidErrorsNameTheMethod(t *testing.T) {
 		{"fluid.Fluid.Grade", "V40", second(Fluid{}.Grade())},
 		{"fluid.Fluid.VI", "V100", second(thin.VI())},
 		{"fluid.Fluid.VI", "V40", second(Fluid{}.VI())},
+		{"fluid.Fluid.SpecificHeat", "Thermal.C40", second(Fluid{}.SpecificHeat(celsius(40)))},
+		{"fluid.Fluid.ThermalConductivity", "Thermal.K40", second(Fluid{}.ThermalConductivity(celsius(40)))},
 		{"fluid.CurveFromVI", "v40", second(CurveFromVI(1*units.Centistokes, 100))},
 		{"fluid.CurveFromVI", "vi", second(CurveFromVI(46*units.Centistokes, 1e6))},
 	} {
