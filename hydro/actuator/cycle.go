@@ -34,7 +34,7 @@ type Motion struct {
 //	s_a = v²/(2a), s_d = v²/(2d); if s_a + s_d ≤ s: t = v/a + (s − s_a − s_d)/v + v/d
 //	otherwise (triangular): v_p = √(2·s·a·d/(a + d)), t = v_p/a + v_p/d
 //
-// (kinematics of uniform acceleration [X]). Errors match units.ErrRange and
+// (the kinematics of uniform acceleration from rest). Errors match units.ErrRange and
 // name the field.
 func (p Profile) Time() (Motion, error) {
 	const fn = "actuator.Profile.Time"
@@ -122,7 +122,7 @@ func (c Cylinder) Move(dir Direction, p Profile) (StrokeMotion, error) {
 	if c.Action == DoubleActing {
 		r.PeakReturn = m.PeakSpeed.TimesArea(c.OutletArea(dir))
 	}
-	if err := validate.Result(fn, "PeakFlow", r.PeakFlow); err != nil {
+	if err := finite(fn, output{"PeakFlow", float64(r.PeakFlow)}, output{"PeakReturn", float64(r.PeakReturn)}); err != nil {
 		return StrokeMotion{}, err
 	}
 	return r, nil
@@ -153,7 +153,7 @@ type Cushion struct {
 type CushionCheck struct {
 	Decel    units.Acceleration               // average deceleration v²/(2L)
 	Force    units.Force                      // m·a + p_drive·A_in + F_assist, carried by the cushion chamber
-	Energy   units.Energy                     // the energy absorbed: ½·m·v² + (p_drive·A_in + F_assist)·L
+	Energy   units.Energy                     // the energy absorbed, Force·L = ½·m·v² + (p_drive·A_in + F_assist)·L (0 when Force is 0)
 	Pressure units.Pressure                   // average cushion pressure Force/A_c
 	Rating   components.Check[units.Pressure] // Pressure at most Cylinder.Rating
 	Findings components.Findings              // a warning when the rating is exceeded
@@ -164,7 +164,7 @@ type CushionCheck struct {
 //
 //	a = v²/(2·L),  p_c = (m·a + p_drive·A_in + F_assist) / A_c
 //
-// (a force balance at uniform deceleration [X]), checked against
+// (Newton's second law at uniform deceleration), checked against
 // Cylinder.Rating, which must be set (> 0). A cushion that stops the mass
 // evenly holds this average; real cushions peak above it, so treat a result
 // near the rating as over it. Above the rating the result carries a warning
@@ -192,9 +192,12 @@ func (c Cylinder) Cushioning(dir Direction, cu Cushion) (CushionCheck, error) {
 	push := cu.Drive.TimesArea(c.Area(dir)) + cu.Assist
 	r := CushionCheck{Decel: units.Acceleration(float64(cu.Speed) * float64(cu.Speed) / (2 * float64(cu.Length)))}
 	r.Force = max(cu.Mass.TimesAcceleration(r.Decel)+push, 0)
-	r.Energy = units.Energy(0.5*float64(cu.Mass)*float64(cu.Speed)*float64(cu.Speed) + float64(push)*float64(cu.Length))
+	r.Energy = units.Energy(float64(r.Force) * float64(cu.Length))
 	p, err := pressureOn(fn, r.Force, ac)
 	if err != nil {
+		return CushionCheck{}, err
+	}
+	if err := finite(fn, output{"Decel", float64(r.Decel)}, output{"Energy", float64(r.Energy)}); err != nil {
 		return CushionCheck{}, err
 	}
 	r.Pressure = p
