@@ -151,7 +151,7 @@ func (f Fluid) Grade() (Grade, error) { return gradeOf("fluid.Fluid.Grade", "V40
 func (f Fluid) VI() (float64, error) {
 	vi, err := ViscosityIndex(f.v40, f.v100)
 	if err != nil {
-		return 0, validate.Renamed(err, "fluid.Fluid.VI", "v40", "V40", "v100", "V100")
+		return 0, validate.Renamed(err, "fluid.Fluid.VI", validate.Fields("", map[string]string{"v40": "V40", "v100": "V100"}))
 	}
 	return vi, nil
 }
@@ -170,7 +170,7 @@ func (f Fluid) viscosity(fn string, t units.Temperature) (units.KinematicViscosi
 	}
 	nu, err := f.curve.At(t)
 	if err != nil {
-		return 0, validate.Renamed(err, fn)
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	return nu, nil
 }
@@ -229,7 +229,7 @@ func (f Fluid) DynamicViscosity(t units.Temperature, p units.Pressure) (units.Dy
 	}
 	rho, err := f.Density(t, p)
 	if err != nil {
-		return 0, validate.Renamed(err, fn)
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	mu := units.DynamicViscosity(float64(nu) * float64(rho))
 	if err := validate.Result(fn, "μ", mu); err != nil {

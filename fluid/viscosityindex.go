@@ -153,7 +153,7 @@ func CurveFromVI(v40 units.KinematicViscosity, vi float64) (Curve, error) {
 	const fn = "fluid.CurveFromVI"
 	v100, err := V100ForVI(v40, vi)
 	if err != nil {
-		return Curve{}, validate.Renamed(err, fn)
+		return Curve{}, validate.Renamed(err, fn, nil)
 	}
 	c, err := CurveThrough(t40, v40, t100, v100)
 	if err != nil { // within a few VI of the top of the span: ν100 ≈ ν40

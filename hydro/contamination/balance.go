@@ -94,7 +94,7 @@ func BetaForTarget(perMinute float64, q units.Flow, n int) (float64, error) {
 	}
 	b, err := RequiredBeta(perMinute, q, upper[n])
 	if err != nil {
-		return 0, validate.Renamed(err, fn)
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	return b, nil
 }

@@ -107,7 +107,7 @@ func Per100mL(count float64, sample units.Volume) (float64, error) {
 	const fn = "contamination.Per100mL"
 	v, err := PerML(count, sample)
 	if err != nil {
-		return 0, validate.Renamed(err, fn)
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	v *= 100
 	if err := validate.Result(fn, "count per 100 mL", v); err != nil {

@@ -40,26 +40,3 @@ func PositiveResult[T ~float64](fn, name string, v T) error {
 	}
 	return nil
 }
-
-// Renamed returns err as reported by the function fn that called the one
-// which failed, so that an error always names the function its caller
-// called: a *RangeError, alone or carried by Kind, is copied with Func set to
-// fn and its Param renamed by the old, new pairs of params (a parameter not
-// listed keeps its name). Any other error, and nil, is returned as it is.
-func Renamed(err error, fn string, params ...string) error {
-	switch e := err.(type) {
-	case *RangeError:
-		c := *e
-		c.Func = fn
-		for i := 0; i+1 < len(params); i += 2 {
-			if c.Param == params[i] {
-				c.Param = params[i+1]
-				break
-			}
-		}
-		return &c
-	case *kindError:
-		return &kindError{err: Renamed(e.err, fn, params...), kind: e.kind}
-	}
-	return err
-}

@@ -46,34 +46,21 @@ func TestPositiveResult(t *testing.T) {
 	}
 }
 
-func TestRenamed(t *testing.T) {
+// TestRenamedKeepsKind: Renamed renames the range error inside a Kind and
+// keeps the kind; a nil param mapping keeps the parameter names.
+func TestRenamedKeepsKind(t *testing.T) {
 	kind := Sentinel("no steady state")
-	for _, c := range []struct {
-		name string
-		err  error
-	}{
-		{"range error", Fail("pkg.Inner", "count", -1.0, "≥ 0")},
-		{"range error with a kind", Kind(Fail("pkg.Inner", "count", -1.0, "≥ 0"), kind)},
-	} {
-		got := Renamed(c.err, "pkg.Outer", "count", "Sample.Count")
-		var re *RangeError
-		if !errors.As(got, &re) || re.Func != "pkg.Outer" || re.Param != "Sample.Count" || re.Value != "-1" || re.Valid != "≥ 0" {
-			t.Errorf("%s: Renamed = %v; want pkg.Outer naming Sample.Count", c.name, got)
-		}
-		if !errors.Is(got, ErrRange) || errors.Is(c.err, kind) != errors.Is(got, kind) {
-			t.Errorf("%s: Renamed lost a sentinel: %v", c.name, got)
-		}
-		var orig *RangeError
-		if errors.As(c.err, &orig); orig.Func != "pkg.Inner" || orig.Param != "count" {
-			t.Errorf("%s: Renamed changed the error it was given: %v", c.name, c.err)
-		}
-	}
-	// A parameter not in the list keeps its name; other errors and nil pass through.
+	err := Kind(Fail("pkg.Inner", "q", 1.0, "> 3"), kind)
+	got := Renamed(err, "pkg.Outer", nil)
 	var re *RangeError
-	if errors.As(Renamed(Fail("pkg.Inner", "q", 0.0, "> 0"), "pkg.Outer", "count", "n"), &re); re.Param != "q" || re.Func != "pkg.Outer" {
-		t.Errorf("unlisted parameter: %+v", re)
+	if !errors.As(got, &re) || re.Func != "pkg.Outer" || re.Param != "q" || !errors.Is(got, kind) || !errors.Is(got, ErrRange) {
+		t.Errorf("Renamed(Kind(...)) = %v; want pkg.Outer naming q, still matching the kind", got)
 	}
-	if Renamed(nil, "pkg.Outer") != nil || Renamed(errSyntax, "pkg.Outer") != errSyntax {
-		t.Error("Renamed changed nil or a non-range error")
+	if errors.As(err, &re); re.Func != "pkg.Inner" {
+		t.Errorf("Renamed changed the error it was given: %v", err)
+	}
+	got = Renamed(err, "pkg.Outer", Fields("Need.", nil))
+	if errors.As(got, &re); re.Param != "Need.q" {
+		t.Errorf("Renamed(Kind(...)) with Fields: param %q, want Need.q", re.Param)
 	}
 }
