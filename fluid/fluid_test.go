@@ -82,7 +82,7 @@ func TestFluidBadInput(t *testing.T) {
 	wantRangeError(t, err, "Density15")
 	_, err = CragoeSpecificHeat(2, celsius(40))
 	wantRangeError(t, err, "sg")
-	g := f // a model FromDataSheet would refuse, set inside the package
+	g := f                 // a model FromDataSheet would refuse, set inside the package
 	g.thermal.CSlope = -50 // c < 0 at 200 °C
 	_, err = g.SpecificHeat(celsius(200))
 	wantRangeError(t, err, "c")
