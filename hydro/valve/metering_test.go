@@ -118,6 +118,10 @@ func TestLoadHolding(t *testing.T) {
 			map[string]components.Severity{}},
 		{"a counterbalance behind a closed center", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: ClosedCenter},
 			map[string]components.Severity{"valve.pilot-trapped": components.Caution}},
+		// A regenerative center joins the pump to both actuator ports: the
+		// pilot is not trapped but pressurised, and the actuator moves.
+		{"a counterbalance behind a regenerative center", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: RegenerativeCenter},
+			map[string]components.Severity{"valve.pilot-pressurised": components.Warning}},
 		{"done right", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: FloatCenter},
 			map[string]components.Severity{}},
 		{"a resisting load needs nothing", Load{}, map[string]components.Severity{}},
