@@ -339,3 +339,18 @@ func TestDisplacementForOverflow(t *testing.T) {
 		t.Errorf("DisplacementFor overflowing = %v, %v; want 0 and ErrRange", d, err)
 	}
 }
+
+// A displacement that overflows or underflows to zero is an error of
+// DisplacementFor (naming its result), not of a helper, and never 0 beside
+// nil.
+func TestDisplacementForExtremes(t *testing.T) {
+	for _, c := range []struct {
+		q units.Flow
+		n units.RotationalSpeed
+	}{{math.MaxFloat64, 0.5}, {1e-300, math.MaxFloat64}} {
+		d, err := DisplacementFor(c.q, c.n, 0.5)
+		if checktest.RangeErrorIn(t, err, "pump.DisplacementFor", "displacement"); d != 0 {
+			t.Errorf("DisplacementFor(%v, %v) = %v beside the error", c.q, c.n, d)
+		}
+	}
+}
