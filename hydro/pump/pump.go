@@ -227,7 +227,7 @@ func (p Pump) geometric() units.Flow { return p.Displacement.TimesSpeed(p.Speed)
 // leakage returns the internal leakage at outlet pressure pr.
 func (p Pump) leakage(pr units.Pressure) units.Flow {
 	l := float64(p.geometric()) * (1 - p.Volumetric)
-	if p.LeakagePressure > 0 {
+	if l != 0 && p.LeakagePressure > 0 { // a lossless pump leaks nothing, even where pr/LeakagePressure overflows
 		l *= float64(pr / p.LeakagePressure)
 	}
 	return units.Flow(l)

@@ -354,3 +354,17 @@ func TestDisplacementForExtremes(t *testing.T) {
 		}
 	}
 }
+
+// A lossless pump (η_v = 1) leaks nothing at any pressure, however small
+// the LeakagePressure it was measured at: 0 × (p/p_L) is 0 even when p/p_L
+// overflows.
+func TestPumpLossless(t *testing.T) {
+	p := baler()
+	p.Volumetric, p.LeakagePressure = 1, 5e-324
+	pt, err := p.At(100 * units.Bar)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "lossless flow", pt.Flow, 45e-6*1450/60, 1e-15)
+	near(t, "hydraulic power", pt.Hydraulic, 100e5*45e-6*1450/60, 1e-15)
+}
