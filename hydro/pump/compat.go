@@ -303,7 +303,10 @@ func (p Pump) inSeries(c Circuit) components.Findings {
 		sum)}
 }
 
-// sharing is several demands moving together on valves in parallel.
+// sharing is several demands moving together on valves in parallel. When
+// they ask more than the pump gives, the heat is taken on the flow it does
+// give, shared in proportion to the asks (as flow-sharing valves split
+// it), so the heat never exceeds the pump's hydraulic output.
 func (p Pump) sharing(c Circuit) (components.Findings, error) {
 	lo, hi := c.Demands[0], c.Demands[0]
 	var want units.Flow
@@ -341,9 +344,13 @@ func (p Pump) sharing(c Circuit) (components.Findings, error) {
 	if fixed && want < most {
 		supply = c.Relief // the surplus lifts the pump to the relief
 	}
+	share := 1.0 // the fraction of its ask each actuator gets
+	if want > most {
+		share = float64(most / want) // saturated: the pump's flow, shared in proportion to the asks
+	}
 	var heat units.Power
 	for _, d := range c.Demands {
-		heat += (supply - d.Pressure).TimesFlow(d.Flow)
+		heat += (supply - d.Pressure).TimesFlow(units.Flow(share * float64(d.Flow)))
 	}
 	if fixed && want < most {
 		heat += c.Relief.TimesFlow(most - want)
