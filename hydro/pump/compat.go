@@ -55,7 +55,8 @@ var heatRule = components.PhysicsRule("energy balance: throttled flow turns Δp�
 // The pump must pass [Pump.Validate]; the circuit needs a valid Center, a
 // Relief > 0, a CenterDrop ≥ 0, and for each demand a Pressure ≥ 0 and a
 // Flow > 0; Series needs an open or tandem center. Errors match
-// units.ErrRange and name the field.
+// units.ErrRange and name the field; demands whose sums or heat overflow
+// fail with an error naming the finding's topic.
 func (p Pump) Compatibility(c Circuit) (components.Findings, error) {
 	const fn = "pump.Pump.Compatibility"
 	tr, err := p.checkCircuit(fn, c)
@@ -82,7 +83,34 @@ func (p Pump) Compatibility(c Circuit) (components.Findings, error) {
 	if err != nil {
 		return nil, err
 	}
-	return fs.Merge(moving...), nil
+	fs = fs.Merge(moving...)
+	if err := quoted(fn, fs); err != nil {
+		return nil, err
+	}
+	return fs, nil
+}
+
+// quoted checks that every quantity the findings quote is finite: with
+// every input finite, a sum of demands or a heat product can still
+// overflow. The error names the finding's topic as the result.
+func quoted(fn string, fs components.Findings) error {
+	for _, f := range fs {
+		for _, a := range f.Args() {
+			var err error
+			switch v := a.(type) {
+			case units.Pressure:
+				err = validate.Result(fn, f.Topic, v)
+			case units.Flow:
+				err = validate.Result(fn, f.Topic, v)
+			case units.Power:
+				err = validate.Result(fn, f.Topic, v)
+			}
+			if err != nil {
+				return err
+			}
+		}
+	}
+	return nil
 }
 
 func (p Pump) checkCircuit(fn string, c Circuit) (valve.CenterTraits, error) {

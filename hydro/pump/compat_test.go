@@ -208,3 +208,19 @@ func TestCompatibilitySaturatedHeat(t *testing.T) {
 	want := 150e5*q - (50e5*share + 150e5*share)
 	near(t, "saturated heat by energy balance", power(t, finding(t, fs, "pump.sharing-heat")), units.Power(want), 1e-13)
 }
+
+// Demands whose sums or heat overflow, though each number is finite, are
+// an error, not a finding that quotes +Inf.
+func TestCompatibilityOverflow(t *testing.T) {
+	for topic, c := range map[string]Circuit{
+		"pump.series-stall": {Center: valve.TandemCenter, Relief: 2e7, Series: true, Together: true,
+			Demands: []Demand{{Pressure: 1e308, Flow: 1e-4}, {Pressure: 1e308, Flow: 1e-4}}},
+		"pump.saturated": {Center: valve.ClosedCenter, Relief: 2e7, Together: true,
+			Demands: []Demand{{Pressure: 1e5, Flow: 1e308}, {Pressure: 1e5, Flow: 1e308}}},
+	} {
+		fs, err := baler().Compatibility(c)
+		if checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", topic); fs != nil {
+			t.Errorf("%s: findings %v beside the error", topic, fs)
+		}
+	}
+}
