@@ -60,7 +60,8 @@ type Intensification struct {
 // [IntensifiedPressure], and checks it against Cylinder.Rating, which must
 // be set (> 0). Above the rating the result carries a [components.Danger]
 // finding: the cylinder or its seals can burst (ISO 4413 requires that no
-// component sees more than its rated pressure).
+// component sees more than its rated pressure). A Ratio that overflows (an
+// inlet pressure near zero) is an error matching units.ErrRange.
 func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.Force) (Intensification, error) {
 	const fn = "actuator.Cylinder.Intensification"
 	if err := c.check(fn, dir); err != nil {
@@ -77,7 +78,11 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	if err != nil {
 		return Intensification{}, rename(err, fn)
 	}
-	r := Intensification{Pressure: po, Ratio: float64(po / p),
+	ratio, err := validate.Checked(fn, "Ratio", float64(po/p))
+	if err != nil {
+		return Intensification{}, err
+	}
+	r := Intensification{Pressure: po, Ratio: ratio,
 		Rating: components.Within(po, c.Rating, components.CallerRule("Cylinder.Rating"))}
 	if !r.Rating.OK() {
 		r.Findings = components.Findings{components.NewFinding(components.Danger, components.Overpressure,

@@ -150,3 +150,13 @@ func TestLoadHolding(t *testing.T) {
 	_, err = LoadHolding(Load{Center: 9})
 	checktest.RangeErrorIn(t, err, "valve.LoadHolding", "Center")
 }
+
+// The intensification ratio of a near-zero supply overflows: CheckMetering
+// fails in its own name instead of returning +Inf.
+func TestCheckMeteringRatioOverflow(t *testing.T) {
+	mc, err := CheckMetering(MeteringNeed{Metering: MeterOut, Cylinder: twoToOne(), Stroke: actuator.Extend,
+		Supply: 5e-324, Resist: -1e3})
+	if checktest.RangeErrorIn(t, err, "valve.CheckMetering", "Ratio"); mc.Intensified != 0 || mc.Findings != nil {
+		t.Errorf("CheckMetering = %+v beside the error; want the zero value", mc)
+	}
+}
