@@ -3,6 +3,8 @@ package components
 import (
 	"encoding/json"
 	"fmt"
+
+	"github.com/hydrosize/hydrosize/internal/validate"
 )
 
 // Bound says which side of a [Check]'s limit passes.
@@ -84,16 +86,35 @@ type checkJSON[T ~float64] struct {
 }
 
 // MarshalJSON writes {"value","limit","bound","ratio","ok","rule"}; the
-// quantities are written by their own MarshalText (a unit string).
+// quantities are written by their own MarshalText (a unit string). It fails
+// with a *units.RangeError naming Value, Limit or Ratio when one is not
+// finite, which JSON cannot hold.
 func (c Check[T]) MarshalJSON() ([]byte, error) {
-	return json.Marshal(checkJSON[T]{c.Value, c.Limit, c.Bound, c.Ratio(), c.OK(), c.Rule})
+	const fn = "components.Check.MarshalJSON"
+	ratio := c.Ratio()
+	if err := finiteFields(fn, "Value", c.Value, "Limit", c.Limit, "Ratio", ratio); err != nil {
+		return nil, err
+	}
+	return json.Marshal(checkJSON[T]{c.Value, c.Limit, c.Bound, ratio, c.OK(), c.Rule})
+}
+
+// finiteFields checks that the two quantities and the derived ratio a JSON
+// form writes are finite, naming the first that is not.
+func finiteFields[T ~float64](fn, na string, a T, nb string, b T, nr string, r float64) error {
+	if err := validate.Finite(fn, na, a); err != nil {
+		return err
+	}
+	if err := validate.Finite(fn, nb, b); err != nil {
+		return err
+	}
+	return validate.Result(fn, nr, r)
 }
 
 // UnmarshalJSON reads the form MarshalJSON writes; ratio and ok are
 // recomputed, not read.
 func (c *Check[T]) UnmarshalJSON(b []byte) error {
 	var j checkJSON[T]
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Check.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	*c = Check[T]{Value: j.Value, Limit: j.Limit, Bound: j.Bound, Rule: j.Rule}

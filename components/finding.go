@@ -162,7 +162,7 @@ func (f Finding) MarshalJSON() ([]byte, error) {
 // as fixed text.
 func (f *Finding) UnmarshalJSON(b []byte) error {
 	var j findingJSON
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Finding.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	*f = Finding{Severity: j.Severity, Hazard: j.Hazard, Topic: j.Topic, Rule: j.Rule,

@@ -37,8 +37,26 @@ func (h HoseSize) ID() units.Length { return units.Length(h) * (units.Inch / 16)
 // String writes the dash number: "-8".
 func (h HoseSize) String() string { return "-" + strconv.Itoa(int(h)) }
 
-// MarshalText writes the dash number, "-8".
-func (h HoseSize) MarshalText() ([]byte, error) { return []byte(h.String()), nil }
+// MarshalText writes the dash number, "-8". It refuses, with a
+// *units.RangeError matching units.ErrRange, a number that is not one of
+// the SAE J517 dash sizes of [HoseSizes], which UnmarshalText would refuse.
+func (h HoseSize) MarshalText() ([]byte, error) {
+	if !h.listed() {
+		return nil, &units.RangeError{Func: "components.HoseSize.MarshalText", Param: "h",
+			Value: h.String(), Valid: "an SAE J517 dash size:" + dashList()}
+	}
+	return []byte(h.String()), nil
+}
+
+// listed reports whether h is one of the SAE J517 dash sizes.
+func (h HoseSize) listed() bool {
+	for _, d := range hoseDashes {
+		if d == h {
+			return true
+		}
+	}
+	return false
+}
 
 // UnmarshalText reads a hose size as [ParseHoseSize] does.
 func (h *HoseSize) UnmarshalText(b []byte) error {
@@ -114,10 +132,8 @@ func parseHoseSize(fn, input string) (HoseSize, error) {
 	if end := skipSpaces(input, i); end != len(input) {
 		return 0, syntax(i, "unexpected text after the dash number")
 	}
-	for _, h := range hoseDashes {
-		if int(h) == n {
-			return h, nil
-		}
+	if h := HoseSize(n); n <= 255 && h.listed() {
+		return h, nil
 	}
 	return 0, &units.ParseError{Func: fn, Input: input, Pos: start, Err: units.ErrRange,
 		Detail: "want an SAE J517 dash size:" + dashList()}

@@ -4,6 +4,7 @@ import (
 	"errors"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -120,6 +121,28 @@ func TestHoseSizeText(t *testing.T) {
 	var h HoseSize
 	if err := h.UnmarshalText([]byte("-7")); !errors.Is(err, units.ErrRange) || h != 0 {
 		t.Errorf("UnmarshalText(-7) = %v, %v", h, err)
+	}
+}
+
+// TestHoseSizeMarshalRefusesWhatUnmarshalRefuses checks every HoseSize value:
+// MarshalText writes a dash size only for an SAE J517 size, which
+// UnmarshalText reads back, and refuses every other value with a range
+// error, so that json.Marshal never writes a hose size it cannot read.
+func TestHoseSizeMarshalRefusesWhatUnmarshalRefuses(t *testing.T) {
+	for i := range 256 {
+		h := HoseSize(i)
+		b, err := h.MarshalText()
+		if _, listed := HoseSizeOf(h.ID()); listed {
+			var back HoseSize
+			if err != nil || back.UnmarshalText(b) != nil || back != h {
+				t.Errorf("%v: MarshalText = %q, %v; want text that reads back", h, b, err)
+			}
+			continue
+		}
+		if b != nil {
+			t.Errorf("HoseSize(%d).MarshalText wrote %q beside its error", i, b)
+		}
+		checktest.RangeErrorIn(t, err, "components.HoseSize.MarshalText", "h")
 	}
 }
 

@@ -1,6 +1,8 @@
 package components
 
 import (
+	"encoding/json"
+	"errors"
 	"fmt"
 	"strings"
 
@@ -95,4 +97,27 @@ func unmarshalName[T ~uint8](fn string, b []byte, v *T, names []string) error {
 	}
 	return &units.ParseError{Func: fn, Input: string(b), Err: units.ErrSyntax,
 		Detail: "want one of " + strings.Join(names, ", ")}
+}
+
+// decodeJSON is json.Unmarshal for the UnmarshalJSON method fn. An error
+// that already matches a units sentinel (a quantity's or a name's own text)
+// is returned as it is; any other (malformed JSON, a field of the wrong JSON
+// type) becomes a *units.ParseError quoting the input and matching
+// units.ErrSyntax.
+func decodeJSON(fn string, b []byte, v any) error {
+	err := json.Unmarshal(b, v)
+	if err == nil || matchesSentinel(err) {
+		return err
+	}
+	return &units.ParseError{Func: fn, Input: string(b), Err: units.ErrSyntax, Detail: err.Error()}
+}
+
+func matchesSentinel(err error) bool {
+	for _, s := range [...]error{units.ErrSyntax, units.ErrUnknownUnit, units.ErrDimension, units.ErrRange,
+		units.ErrReference, units.ErrAmbiguous} {
+		if errors.Is(err, s) {
+			return true
+		}
+	}
+	return false
 }

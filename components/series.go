@@ -216,12 +216,24 @@ func (s Series[T]) NextPreferred(min T) (T, error) {
 // above required, skipping second-choice sizes; otherwise it behaves as
 // [Series.Select]. The choice names the whole series.
 func (s Series[T]) SelectPreferred(required T) (Choice[T], error) {
-	if err := validate.Positive("components.Series.SelectPreferred", "required", required); err != nil {
+	const fn = "components.Series.SelectPreferred"
+	if err := validate.Positive(fn, "required", required); err != nil {
 		return Choice[T]{}, err
 	}
+	return s.choice(fn, required, s.preferredFrom(required))
+}
+
+// choice returns the choice of the i-th size (none when i is past the
+// end) for required. It fails when required is so small that the margin
+// Chosen/Required − 1 overflows.
+func (s Series[T]) choice(fn string, required T, i int) (Choice[T], error) {
 	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
-	if i := s.preferredFrom(required); i < len(s.values) {
+	if i < len(s.values) {
 		c.Chosen = s.values[i]
+	}
+	if c.Chosen > 0 && math.IsInf(float64(c.Chosen/required), 0) {
+		return Choice[T]{}, validate.Fail(fn, "required", required,
+			"large enough that the margin "+format(c.Chosen)+"/required is finite")
 	}
 	return c, nil
 }
@@ -283,16 +295,13 @@ func (s Series[T]) Nearest(v T) (T, error) {
 // requirement above the largest size is not an error: the choice comes back
 // with Chosen 0 and OK false, for the caller to report as a finding. It
 // fails with an error matching units.ErrRange only when required is not
-// finite and > 0.
+// finite and > 0, or so small (a denormal) that the margin overflows.
 func (s Series[T]) Select(required T) (Choice[T], error) {
-	if err := validate.Positive("components.Series.Select", "required", required); err != nil {
+	const fn = "components.Series.Select"
+	if err := validate.Positive(fn, "required", required); err != nil {
 		return Choice[T]{}, err
 	}
-	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
-	if i := s.from(required); i < len(s.values) {
-		c.Chosen = s.values[i]
-	}
-	return c, nil
+	return s.choice(fn, required, s.from(required))
 }
 
 func (s Series[T]) label() string {
@@ -368,7 +377,7 @@ func (s Series[T]) MarshalJSON() ([]byte, error) {
 // series, say — with the checks of [NewSeries].
 func (s *Series[T]) UnmarshalJSON(b []byte) error {
 	var j seriesJSON[T]
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Series.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	v, err := NewSeries(j.Name, j.Rule, j.Sizes, j.Second)
@@ -425,15 +434,22 @@ type choiceJSON[T ~float64] struct {
 }
 
 // MarshalJSON writes {"required","chosen","series","margin","ok","rule"}.
+// It fails with a *units.RangeError naming Required, Chosen or Margin when
+// one is not finite, which JSON cannot hold.
 func (c Choice[T]) MarshalJSON() ([]byte, error) {
-	return json.Marshal(choiceJSON[T]{c.Required, c.Chosen, c.Series, c.Margin(), c.OK(), c.Rule})
+	const fn = "components.Choice.MarshalJSON"
+	margin := c.Margin()
+	if err := finiteFields(fn, "Required", c.Required, "Chosen", c.Chosen, "Margin", margin); err != nil {
+		return nil, err
+	}
+	return json.Marshal(choiceJSON[T]{c.Required, c.Chosen, c.Series, margin, c.OK(), c.Rule})
 }
 
 // UnmarshalJSON reads the form MarshalJSON writes; margin and ok are
 // recomputed, not read.
 func (c *Choice[T]) UnmarshalJSON(b []byte) error {
 	var j choiceJSON[T]
-	if err := json.Unmarshal(b, &j); err != nil {
+	if err := decodeJSON("components.Choice.UnmarshalJSON", b, &j); err != nil {
 		return err
 	}
 	*c = Choice[T]{Required: j.Required, Chosen: j.Chosen, Series: j.Series, Rule: j.Rule}

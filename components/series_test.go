@@ -8,6 +8,7 @@ import (
 	"testing"
 	"time"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -40,8 +41,7 @@ func TestSeriesNext(t *testing.T) {
 		}
 	}
 	_, err := s.Next(101 * mm)
-	var re *units.RangeError
-	if !errors.As(err, &re) || !errors.Is(err, units.ErrRange) || re.Param != "min" || re.Valid != "≤ 100 mm, the largest of test bores" {
+	if re := checktest.RangeErrorIn(t, err, "components.Series.Next", "min"); re != nil && re.Valid != "≤ 100 mm, the largest of test bores" {
 		t.Errorf("Next(101 mm) error = %v; want a RangeError naming the largest", err)
 	}
 }
@@ -52,9 +52,8 @@ func TestSeriesBelowNearest(t *testing.T) {
 	if got, err := s.Below(63 * mm); err != nil || got != 50*mm {
 		t.Errorf("Below(63 mm) = %v, %v; want 50 mm", got, err)
 	}
-	if _, err := s.Below(40 * mm); !errors.Is(err, units.ErrRange) {
-		t.Errorf("Below(40 mm) error = %v; want ErrRange", err)
-	}
+	_, err := s.Below(40 * mm)
+	checktest.RangeErrorIn(t, err, "components.Series.Below", "v")
 	for _, c := range []struct{ v, want units.Length }{
 		{56 * mm, 50 * mm},   // ln(56/50) = 0.113 < ln(63/56) = 0.118
 		{57 * mm, 63 * mm},   // ln(57/50) = 0.131 > ln(63/57) = 0.100
@@ -102,6 +101,20 @@ func TestSeriesSelect(t *testing.T) {
 	c, err = s.Select(120 * mm)
 	if err != nil || c.OK() || c.Chosen != 0 || c.Margin() != 0 {
 		t.Errorf("Select beyond the largest = %+v, %v; want a failed choice and no error", c, err)
+	}
+	// A requirement so small that Chosen/Required overflows would give an
+	// infinite margin, which JSON cannot carry: an error naming required.
+	for name, sel := range map[string]func(units.Length) (Choice[units.Length], error){
+		"Select": s.Select, "SelectPreferred": s.SelectPreferred,
+	} {
+		c, err := sel(5e-324)
+		var re *units.RangeError
+		if !errors.As(err, &re) || re.Param != "required" || c != (Choice[units.Length]{}) {
+			t.Errorf("%s(5e-324 m) = %+v, %v; want the zero Choice and a RangeError naming required", name, c, err)
+		}
+		if c, err := sel(1e-300); err != nil || math.IsInf(c.Margin(), 0) {
+			t.Errorf("%s(1e-300 m) = %+v (margin %v), %v; want a finite margin", name, c, c.Margin(), err)
+		}
 	}
 }
 
@@ -162,12 +175,11 @@ func TestSeriesAboveFloor(t *testing.T) {
 		}
 	}
 	_, err := s.Floor(39 * mm)
-	var re *units.RangeError
-	if !errors.As(err, &re) || re.Param != "max" || re.Valid != "≥ 40 mm, the smallest of test bores" {
+	if re := checktest.RangeErrorIn(t, err, "components.Series.Floor", "max"); re != nil && re.Valid != "≥ 40 mm, the smallest of test bores" {
 		t.Errorf("Floor(39 mm) error = %v; want a RangeError naming the smallest", err)
 	}
 	_, err = s.Above(100 * mm)
-	if !errors.As(err, &re) || re.Param != "v" || re.Valid != "< 100 mm, the largest of test bores" {
+	if re := checktest.RangeErrorIn(t, err, "components.Series.Above", "v"); re != nil && re.Valid != "< 100 mm, the largest of test bores" {
 		t.Errorf("Above(100 mm) error = %v; want a RangeError naming the largest", err)
 	}
 }
@@ -184,8 +196,7 @@ func TestSeriesNextPreferred(t *testing.T) {
 	}
 	// 70 mm is a size but second choice: above 63 mm no preferred size is left.
 	_, err = s.NextPreferred(64 * mm)
-	var re *units.RangeError
-	if !errors.As(err, &re) || re.Valid != "≤ 63 mm, the largest preferred size of tail" {
+	if re := checktest.RangeErrorIn(t, err, "components.Series.NextPreferred", "min"); re != nil && re.Valid != "≤ 63 mm, the largest preferred size of tail" {
 		t.Errorf("NextPreferred(64 mm) error = %v", err)
 	}
 	c, err := s.SelectPreferred(64 * mm)

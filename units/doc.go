@@ -63,14 +63,30 @@
 //
 // # Parsing
 //
-// The typed parsers (ParsePressure, ParseFlow, …) read a decimal number, optional
-// spaces, then a unit:
+// The typed parsers (ParsePressure, ParseFlow, …) and Parse read a number,
+// optional spaces, then a unit:
 //
-//	number = [ "+" | "-" ] ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+//	number   = [ "+" | "-" ] ( decimal | fraction | mixed )
+//	decimal  = ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+//	fraction = digits "/" digits
+//	mixed    = digits ( "-" | " " ) digits "/" digits
 //
-// No hexadecimal, underscores, NaN or Inf. Leading and trailing spaces are
-// ignored. The unit is any registered spelling of the type (listed below) or a
-// unit expression of registered names with the right dimension:
+// No hexadecimal, underscores, NaN or Inf. A fraction is of whole numbers of at
+// most seven digits, with a denominator other than 0, and in a mixed number it
+// is less than one: "3/8 in", "1-1/2 in", "1 1/2 in", "1/2 gpm". (A unit that
+// starts with a digit still reads as a unit: "9 1/min" is 9 rpm.)
+//
+// A comma in a number is refused with ErrAmbiguous, and the error says why:
+// "3,000" is three thousand where a comma groups thousands (as in the US) and
+// three where it is the decimal mark (as in much of Europe). A Parser reads the
+// one convention its caller names: Parser{Decimal: ','} reads "2,5 bar" and
+// Parser{Group: ','} reads "3,000 psi", each with the grammar otherwise
+// unchanged. In JSON a quantity is a string with its unit ("210 bar"); a bare
+// number is refused with ErrSyntax and the text to write.
+//
+// Leading and trailing spaces are ignored. The unit is any registered spelling of the type
+// (listed below) or a unit expression of registered names with the right
+// dimension:
 //
 //	expr    = product { "/" product }
 //	product = power { ( "*" | "·" | "⋅" | "." | "-" | " " ) power }
@@ -83,6 +99,16 @@
 // in BTU/(lbm·°F). Parse reads into a dynamic Quantity that carries its SI
 // dimension and converts to a typed value only when the dimensions match;
 // Convert converts a number between two unit expressions.
+//
+// ParseLength also reads feet and inches together, as US drawings write them:
+//
+//	length = number foot [ " " ] number inch
+//
+// where foot is a spelling of ft (ft, foot, feet, ' or ′) and inch one of in
+// (in, inch, inches, " or ″), as in 2 ft 6 in, 2' 6" and 5' 3-1/2". The value
+// is (12·feet + inches) inches, so 2 ft 6 in is exactly 30 in; a sign before
+// the feet applies to the whole. The inch and foot marks are spellings of in
+// and ft anywhere (1.5", 6').
 //
 // Letter case. A unit, or a name inside an expression, is first looked up
 // exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
@@ -98,7 +124,10 @@
 // type, and refuses others with what to write instead (listed under Spellings):
 // ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
 // refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
-// ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+// ton-force differ by 10 %); ParsePressure refuses a plain mercury column; and
+// ParseKinematicViscosity reads Saybolt Universal Seconds ("150 SUS", "150 SSU")
+// through the ASTM D2161 equation at 100 °F, from 31.95 SUS (1.81 mm²/s) up.
+// SUS are not a factor of a unit, so Parse and Convert do not read them.
 //
 // Errors are *ParseError values that quote the input and the byte offset and
 // unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
@@ -158,6 +187,7 @@
 //   - Temperature: K kelvin; °R degR R; °C degC ℃ C deg C celsius ºC ° C º C; °F degF ℉ F deg F fahrenheit ºF ° F º F
 //   - TemperatureDifference: ΔK delta K deltaK; Δ°C delta degC deltaC ΔC delta C; Δ°F delta degF deltaF ΔF delta F
 //   - KinematicViscosity: m²/s m2/s m^2/s; mm²/s mm2/s mm^2/s; cSt cst CST; St
+//     (ParseKinematicViscosity reads SUS (ASTM D2161, at 100 °F), SSU (ASTM D2161, at 100 °F), SUS at 100 °F (ASTM D2161, at 100 °F), SSU at 100 °F (ASTM D2161, at 100 °F).)
 //   - DynamicViscosity: Pa·s Pa*s Pa.s Pa s Pas; mPa·s mPa*s mPa.s mPa s mPas; cP cp cps; P
 //   - Density: kg/m³ kg/m3 kg/m^3; g/cm³ g/cm3 g/cc g/mL g/ml; kg/L kg/l; lbm/ft³ lbm/ft3 lb/ft³ lb/ft3 pcf; lbm/gal lb/gal ppg
 //   - SpecificHeatCapacity: J/(kg·K) J/kg/K J/(kg*K) J/kgK; kJ/(kg·K) kJ/kg/K kJ/(kg*K) kJ/kgK; BTU/(lbm·°F) BTU/(lbm*°F) BTU/lbm/°F Btu/(lb·°F) Btu/lb/F BTU/lb/F

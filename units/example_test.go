@@ -147,3 +147,26 @@ func ExampleVolume_PerDuration() {
 	fmt.Println(stroke, q, err)
 	// Output: 3.016 L 45.24 L/min <nil>
 }
+
+// Reading what a quoting form and a gauge say: a comma is refused unless a
+// Parser names the convention; a vacuum gauge reading is a negative gauge
+// pressure; letter case is forgiven where it is not ambiguous.
+func ExampleParser() {
+	_, err := units.ParsePressure("2,5 bar")
+	fmt.Println(errors.Is(err, units.ErrAmbiguous))
+	eu := units.Parser{Decimal: ','}
+	p, _ := eu.ParsePressure("2,5 bar")
+	fmt.Println(p)
+	inlet, _ := units.ParsePressure("28 inHg vac")
+	fmt.Printf("%.2f psi\n", inlet.PSI())
+	relief, _ := units.ParsePressure("3000 PSI")
+	fmt.Println(units.USCustomary().FormatPressure(relief))
+	_, err = units.ParsePressure("28 inHg")
+	fmt.Println(errors.Is(err, units.ErrReference))
+	// Output:
+	// true
+	// 2.5 bar
+	// -13.75 psi
+	// 3000 psi
+	// true
+}

@@ -42,8 +42,9 @@ type unit struct {
 type context struct {
 	Spelling string
 	Unit     string // symbol of the unit of this type it reads as; "" to refuse
-	Err      string // with Unit "": the sentinel, such as "ErrAmbiguous"
-	Detail   string // with Unit "": what the error says
+	Read     string // or a function that reads the number (not a factor: SUS)
+	Err      string // or, to refuse: the sentinel, such as "ErrAmbiguous"
+	Detail   string // and what the error says
 	UnitIdx  int    // index in unitTable of Unit (set by main)
 }
 
@@ -300,6 +301,14 @@ var quantities = []quantity{
 			{Const: "SquareMillimetrePerSecond", Value: "1e-6", Doc: "is 10⁻⁶ m²/s, the unit of ISO 3448 grades.", Accessor: "SquareMillimetresPerSecond", Symbol: "mm²/s", Aliases: []string{"mm2/s", "mm^2/s"}},
 			{Const: "Centistokes", Value: "1e-6", Doc: "is one centistokes, 1 mm²/s exactly.", Accessor: "Centistokes", Symbol: "cSt", Aliases: []string{"cst", "CST"}},
 			{Const: "Stokes", Value: "1e-4", Doc: "is one stokes, 1 cm²/s exactly.", Accessor: "Stokes", Symbol: "St"},
+		},
+		// Saybolt Universal Seconds are not a factor of a unit: the typed
+		// parser reads them through ASTM D2161 at 100 °F.
+		Context: []context{
+			{Spelling: "SUS", Read: "readSaybolt"},
+			{Spelling: "SSU", Read: "readSaybolt"},
+			{Spelling: "SUS at 100 °F", Read: "readSaybolt"},
+			{Spelling: "SSU at 100 °F", Read: "readSaybolt"},
 		}},
 	{Name: "DynamicViscosity", Kind: "dynamic viscosity", Dim: "dim(-1, 1, -1, 0, 0)", Base: "PascalSecond", Metric: "mPa·s", US: "cP",
 		Doc: "DynamicViscosity is an absolute (dynamic) viscosity in pascal seconds (Pa·s).",
@@ -413,8 +422,14 @@ func main() {
 			if fitting[q.Name+" "+c.Spelling] {
 				fail(fmt.Errorf("%s: context spelling %q is a registered spelling of a %s unit", q.Name, c.Spelling, q.Name))
 			}
-			if (c.Unit == "") == (c.Err == "") || (c.Unit != "" && c.UnitIdx == 0) {
-				fail(fmt.Errorf("%s: context spelling %q wants a unit of %s or an error, not both", q.Name, c.Spelling, q.Name))
+			kinds := 0
+			for _, k := range []string{c.Unit, c.Read, c.Err} {
+				if k != "" {
+					kinds++
+				}
+			}
+			if kinds != 1 || (c.Unit != "" && c.UnitIdx == 0) {
+				fail(fmt.Errorf("%s: context spelling %q wants one of a unit of %s, a Read function or an error", q.Name, c.Spelling, q.Name))
 			}
 		}
 	}
@@ -547,14 +562,30 @@ Temperature.Add takes one.
 
 # Parsing
 
-The typed parsers (ParsePressure, ParseFlow, …) read a decimal number, optional
-spaces, then a unit:
+The typed parsers (ParsePressure, ParseFlow, …) and Parse read a number,
+optional spaces, then a unit:
 
-	number = [ "+" | "-" ] ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+	number   = [ "+" | "-" ] ( decimal | fraction | mixed )
+	decimal  = ( digits [ "." digits ] | "." digits ) [ ( "e" | "E" ) [ "+" | "-" ] digits ]
+	fraction = digits "/" digits
+	mixed    = digits ( "-" | " " ) digits "/" digits
 
-No hexadecimal, underscores, NaN or Inf. Leading and trailing spaces are
-ignored. The unit is any registered spelling of the type (listed below) or a
-unit expression of registered names with the right dimension:
+No hexadecimal, underscores, NaN or Inf. A fraction is of whole numbers of at
+most seven digits, with a denominator other than 0, and in a mixed number it
+is less than one: "3/8 in", "1-1/2 in", "1 1/2 in", "1/2 gpm". (A unit that
+starts with a digit still reads as a unit: "9 1/min" is 9 rpm.)
+
+A comma in a number is refused with ErrAmbiguous, and the error says why:
+"3,000" is three thousand where a comma groups thousands (as in the US) and
+three where it is the decimal mark (as in much of Europe). A Parser reads the
+one convention its caller names: Parser{Decimal: ','} reads "2,5 bar" and
+Parser{Group: ','} reads "3,000 psi", each with the grammar otherwise
+unchanged. In JSON a quantity is a string with its unit ("210 bar"); a bare
+number is refused with ErrSyntax and the text to write.
+
+Leading and trailing spaces are ignored. The unit is any registered spelling of the type
+(listed below) or a unit expression of registered names with the right
+dimension:
 
 	expr    = product { "/" product }
 	product = power { ( "*" | "·" | "⋅" | "." | "-" | " " ) power }
@@ -567,6 +598,16 @@ temperature point); inside a longer expression temperatures are intervals, as
 in BTU/(lbm·°F). Parse reads into a dynamic Quantity that carries its SI
 dimension and converts to a typed value only when the dimensions match;
 Convert converts a number between two unit expressions.
+
+ParseLength also reads feet and inches together, as US drawings write them:
+
+	length = number foot [ " " ] number inch
+
+where foot is a spelling of ft (ft, foot, feet, ' or ′) and inch one of in
+(in, inch, inches, " or ″), as in 2 ft 6 in, 2' 6" and 5' 3-1/2". The value
+is (12·feet + inches) inches, so 2 ft 6 in is exactly 30 in; a sign before
+the feet applies to the whole. The inch and foot marks are spellings of in
+and ft anywhere (1.5", 6').
 
 Letter case. A unit, or a name inside an expression, is first looked up
 exactly, and an exact spelling keeps its meaning ("mPa·s" is millipascal
@@ -582,7 +623,10 @@ A typed parser also reads a few spellings that mean something only for its
 type, and refuses others with what to write instead (listed under Spellings):
 ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
 refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
-ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+ton-force differ by 10 %); ParsePressure refuses a plain mercury column; and
+ParseKinematicViscosity reads Saybolt Universal Seconds ("150 SUS", "150 SSU")
+through the ASTM D2161 equation at 100 °F, from 31.95 SUS (1.81 mm²/s) up.
+SUS are not a factor of a unit, so Parse and Convert do not read them.
 
 Errors are *ParseError values that quote the input and the byte offset and
 unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
@@ -621,9 +665,12 @@ whatever a caller put in the fields.
 func contextDoc(q quantity) string {
 	var reads, refuses []string
 	for _, c := range q.Context {
-		if c.Unit != "" {
+		switch {
+		case c.Unit != "":
 			reads = append(reads, c.Spelling+" as "+c.Unit)
-		} else {
+		case c.Read != "":
+			reads = append(reads, c.Spelling+" (ASTM D2161, at 100 °F)")
+		default:
 			refuses = append(refuses, c.Spelling)
 		}
 	}
@@ -794,11 +841,29 @@ func (q *{{$q.Name}}) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 {{$q.Metric}}").
+func (q *{{$q.Name}}) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.{{$q.Name}}.UnmarshalJSON", data, &unitTable[metric{{$q.Name}}], &type{{$q.Name}})
+	if set {
+		*q = {{$q.Name}}(v)
+	}
+	return err
+}
+
 // Parse{{$q.Name}} reads a {{$q.Kind}}: a decimal number, optional spaces,
 // then a unit of {{$q.Kind}} such as {{examples $q}} (see the package doc
 // for the grammar and every spelling).
 func Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
 	v, err := parseTyped("units.Parse{{$q.Name}}", s, &type{{$q.Name}})
+	return {{$q.Name}}(v), err
+}
+
+// Parse{{$q.Name}} is units.Parse{{$q.Name}} with the number convention of p.
+func (p Parser) Parse{{$q.Name}}(s string) ({{$q.Name}}, error) {
+	v, err := p.parseTyped("units.Parser.Parse{{$q.Name}}", s, &type{{$q.Name}})
 	return {{$q.Name}}(v), err
 }
 
@@ -821,7 +886,7 @@ var (
 {{- range $q := .}}{{if not $q.NoType}}
 	type{{$q.Name}} = typeInfo{name: "{{$q.Name}}", kind: "{{$q.Kind}}", dim: {{$q.Dim}}, accept: {{accept $q.Accept}}, useOffset: {{$q.Offset}}, {{if $q.Min}}hasMin: true, min: {{$q.Min}}, minText: {{quote $q.MinText}}, {{end}}examples: {{quote (examples $q)}}{{if $q.Context}},
 		context: []contextSpelling{ {{range $c := $q.Context}}
-			{spelling: {{quote $c.Spelling}}, {{if $c.Unit}}unit: {{$c.UnitIdx}}{{else}}unit: -1, err: {{$c.Err}}, detail: {{quote $c.Detail}}{{end}}},{{end}}
+			{spelling: {{quote $c.Spelling}}, {{if $c.Unit}}unit: {{$c.UnitIdx}}{{else if $c.Read}}unit: -1, read: {{$c.Read}}{{else}}unit: -1, err: {{$c.Err}}, detail: {{quote $c.Detail}}{{end}}},{{end}}
 		}{{end}}}
 {{- end}}{{end}}
 )

@@ -132,7 +132,7 @@ func gnuUnits(t *testing.T, path, from, to string) float64 {
 func TestGNUUnits(t *testing.T) {
 	path := gnuUnitsPath(t)
 	if len(gnuUnitsTable) < 25 {
-		t.Fatalf("only %d cross-checks; issue 2 asks for at least 25", len(gnuUnitsTable))
+		t.Fatalf("only %d cross-checks; keep at least 25 (one per quantity type and more for the trade units)", len(gnuUnitsTable))
 	}
 	for _, r := range gnuUnitsTable {
 		want := gnuUnits(t, path, r.gnuFrom, r.gnuTo)

@@ -383,12 +383,12 @@ func TestNISTAliases(t *testing.T) {
 	}
 }
 
-// issueUnits lists the spellings that issue 2, item 3 requires, with the
-// NIST row (symbol) that defines each. A spelling that is registered whole
+// tradeSpellings lists the trade's spellings that the package promises to
+// read, with the NIST row (symbol) that defines each. A spelling that is registered whole
 // must give the factor exactly; one built as an expression (lbm/US gal) is
 // a quotient of two correctly rounded factors, so it may differ by the
 // rounding of that division and of its inputs: at most 2 ulp.
-var issueUnits = []struct{ spelling, def string }{
+var tradeSpellings = []struct{ spelling, def string }{
 	{"Pa", "1"}, {"kPa", "1000"}, {"MPa", "1000000"}, {"GPa", "1000000000"}, {"bar", "100000"}, {"mbar", "100"},
 	{"psi", "0.45359237*9.80665/0.0254/0.0254"}, {"ksi", "1000*0.45359237*9.80665/0.0254/0.0254"},
 	{"kgf/cm²", "98066.5"}, {"inHg", "13595.1*9.80665*0.0254"}, {"atm", "101325"},
@@ -413,8 +413,8 @@ var issueUnits = []struct{ spelling, def string }{
 	{"J/(kg·K)", "1"}, {"BTU/(lbm·°F)", "4186.8"}, {"W/(m²·K)", "1"},
 }
 
-func TestNISTIssueUnits(t *testing.T) {
-	for _, c := range issueUnits {
+func TestNISTTradeSpellings(t *testing.T) {
+	for _, c := range tradeSpellings {
 		r, f := resolveUnit(c.spelling)
 		if f.err != nil {
 			t.Errorf("%q: %v (%s)", c.spelling, f.err, f.detail)

@@ -6,9 +6,10 @@ package units
 // registry and the expression parser (registry.go, expr.go).
 
 import (
-	"errors"
 	"math"
 	"strconv"
+
+	"github.com/hydrosize/hydrosize/internal/saybolt"
 )
 
 // scanNumber returns the length of the decimal number at the start of s, the
@@ -53,35 +54,20 @@ func skipDigits(s string, i int) int {
 	return i
 }
 
-// splitNumber reads the number at the start of s (after leading spaces) and
-// returns it with the offset where the unit starts. Errors carry the offset.
-func splitNumber(s string) (float64, int, failure) {
+// splitNumber reads the number at the start of s (after leading spaces) in
+// the number style st and returns it with the offset where the unit starts.
+// Errors carry the offset.
+func splitNumber(s string, st numberStyle) (float64, int, failure) {
 	start := 0
 	for start < len(s) && s[start] == ' ' {
 		start++
 	}
-	if v, n, ok := fastNumber(s[start:]); ok {
-		i := start + n
-		for i < len(s) && s[i] == ' ' {
-			i++
-		}
-		return v, i, failure{}
-	}
-	n := scanNumber(s[start:])
-	if n == 0 {
-		return 0, 0, failure{pos: start, err: ErrSyntax, detail: "want a decimal number first"}
-	}
-	v, err := strconv.ParseFloat(s[start:start+n], 64)
-	if err != nil {
-		if errors.Is(err, strconv.ErrRange) {
-			return 0, 0, failure{pos: start, err: ErrRange, detail: "number overflows float64"}
-		}
-		return 0, 0, failure{pos: start, err: ErrSyntax, detail: "want a decimal number first"}
+	v, n, f := readNumber(s[start:], st)
+	if f.err != nil {
+		f.pos += start
+		return 0, 0, f
 	}
 	i := start + n
-	if i < len(s) && (s[i] == '_' || (s[i] == 'x' || s[i] == 'X') && s[start:i] == "0") {
-		return 0, 0, failure{pos: i, err: ErrSyntax, detail: "hexadecimal numbers and underscores are not accepted"}
-	}
 	for i < len(s) && s[i] == ' ' {
 		i++
 	}
@@ -132,19 +118,35 @@ func parseTyped(fn, s string, t *typeInfo) (float64, error) {
 			}
 		}
 	}
-	return parseTypedSlow(fn, s, t)
+	return parseTypedSlow(fn, s, t, numberStyle{})
 }
 
-// parseTypedSlow is the general path of parseTyped, with full error reports.
-func parseTypedSlow(fn, s string, t *typeInfo) (float64, error) {
+// parseTypedSlow is the general path of parseTyped, with full error reports,
+// reading the number in style st.
+func parseTypedSlow(fn, s string, t *typeInfo, st numberStyle) (float64, error) {
 	in := trimRight(s)
-	num, at, f := splitNumber(in)
+	num, at, f := splitNumber(in, st)
 	if f.err != nil {
 		return 0, f.at(fn, s, 0)
 	}
 	if at == len(in) {
 		return 0, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax,
 			Detail: "missing unit; want a unit of " + t.kind + " such as " + t.examples}
+	}
+	if t == &typeLength {
+		if v, ok, f := compoundLength(num, in, at, st); ok || f.err != nil {
+			if f.err != nil {
+				return 0, f.at(fn, s, 0)
+			}
+			return v, nil
+		}
+	}
+	if c := t.contextOf(in[at:]); c != nil && c.read != nil {
+		v, f := c.read(num)
+		if f.err != nil {
+			return 0, f.at(fn, s, 0)
+		}
+		return v, nil
 	}
 	r, f := resolveTyped(in[at:], t)
 	if f.err != nil {
@@ -174,6 +176,59 @@ func resolveTyped(u string, t *typeInfo) (resolved, failure) {
 		return resolvedOf(&unitTable[c.unit]), failure{}
 	}
 	return resolveUnit(u)
+}
+
+// compoundLength reads the rest of a length in feet and inches, "2 ft 6 in",
+// "2' 6\"", "5 ft 3-1/2 in", whose feet num the caller has read and whose
+// unit starts at in[at:]. It reports false, with no failure, when the unit
+// is not a foot spelling followed by a number. The value is
+// (12·feet + inches)·0.0254 m, so "2 ft 6 in" is exactly "30 in".
+func compoundLength(num float64, in string, at int, st numberStyle) (float64, bool, failure) {
+	u := in[at:]
+	d := 0
+	for d < len(u) && !isDigit(u[d]) && u[d] != '.' {
+		d++
+	}
+	if d == 0 || d == len(u) {
+		return 0, false, failure{}
+	}
+	if k, _, ok := lookupName(trimRight(u[:d])); !ok || k < 0 || unitTable[k].factor != footM || unitTable[k].dim != typeLength.dim {
+		return 0, false, failure{}
+	}
+	inches, n, f := readNumber(u[d:], st)
+	if f.err != nil {
+		f.pos += at + d
+		return 0, false, f
+	}
+	rest := at + d + n
+	for rest < len(in) && in[rest] == ' ' {
+		rest++
+	}
+	k, _, ok := lookupName(in[rest:])
+	if !ok || k < 0 || unitTable[k].factor != inchM || unitTable[k].dim != typeLength.dim {
+		return 0, false, failure{pos: rest, err: ErrSyntax, detail: "want inches after the feet, as in 2 ft 6 in or 2' 6\""}
+	}
+	v := float64(math.Abs(num)*12+inches) * inchM
+	if math.Signbit(num) {
+		v = -v
+	}
+	if math.IsInf(v, 0) {
+		return 0, false, failure{err: ErrRange, detail: "value is not finite"}
+	}
+	return v, true, failure{}
+}
+
+// readSaybolt reads sus Saybolt Universal Seconds at 100 °F as a kinematic
+// viscosity in m²/s, through ASTM D2161 (the equation is in
+// internal/saybolt, shared with package fluid). It wants at least the SUS of
+// 1.81 mm²/s, where the standard's equation starts (about 31.95 SUS).
+func readSaybolt(sus float64) (float64, failure) {
+	least := saybolt.Seconds(saybolt.MinViscosity)
+	if !(sus >= least) || math.IsInf(sus, 0) {
+		return 0, failure{err: ErrRange, detail: "want at least " + strconv.FormatFloat(least, 'f', 2, 64) +
+			" SUS (1.81 mm²/s, where the ASTM D2161 equation starts)"}
+	}
+	return saybolt.Viscosity(sus) * 1e-6, failure{}
 }
 
 // negativeVacuum is the failure of a negative vacuum reading.

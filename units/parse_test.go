@@ -75,6 +75,14 @@ var commonSeeds = []string{
 	"-300 °C", "1 psia", "1 atm", "55 bar!", "55 bar extra", "1 (in/m)^999", "12 W/(m²·K",
 	"1 m⁻²", "1 m^-24", "1 ((m))", "1 µm", "1 um", "5e-324 m", "-1.7976931348623157e308 Pa",
 	".5 mm", "5. mm", "+5 mm", "1e-400 bar", "1 mPa", "1 kgf/cm2", "1 \"Hg", "1 ℃", "9 min⁻¹",
+	// Fractions, marks and feet with inches.
+	"1-1/2 in", "1 1/2 in", "3/8 in", "-1/2 in", "1/0 in", "1 3/2 in", "1.5/2 in", "1/2 gpm", "9 1/min",
+	"1.5\"", "6'", "2' 6\"", "5' 3-1/2\"", "2 ft 6 in", "2 ft 6", "-2 ft 6-1/2 in", "1'000 bar",
+	// Vacuum and differential words, mercury, tons.
+	"28 inHg vac", "28 inHgV", "600 mmHg vacuum", "-5 psi vac", "28 inHg", "720 mmHg", "500 Torr",
+	"25 psid", "1 bar(d)", "2 (psia)", "50 ton", "50 tf", "110000 lbs", "500 kg",
+	// Letter case and commas.
+	"3000 PSI", "15 KW", "5 Mpa", "5 MM", "3,000 psi", "2,5 bar", "1,234.5 L/min",
 }
 
 // seedsFor adds "1.5 spelling" for every spelling of every unit of info.

@@ -72,12 +72,14 @@ func TestTradePowerConstants(t *testing.T) {
 	if !near(1/kw, 600, 1e-15) {
 		t.Errorf("bar·L/min per kW = %.15g, want 600", 1/kw)
 	}
-	// Torque [lbf·in] = 63 025·hp/rpm (CHECKS.md, [X] from the definitions).
+	// Torque [lbf·in] = 63 025·hp/rpm, the trade constant, derived from the
+	// NIST SP 811 definitions of hp (550 ft·lbf/s), foot and inch.
 	torque, err := (1 * Horsepower).PerSpeed(1 * RevolutionPerMinute)
 	if err != nil || !near(torque.PoundForceInches(), 63025, 1e-5) {
 		t.Errorf("hp/rpm = %.2f lbf·in, want 63025 (%v)", torque.PoundForceInches(), err)
 	}
-	// Velocity [ft/s] = 0.3208·gpm/in² (CHECKS.md, [X]).
+	// Velocity [ft/s] = 0.3208·gpm/in², the trade constant, derived from the
+	// NIST SP 811 definitions of the US gallon (231 in³) and the foot.
 	v, err := (1 * USGallonPerMinute).PerArea(1 * SquareInch)
 	if err != nil || math.Abs(v.FeetPerSecond()-0.3208) > 0.00005 { // half a unit in the last digit
 		t.Errorf("gpm/in² = %.5f ft/s, want 0.3208 (%v)", v.FeetPerSecond(), err)

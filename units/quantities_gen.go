@@ -95,11 +95,29 @@ func (q *Length) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 mm").
+func (q *Length) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Length.UnmarshalJSON", data, &unitTable[metricLength], &typeLength)
+	if set {
+		*q = Length(v)
+	}
+	return err
+}
+
 // ParseLength reads a length: a decimal number, optional spaces,
 // then a unit of length such as mm, in, m, cm (see the package doc
 // for the grammar and every spelling).
 func ParseLength(s string) (Length, error) {
 	v, err := parseTyped("units.ParseLength", s, &typeLength)
+	return Length(v), err
+}
+
+// ParseLength is units.ParseLength with the number convention of p.
+func (p Parser) ParseLength(s string) (Length, error) {
+	v, err := p.parseTyped("units.Parser.ParseLength", s, &typeLength)
 	return Length(v), err
 }
 
@@ -196,11 +214,29 @@ func (q *Area) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 cm²").
+func (q *Area) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Area.UnmarshalJSON", data, &unitTable[metricArea], &typeArea)
+	if set {
+		*q = Area(v)
+	}
+	return err
+}
+
 // ParseArea reads a area: a decimal number, optional spaces,
 // then a unit of area such as cm², in², m², mm² (see the package doc
 // for the grammar and every spelling).
 func ParseArea(s string) (Area, error) {
 	v, err := parseTyped("units.ParseArea", s, &typeArea)
+	return Area(v), err
+}
+
+// ParseArea is units.ParseArea with the number convention of p.
+func (p Parser) ParseArea(s string) (Area, error) {
+	v, err := p.parseTyped("units.Parser.ParseArea", s, &typeArea)
 	return Area(v), err
 }
 
@@ -307,11 +343,29 @@ func (q *Volume) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 L").
+func (q *Volume) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Volume.UnmarshalJSON", data, &unitTable[metricVolume], &typeVolume)
+	if set {
+		*q = Volume(v)
+	}
+	return err
+}
+
 // ParseVolume reads a volume: a decimal number, optional spaces,
 // then a unit of volume such as L, gal, m³, mL (see the package doc
 // for the grammar and every spelling).
 func ParseVolume(s string) (Volume, error) {
 	v, err := parseTyped("units.ParseVolume", s, &typeVolume)
+	return Volume(v), err
+}
+
+// ParseVolume is units.ParseVolume with the number convention of p.
+func (p Parser) ParseVolume(s string) (Volume, error) {
+	v, err := p.parseTyped("units.Parser.ParseVolume", s, &typeVolume)
 	return Volume(v), err
 }
 
@@ -403,11 +457,29 @@ func (q *Mass) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kg").
+func (q *Mass) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Mass.UnmarshalJSON", data, &unitTable[metricMass], &typeMass)
+	if set {
+		*q = Mass(v)
+	}
+	return err
+}
+
 // ParseMass reads a mass: a decimal number, optional spaces,
 // then a unit of mass such as kg, lbm, g, t (see the package doc
 // for the grammar and every spelling).
 func ParseMass(s string) (Mass, error) {
 	v, err := parseTyped("units.ParseMass", s, &typeMass)
+	return Mass(v), err
+}
+
+// ParseMass is units.ParseMass with the number convention of p.
+func (p Parser) ParseMass(s string) (Mass, error) {
+	v, err := p.parseTyped("units.Parser.ParseMass", s, &typeMass)
 	return Mass(v), err
 }
 
@@ -514,11 +586,29 @@ func (q *Force) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kN").
+func (q *Force) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Force.UnmarshalJSON", data, &unitTable[metricForce], &typeForce)
+	if set {
+		*q = Force(v)
+	}
+	return err
+}
+
 // ParseForce reads a force: a decimal number, optional spaces,
 // then a unit of force such as kN, lbf, N, kgf (see the package doc
 // for the grammar and every spelling).
 func ParseForce(s string) (Force, error) {
 	v, err := parseTyped("units.ParseForce", s, &typeForce)
+	return Force(v), err
+}
+
+// ParseForce is units.ParseForce with the number convention of p.
+func (p Parser) ParseForce(s string) (Force, error) {
+	v, err := p.parseTyped("units.Parser.ParseForce", s, &typeForce)
 	return Force(v), err
 }
 
@@ -650,11 +740,29 @@ func (q *Pressure) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 bar").
+func (q *Pressure) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Pressure.UnmarshalJSON", data, &unitTable[metricPressure], &typePressure)
+	if set {
+		*q = Pressure(v)
+	}
+	return err
+}
+
 // ParsePressure reads a pressure: a decimal number, optional spaces,
 // then a unit of pressure such as bar, psi, Pa, kPa (see the package doc
 // for the grammar and every spelling).
 func ParsePressure(s string) (Pressure, error) {
 	v, err := parseTyped("units.ParsePressure", s, &typePressure)
+	return Pressure(v), err
+}
+
+// ParsePressure is units.ParsePressure with the number convention of p.
+func (p Parser) ParsePressure(s string) (Pressure, error) {
+	v, err := p.parseTyped("units.Parser.ParsePressure", s, &typePressure)
 	return Pressure(v), err
 }
 
@@ -771,11 +879,29 @@ func (q *AbsolutePressure) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 bara").
+func (q *AbsolutePressure) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.AbsolutePressure.UnmarshalJSON", data, &unitTable[metricAbsolutePressure], &typeAbsolutePressure)
+	if set {
+		*q = AbsolutePressure(v)
+	}
+	return err
+}
+
 // ParseAbsolutePressure reads a absolute pressure: a decimal number, optional spaces,
 // then a unit of absolute pressure such as bara, psia, Pa(a), kPa(a) (see the package doc
 // for the grammar and every spelling).
 func ParseAbsolutePressure(s string) (AbsolutePressure, error) {
 	v, err := parseTyped("units.ParseAbsolutePressure", s, &typeAbsolutePressure)
+	return AbsolutePressure(v), err
+}
+
+// ParseAbsolutePressure is units.ParseAbsolutePressure with the number convention of p.
+func (p Parser) ParseAbsolutePressure(s string) (AbsolutePressure, error) {
+	v, err := p.parseTyped("units.Parser.ParseAbsolutePressure", s, &typeAbsolutePressure)
 	return AbsolutePressure(v), err
 }
 
@@ -878,11 +1004,29 @@ func (q *Flow) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 L/min").
+func (q *Flow) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Flow.UnmarshalJSON", data, &unitTable[metricFlow], &typeFlow)
+	if set {
+		*q = Flow(v)
+	}
+	return err
+}
+
 // ParseFlow reads a volume flow: a decimal number, optional spaces,
 // then a unit of volume flow such as L/min, gpm, m³/s, L/s (see the package doc
 // for the grammar and every spelling).
 func ParseFlow(s string) (Flow, error) {
 	v, err := parseTyped("units.ParseFlow", s, &typeFlow)
+	return Flow(v), err
+}
+
+// ParseFlow is units.ParseFlow with the number convention of p.
+func (p Parser) ParseFlow(s string) (Flow, error) {
+	v, err := p.parseTyped("units.Parser.ParseFlow", s, &typeFlow)
 	return Flow(v), err
 }
 
@@ -979,11 +1123,29 @@ func (q *Velocity) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 m/s").
+func (q *Velocity) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Velocity.UnmarshalJSON", data, &unitTable[metricVelocity], &typeVelocity)
+	if set {
+		*q = Velocity(v)
+	}
+	return err
+}
+
 // ParseVelocity reads a velocity: a decimal number, optional spaces,
 // then a unit of velocity such as m/s, ft/s, mm/s, in/s (see the package doc
 // for the grammar and every spelling).
 func ParseVelocity(s string) (Velocity, error) {
 	v, err := parseTyped("units.ParseVelocity", s, &typeVelocity)
+	return Velocity(v), err
+}
+
+// ParseVelocity is units.ParseVelocity with the number convention of p.
+func (p Parser) ParseVelocity(s string) (Velocity, error) {
+	v, err := p.parseTyped("units.Parser.ParseVelocity", s, &typeVelocity)
 	return Velocity(v), err
 }
 
@@ -1074,11 +1236,29 @@ func (q *Displacement) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 cm³/rev").
+func (q *Displacement) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Displacement.UnmarshalJSON", data, &unitTable[metricDisplacement], &typeDisplacement)
+	if set {
+		*q = Displacement(v)
+	}
+	return err
+}
+
 // ParseDisplacement reads a displacement: a decimal number, optional spaces,
 // then a unit of displacement such as cm³/rev, in³/rev, m³/rev (see the package doc
 // for the grammar and every spelling).
 func ParseDisplacement(s string) (Displacement, error) {
 	v, err := parseTyped("units.ParseDisplacement", s, &typeDisplacement)
+	return Displacement(v), err
+}
+
+// ParseDisplacement is units.ParseDisplacement with the number convention of p.
+func (p Parser) ParseDisplacement(s string) (Displacement, error) {
+	v, err := p.parseTyped("units.Parser.ParseDisplacement", s, &typeDisplacement)
 	return Displacement(v), err
 }
 
@@ -1165,11 +1345,29 @@ func (q *RotationalSpeed) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 rpm").
+func (q *RotationalSpeed) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.RotationalSpeed.UnmarshalJSON", data, &unitTable[metricRotationalSpeed], &typeRotationalSpeed)
+	if set {
+		*q = RotationalSpeed(v)
+	}
+	return err
+}
+
 // ParseRotationalSpeed reads a rotational speed: a decimal number, optional spaces,
 // then a unit of rotational speed such as rpm, rev/s, rad/s (see the package doc
 // for the grammar and every spelling).
 func ParseRotationalSpeed(s string) (RotationalSpeed, error) {
 	v, err := parseTyped("units.ParseRotationalSpeed", s, &typeRotationalSpeed)
+	return RotationalSpeed(v), err
+}
+
+// ParseRotationalSpeed is units.ParseRotationalSpeed with the number convention of p.
+func (p Parser) ParseRotationalSpeed(s string) (RotationalSpeed, error) {
+	v, err := p.parseTyped("units.Parser.ParseRotationalSpeed", s, &typeRotationalSpeed)
 	return RotationalSpeed(v), err
 }
 
@@ -1261,11 +1459,29 @@ func (q *Torque) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 N·m").
+func (q *Torque) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Torque.UnmarshalJSON", data, &unitTable[metricTorque], &typeTorque)
+	if set {
+		*q = Torque(v)
+	}
+	return err
+}
+
 // ParseTorque reads a torque: a decimal number, optional spaces,
 // then a unit of torque such as N·m, lbf·ft, kN·m, lbf·in (see the package doc
 // for the grammar and every spelling).
 func ParseTorque(s string) (Torque, error) {
 	v, err := parseTyped("units.ParseTorque", s, &typeTorque)
+	return Torque(v), err
+}
+
+// ParseTorque is units.ParseTorque with the number convention of p.
+func (p Parser) ParseTorque(s string) (Torque, error) {
+	v, err := p.parseTyped("units.Parser.ParseTorque", s, &typeTorque)
 	return Torque(v), err
 }
 
@@ -1362,11 +1578,29 @@ func (q *Power) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kW").
+func (q *Power) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Power.UnmarshalJSON", data, &unitTable[metricPower], &typePower)
+	if set {
+		*q = Power(v)
+	}
+	return err
+}
+
 // ParsePower reads a power: a decimal number, optional spaces,
 // then a unit of power such as kW, hp, W, PS (see the package doc
 // for the grammar and every spelling).
 func ParsePower(s string) (Power, error) {
 	v, err := parseTyped("units.ParsePower", s, &typePower)
+	return Power(v), err
+}
+
+// ParsePower is units.ParsePower with the number convention of p.
+func (p Parser) ParsePower(s string) (Power, error) {
+	v, err := p.parseTyped("units.Parser.ParsePower", s, &typePower)
 	return Power(v), err
 }
 
@@ -1463,11 +1697,29 @@ func (q *Energy) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kJ").
+func (q *Energy) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Energy.UnmarshalJSON", data, &unitTable[metricEnergy], &typeEnergy)
+	if set {
+		*q = Energy(v)
+	}
+	return err
+}
+
 // ParseEnergy reads a energy: a decimal number, optional spaces,
 // then a unit of energy such as kJ, BTU, J, MJ (see the package doc
 // for the grammar and every spelling).
 func ParseEnergy(s string) (Energy, error) {
 	v, err := parseTyped("units.ParseEnergy", s, &typeEnergy)
+	return Energy(v), err
+}
+
+// ParseEnergy is units.ParseEnergy with the number convention of p.
+func (p Parser) ParseEnergy(s string) (Energy, error) {
+	v, err := p.parseTyped("units.Parser.ParseEnergy", s, &typeEnergy)
 	return Energy(v), err
 }
 
@@ -1553,11 +1805,29 @@ func (q *Temperature) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 °C").
+func (q *Temperature) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Temperature.UnmarshalJSON", data, &unitTable[metricTemperature], &typeTemperature)
+	if set {
+		*q = Temperature(v)
+	}
+	return err
+}
+
 // ParseTemperature reads a temperature: a decimal number, optional spaces,
 // then a unit of temperature such as °C, °F, K, °R (see the package doc
 // for the grammar and every spelling).
 func ParseTemperature(s string) (Temperature, error) {
 	v, err := parseTyped("units.ParseTemperature", s, &typeTemperature)
+	return Temperature(v), err
+}
+
+// ParseTemperature is units.ParseTemperature with the number convention of p.
+func (p Parser) ParseTemperature(s string) (Temperature, error) {
+	v, err := p.parseTyped("units.Parser.ParseTemperature", s, &typeTemperature)
 	return Temperature(v), err
 }
 
@@ -1649,11 +1919,29 @@ func (q *TemperatureDifference) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 K").
+func (q *TemperatureDifference) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.TemperatureDifference.UnmarshalJSON", data, &unitTable[metricTemperatureDifference], &typeTemperatureDifference)
+	if set {
+		*q = TemperatureDifference(v)
+	}
+	return err
+}
+
 // ParseTemperatureDifference reads a temperature difference: a decimal number, optional spaces,
 // then a unit of temperature difference such as K, °F, ΔK, Δ°C (see the package doc
 // for the grammar and every spelling).
 func ParseTemperatureDifference(s string) (TemperatureDifference, error) {
 	v, err := parseTyped("units.ParseTemperatureDifference", s, &typeTemperatureDifference)
+	return TemperatureDifference(v), err
+}
+
+// ParseTemperatureDifference is units.ParseTemperatureDifference with the number convention of p.
+func (p Parser) ParseTemperatureDifference(s string) (TemperatureDifference, error) {
+	v, err := p.parseTyped("units.Parser.ParseTemperatureDifference", s, &typeTemperatureDifference)
 	return TemperatureDifference(v), err
 }
 
@@ -1750,11 +2038,29 @@ func (q *KinematicViscosity) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 mm²/s").
+func (q *KinematicViscosity) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.KinematicViscosity.UnmarshalJSON", data, &unitTable[metricKinematicViscosity], &typeKinematicViscosity)
+	if set {
+		*q = KinematicViscosity(v)
+	}
+	return err
+}
+
 // ParseKinematicViscosity reads a kinematic viscosity: a decimal number, optional spaces,
 // then a unit of kinematic viscosity such as mm²/s, cSt, m²/s, St (see the package doc
 // for the grammar and every spelling).
 func ParseKinematicViscosity(s string) (KinematicViscosity, error) {
 	v, err := parseTyped("units.ParseKinematicViscosity", s, &typeKinematicViscosity)
+	return KinematicViscosity(v), err
+}
+
+// ParseKinematicViscosity is units.ParseKinematicViscosity with the number convention of p.
+func (p Parser) ParseKinematicViscosity(s string) (KinematicViscosity, error) {
+	v, err := p.parseTyped("units.Parser.ParseKinematicViscosity", s, &typeKinematicViscosity)
 	return KinematicViscosity(v), err
 }
 
@@ -1846,11 +2152,29 @@ func (q *DynamicViscosity) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 mPa·s").
+func (q *DynamicViscosity) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.DynamicViscosity.UnmarshalJSON", data, &unitTable[metricDynamicViscosity], &typeDynamicViscosity)
+	if set {
+		*q = DynamicViscosity(v)
+	}
+	return err
+}
+
 // ParseDynamicViscosity reads a dynamic viscosity: a decimal number, optional spaces,
 // then a unit of dynamic viscosity such as mPa·s, cP, Pa·s, P (see the package doc
 // for the grammar and every spelling).
 func ParseDynamicViscosity(s string) (DynamicViscosity, error) {
 	v, err := parseTyped("units.ParseDynamicViscosity", s, &typeDynamicViscosity)
+	return DynamicViscosity(v), err
+}
+
+// ParseDynamicViscosity is units.ParseDynamicViscosity with the number convention of p.
+func (p Parser) ParseDynamicViscosity(s string) (DynamicViscosity, error) {
+	v, err := p.parseTyped("units.Parser.ParseDynamicViscosity", s, &typeDynamicViscosity)
 	return DynamicViscosity(v), err
 }
 
@@ -1947,11 +2271,29 @@ func (q *Density) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kg/m³").
+func (q *Density) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Density.UnmarshalJSON", data, &unitTable[metricDensity], &typeDensity)
+	if set {
+		*q = Density(v)
+	}
+	return err
+}
+
 // ParseDensity reads a density: a decimal number, optional spaces,
 // then a unit of density such as kg/m³, lbm/ft³, g/cm³, kg/L (see the package doc
 // for the grammar and every spelling).
 func ParseDensity(s string) (Density, error) {
 	v, err := parseTyped("units.ParseDensity", s, &typeDensity)
+	return Density(v), err
+}
+
+// ParseDensity is units.ParseDensity with the number convention of p.
+func (p Parser) ParseDensity(s string) (Density, error) {
+	v, err := p.parseTyped("units.Parser.ParseDensity", s, &typeDensity)
 	return Density(v), err
 }
 
@@ -2046,11 +2388,29 @@ func (q *SpecificHeatCapacity) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kJ/(kg·K)").
+func (q *SpecificHeatCapacity) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.SpecificHeatCapacity.UnmarshalJSON", data, &unitTable[metricSpecificHeatCapacity], &typeSpecificHeatCapacity)
+	if set {
+		*q = SpecificHeatCapacity(v)
+	}
+	return err
+}
+
 // ParseSpecificHeatCapacity reads a specific heat capacity: a decimal number, optional spaces,
 // then a unit of specific heat capacity such as kJ/(kg·K), BTU/(lbm·°F), J/(kg·K) (see the package doc
 // for the grammar and every spelling).
 func ParseSpecificHeatCapacity(s string) (SpecificHeatCapacity, error) {
 	v, err := parseTyped("units.ParseSpecificHeatCapacity", s, &typeSpecificHeatCapacity)
+	return SpecificHeatCapacity(v), err
+}
+
+// ParseSpecificHeatCapacity is units.ParseSpecificHeatCapacity with the number convention of p.
+func (p Parser) ParseSpecificHeatCapacity(s string) (SpecificHeatCapacity, error) {
+	v, err := p.parseTyped("units.Parser.ParseSpecificHeatCapacity", s, &typeSpecificHeatCapacity)
 	return SpecificHeatCapacity(v), err
 }
 
@@ -2138,11 +2498,29 @@ func (q *HeatTransferCoefficient) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 W/(m²·K)").
+func (q *HeatTransferCoefficient) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.HeatTransferCoefficient.UnmarshalJSON", data, &unitTable[metricHeatTransferCoefficient], &typeHeatTransferCoefficient)
+	if set {
+		*q = HeatTransferCoefficient(v)
+	}
+	return err
+}
+
 // ParseHeatTransferCoefficient reads a heat transfer coefficient: a decimal number, optional spaces,
 // then a unit of heat transfer coefficient such as W/(m²·K), BTU/(h·ft²·°F) (see the package doc
 // for the grammar and every spelling).
 func ParseHeatTransferCoefficient(s string) (HeatTransferCoefficient, error) {
 	v, err := parseTyped("units.ParseHeatTransferCoefficient", s, &typeHeatTransferCoefficient)
+	return HeatTransferCoefficient(v), err
+}
+
+// ParseHeatTransferCoefficient is units.ParseHeatTransferCoefficient with the number convention of p.
+func (p Parser) ParseHeatTransferCoefficient(s string) (HeatTransferCoefficient, error) {
+	v, err := p.parseTyped("units.Parser.ParseHeatTransferCoefficient", s, &typeHeatTransferCoefficient)
 	return HeatTransferCoefficient(v), err
 }
 
@@ -2228,11 +2606,29 @@ func (q *ThermalConductivity) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 W/(m·K)").
+func (q *ThermalConductivity) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.ThermalConductivity.UnmarshalJSON", data, &unitTable[metricThermalConductivity], &typeThermalConductivity)
+	if set {
+		*q = ThermalConductivity(v)
+	}
+	return err
+}
+
 // ParseThermalConductivity reads a thermal conductivity: a decimal number, optional spaces,
 // then a unit of thermal conductivity such as W/(m·K), BTU/(h·ft·°F) (see the package doc
 // for the grammar and every spelling).
 func ParseThermalConductivity(s string) (ThermalConductivity, error) {
 	v, err := parseTyped("units.ParseThermalConductivity", s, &typeThermalConductivity)
+	return ThermalConductivity(v), err
+}
+
+// ParseThermalConductivity is units.ParseThermalConductivity with the number convention of p.
+func (p Parser) ParseThermalConductivity(s string) (ThermalConductivity, error) {
+	v, err := p.parseTyped("units.Parser.ParseThermalConductivity", s, &typeThermalConductivity)
 	return ThermalConductivity(v), err
 }
 
@@ -2324,11 +2720,29 @@ func (q *Stiffness) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 kN/mm").
+func (q *Stiffness) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Stiffness.UnmarshalJSON", data, &unitTable[metricStiffness], &typeStiffness)
+	if set {
+		*q = Stiffness(v)
+	}
+	return err
+}
+
 // ParseStiffness reads a stiffness: a decimal number, optional spaces,
 // then a unit of stiffness such as kN/mm, lbf/in, N/m, N/mm (see the package doc
 // for the grammar and every spelling).
 func ParseStiffness(s string) (Stiffness, error) {
 	v, err := parseTyped("units.ParseStiffness", s, &typeStiffness)
+	return Stiffness(v), err
+}
+
+// ParseStiffness is units.ParseStiffness with the number convention of p.
+func (p Parser) ParseStiffness(s string) (Stiffness, error) {
+	v, err := p.parseTyped("units.Parser.ParseStiffness", s, &typeStiffness)
 	return Stiffness(v), err
 }
 
@@ -2410,11 +2824,29 @@ func (q *Frequency) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 Hz").
+func (q *Frequency) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Frequency.UnmarshalJSON", data, &unitTable[metricFrequency], &typeFrequency)
+	if set {
+		*q = Frequency(v)
+	}
+	return err
+}
+
 // ParseFrequency reads a frequency: a decimal number, optional spaces,
 // then a unit of frequency such as Hz, cpm (see the package doc
 // for the grammar and every spelling).
 func ParseFrequency(s string) (Frequency, error) {
 	v, err := parseTyped("units.ParseFrequency", s, &typeFrequency)
+	return Frequency(v), err
+}
+
+// ParseFrequency is units.ParseFrequency with the number convention of p.
+func (p Parser) ParseFrequency(s string) (Frequency, error) {
+	v, err := p.parseTyped("units.Parser.ParseFrequency", s, &typeFrequency)
 	return Frequency(v), err
 }
 
@@ -2501,11 +2933,29 @@ func (q *Acceleration) UnmarshalText(text []byte) error {
 	return nil
 }
 
+// UnmarshalJSON implements json.Unmarshaler: a JSON string is read as
+// UnmarshalText reads it, and null leaves q as it was. A bare JSON number
+// is refused with ErrSyntax: without a unit it could be in any unit, so
+// the error shows it written with one ("55 m/s²").
+func (q *Acceleration) UnmarshalJSON(data []byte) error {
+	v, set, err := unmarshalJSON("units.Acceleration.UnmarshalJSON", data, &unitTable[metricAcceleration], &typeAcceleration)
+	if set {
+		*q = Acceleration(v)
+	}
+	return err
+}
+
 // ParseAcceleration reads a acceleration: a decimal number, optional spaces,
 // then a unit of acceleration such as m/s², ft/s², g₀ (see the package doc
 // for the grammar and every spelling).
 func ParseAcceleration(s string) (Acceleration, error) {
 	v, err := parseTyped("units.ParseAcceleration", s, &typeAcceleration)
+	return Acceleration(v), err
+}
+
+// ParseAcceleration is units.ParseAcceleration with the number convention of p.
+func (p Parser) ParseAcceleration(s string) (Acceleration, error) {
+	v, err := p.parseTyped("units.Parser.ParseAcceleration", s, &typeAcceleration)
 	return Acceleration(v), err
 }
 

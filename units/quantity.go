@@ -28,10 +28,12 @@ type Quantity struct {
 // registered spelling keeps its meaning: °C and °F are points on their
 // scales, psia and bara absolute, psi and bar gauge; inside a longer
 // expression, temperature units count as intervals (BTU/(lbm·°F)).
-func Parse(s string) (Quantity, error) {
-	const fn = "units.Parse"
+func Parse(s string) (Quantity, error) { return parseQuantity("units.Parse", s, numberStyle{}) }
+
+// parseQuantity is Parse for the function fn, reading numbers in style st.
+func parseQuantity(fn, s string, st numberStyle) (Quantity, error) {
 	in := trimRight(s)
-	num, at, f := splitNumber(in)
+	num, at, f := splitNumber(in, st)
 	if f.err != nil {
 		return Quantity{}, f.at(fn, s, 0)
 	}
@@ -41,6 +43,9 @@ func Parse(s string) (Quantity, error) {
 	r, f := resolveUnit(in[at:])
 	if f.err == nil && num < 0 && r.factor < 0 {
 		f = negativeVacuum()
+	}
+	if f.err == ErrUnknownUnit && f.word == in[at:] {
+		f.detail += contextHint(f.word)
 	}
 	if f.err != nil {
 		return Quantity{}, f.at(fn, s, at)

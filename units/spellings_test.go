@@ -83,6 +83,36 @@ var messySpellings = []messyCase{
 	{"1450 min-1", pSpeed, 1450, float64(RevolutionPerMinute)},
 	{"1450 1/min", pSpeed, 1450, float64(RevolutionPerMinute)},
 	{"1450 U/min", pSpeed, 1450, float64(RevolutionPerMinute)},
+	// Fractions and mixed numbers, as US lengths are written.
+	{"1-1/2 in", pLength, 1.5, float64(Inch)},
+	{"1 1/2 in", pLength, 1.5, float64(Inch)},
+	{"1/2 in", pLength, 0.5, float64(Inch)},
+	{"3/8 in", pLength, 0.375, float64(Inch)},
+	{"3/8in", pLength, 0.375, float64(Inch)},
+	{"1/3 in", pLength, 1.0 / 3, float64(Inch)},
+	{"-1/2 in", pLength, -0.5, float64(Inch)},
+	{"2-3/4 inch", pLength, 2.75, float64(Inch)},
+	{"1/2 gpm", pFlow, 0.5, float64(USGallonPerMinute)},
+	{"3/4 hp", parseErr(ParsePower), 0.75, float64(Horsepower)},
+	{"9 1/min", pSpeed, 9, float64(RevolutionPerMinute)}, // a unit 1/min, not a mixed number
+	// Inch and foot marks.
+	{`1.5"`, pLength, 1.5, float64(Inch)},
+	{`1.5 "`, pLength, 1.5, float64(Inch)},
+	{`1-1/2"`, pLength, 1.5, float64(Inch)},
+	{"1.5″", pLength, 1.5, float64(Inch)},
+	{"6'", pLength, 6, float64(Foot)},
+	{"6′", pLength, 6, float64(Foot)},
+	// Feet and inches together: (12·ft + in) inches.
+	{`2' 6"`, pLength, 30, float64(Inch)},
+	{`2'6"`, pLength, 30, float64(Inch)},
+	{"2 ft 6 in", pLength, 30, float64(Inch)},
+	{"2ft 6in", pLength, 30, float64(Inch)},
+	{"2 feet 6 inches", pLength, 30, float64(Inch)},
+	{"5 ft 3-1/2 in", pLength, 63.5, float64(Inch)},
+	{`5' 3-1/2"`, pLength, 63.5, float64(Inch)},
+	{"2 ft 6.5 in", pLength, 30.5, float64(Inch)},
+	{"-2 ft 6 in", pLength, -30, float64(Inch)},
+	{"2 FT 6 IN", pLength, 30, float64(Inch)},
 	// Torque written with lb for lbf.
 	{"35 ft.lb", pTorque, 35, float64(PoundForceFoot)},
 	{"35 ft·lb", pTorque, 35, float64(PoundForceFoot)},
@@ -99,6 +129,48 @@ var messyTemperatures = []struct {
 	{"40 ° C", TemperatureFromCelsius(40)},
 	{"104 ° F", TemperatureFromFahrenheit(104)},
 	{"104 ºF", TemperatureFromFahrenheit(104)},
+}
+
+// TestSayboltSeconds: "150 SUS" reads through ASTM D2161 at 100 °F, the
+// equation shared with fluid.ViscosityFromSaybolt (internal/saybolt).
+// ASTM D2161, Appendix X1: 700 SUS is 151.0891 mm²/s, to the printed 4
+// decimals; the trade's 150 SUS for an ISO VG 32 oil is 31.89 mm²/s by the
+// equation (to the 2 decimals of its check, 32 mm²/s → 150.49 SUS).
+func TestSayboltSeconds(t *testing.T) {
+	for _, c := range []struct {
+		in   string
+		want float64 // mm²/s
+		tol  float64
+	}{
+		{"700 SUS", 151.0891, 5e-5},
+		{"700 SSU", 151.0891, 5e-5},
+		{"150 SUS", 31.8915, 5e-5},
+		{"150 sus", 31.8915, 5e-5},
+		{"150 SUS at 100 °F", 31.8915, 5e-5},
+		{"4632 SUS", 1000, 1e-9}, // the linear form above 500 mm²/s: SUS = 4.632ν
+	} {
+		v, err := ParseKinematicViscosity(c.in)
+		if err != nil || math.Abs(v.SquareMillimetresPerSecond()-c.want) > c.tol {
+			t.Errorf("ParseKinematicViscosity(%q) = %.6f mm²/s, %v; want %g", c.in, v.SquareMillimetresPerSecond(), err, c.want)
+		}
+	}
+	for _, c := range []struct {
+		in     string
+		parse  func(string) (float64, error)
+		want   error
+		detail string
+	}{
+		{"20 SUS", parseErr(ParseKinematicViscosity), ErrRange, "31.95 SUS"},
+		{"-150 SUS", parseErr(ParseKinematicViscosity), ErrRange, "ASTM D2161"},
+		{"150 SUS", pDynamic, ErrUnknownUnit, "ParseKinematicViscosity reads it"},
+		{"50 ton", pDynamic, ErrUnknownUnit, "a ton is ambiguous"},
+		{"150 SUS", pPressure, ErrUnknownUnit, ""},
+	} {
+		v, err := c.parse(c.in)
+		if !errors.Is(err, c.want) || v != 0 || !strings.Contains(err.Error(), c.detail) {
+			t.Errorf("parse %q = %g, %v; want %v saying %q", c.in, v, err, c.want, c.detail)
+		}
+	}
 }
 
 func TestMessySpellings(t *testing.T) {
@@ -148,6 +220,17 @@ var messyRefusals = []struct {
 	{"50 TON", pForce, ErrAmbiguous, []string{`"tf"`}},
 	{"50 ton", pMass, ErrAmbiguous, []string{`"t"`, "2000 lb"}},
 	{"500 kg", pForce, ErrDimension, []string{`"kgf"`}},
+	// Fractions: whole numbers, a denominator, a proper fraction in a mixed number.
+	{"1/0 in", pLength, ErrRange, []string{"denominator 0"}},
+	{"1 3/2 in", pLength, ErrSyntax, []string{"less than one"}},
+	{"1.5/2 in", pLength, ErrSyntax, []string{"whole numbers"}},
+	{"12345678/2 in", pLength, ErrRange, []string{"more than 7 digits"}},
+	{"1/12345678 in", pLength, ErrRange, []string{"more than 7 digits"}},
+	// Feet without inches after them, or inches with a sign.
+	{"2 ft 6", pLength, ErrSyntax, []string{"want inches after the feet"}},
+	{"2 ft 6 mm", pLength, ErrSyntax, []string{"want inches after the feet"}},
+	{"2 ft -6 in", pLength, ErrSyntax, nil},
+	{"2 ft 6 in", pDynamic, ErrSyntax, nil}, // feet and inches are a Length only
 }
 
 func TestMessyRefusals(t *testing.T) {

@@ -21,8 +21,9 @@ import (
 // load is more than p·A_in can push (the piston stalls and the outlet side
 // is not compressed).
 //
-// This is the one implementation of the intensification balance: the
-// meter-out checks of hydro/valve call it. p must be finite and > 0, the
+// This is the one implementation of the intensification balance: a family
+// that checks a meter-out circuit calls it rather than repeating it. p must
+// be finite and > 0, the
 // areas finite and > 0, resist finite; errors match units.ErrRange.
 func IntensifiedPressure(p units.Pressure, inlet, outlet units.Area, resist units.Force) (units.Pressure, error) {
 	const fn = "actuator.IntensifiedPressure"
@@ -60,8 +61,7 @@ type Intensification struct {
 // [IntensifiedPressure], and checks it against Cylinder.Rating, which must
 // be set (> 0). Above the rating the result carries a [components.Danger]
 // finding: the cylinder or its seals can burst (ISO 4413 requires that no
-// component sees more than its rated pressure). A Ratio that overflows (an
-// inlet pressure near zero) is an error matching units.ErrRange.
+// component sees more than its rated pressure).
 func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.Force) (Intensification, error) {
 	const fn = "actuator.Cylinder.Intensification"
 	if err := c.check(fn, dir); err != nil {
@@ -80,7 +80,7 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	}
 	ratio, err := validate.Checked(fn, "Ratio", float64(po/p))
 	if err != nil {
-		return Intensification{}, err
+		return Intensification{}, err // an inlet pressure so small that p_out/p overflows
 	}
 	r := Intensification{Pressure: po, Ratio: ratio,
 		Rating: components.Within(po, c.Rating, components.CallerRule("Cylinder.Rating"))}

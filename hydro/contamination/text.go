@@ -131,11 +131,15 @@ func parseDigits(s string, i int, m Mark) (Number, int, *units.ParseError) {
 func isDigit(b byte) bool { return '0' <= b && b <= '9' }
 
 // AppendText appends the code as String writes it to b
-// (encoding.TextAppender). It fails, appending nothing, when c does not pass
-// Validate.
+// (encoding.TextAppender). It fails, returning nil and an error as Validate
+// gives it, when c does not pass Validate.
 func (c Code) AppendText(b []byte) ([]byte, error) {
-	if err := c.Validate(); err != nil {
-		return b, err
+	return c.appendText("contamination.Code.AppendText", b)
+}
+
+func (c Code) appendText(fn string, b []byte) ([]byte, error) {
+	if err := c.validate(fn, ""); err != nil {
+		return nil, err
 	}
 	return c.appendCode(b, "≥"), nil
 }
@@ -199,7 +203,7 @@ func (c Code) MarshalText() ([]byte, error) {
 	if c.IsZero() {
 		return []byte{}, nil
 	}
-	return c.AppendText(nil)
+	return c.appendText("contamination.Code.MarshalText", nil)
 }
 
 // UnmarshalText reads a code in any form ParseCode accepts

@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -303,6 +304,27 @@ func TestCodeJSON(t *testing.T) {
 	keep := out
 	if err := out.Tank.UnmarshalText([]byte("nonsense")); err == nil || out != keep {
 		t.Errorf("UnmarshalText changed the code on error: %v", out)
+	}
+}
+
+// TestCodeTextRefusesInvalid checks that AppendText and MarshalText refuse a
+// code that fails Validate with the zero value beside the error, a range
+// error naming the method called and the field.
+func TestCodeTextRefusesInvalid(t *testing.T) {
+	bad := counter(num(16), num(18), num(13)) // grows with size
+	buf := []byte("tank: ")
+	b, err := bad.AppendText(buf)
+	if b != nil {
+		t.Errorf("AppendText returned %q beside its error, want nil", b)
+	}
+	checktest.RangeErrorIn(t, err, "contamination.Code.AppendText", "N[1]")
+	b, err = bad.MarshalText()
+	if b != nil {
+		t.Errorf("MarshalText returned %q beside its error, want nil", b)
+	}
+	checktest.RangeErrorIn(t, err, "contamination.Code.MarshalText", "N[1]")
+	if !errors.Is(err, ErrOrder) {
+		t.Errorf("MarshalText error %v does not match ErrOrder", err)
 	}
 }
 

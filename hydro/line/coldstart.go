@@ -27,7 +27,11 @@ type Start struct {
 // failed bypass setting a filter-bypass caution).
 //
 // cold must be at or below running; q and the path as Path.Drop needs them, and
-// both temperatures within the fluid's curve and above its pour point.
+// both temperatures within the fluid's curve and above its pour point. A
+// flow so small that the running drop underflows to 0 leaves no ratio: the
+// error names Ratio. Errors name ColdStart's parameters: cold or running for
+// a temperature the fluid refuses, f.… for the fluid's data, p.Elements[i].…
+// for the path.
 func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperature) (Start, error) {
 	const fn = "line.ColdStart"
 	if err := validate.Finite(fn, "running", running); err != nil {
@@ -38,20 +42,22 @@ func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperat
 	}
 	oc, err := OilAt(f, cold)
 	if err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"t": "cold"}))
 	}
 	or, err := OilAt(f, running)
 	if err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"t": "running"}))
 	}
 	var s Start
 	if s.Cold, err = p.Drop(q, oc); err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, pathFields)
 	}
 	if s.Running, err = p.Drop(q, or); err != nil {
-		return Start{}, err
+		return Start{}, validate.Renamed(err, fn, pathFields)
 	}
-	s.Ratio = float64(s.Cold.Total / s.Running.Total)
+	if s.Ratio, err = validate.Checked(fn, "Ratio", float64(s.Cold.Total/s.Running.Total)); err != nil {
+		return Start{}, err // both drops underflowed to 0
+	}
 	s.Findings = components.Findings{components.NewFinding(components.Notice, components.ColdStart,
 		"line.cold-drop", components.PhysicsRule("Darcy–Weisbach at the oil's viscosity at each temperature"),
 		"at %v the path %v drops %v, %v times its %v at %v",
@@ -67,6 +73,10 @@ func ColdStart(p Path, q units.Flow, f fluid.Fluid, cold, running units.Temperat
 	s.Findings = s.Findings.Merge(s.Cold.Findings...)
 	return s, nil
 }
+
+// pathFields maps the parameters of Path.Drop to ColdStart's: q stays q, a
+// field of the path goes under p.
+var pathFields = validate.Fields("p.", map[string]string{"q": "q"})
 
 func pathName(p Path) string {
 	if p.Name == "" {

@@ -47,4 +47,27 @@ func TestColdStart(t *testing.T) {
 	// Bad input: cold above running.
 	_, err = ColdStart(p, 60*units.LitrePerMinute, oil, run, cold)
 	wantRangeError(t, "cold above running", err, "cold")
+	// A flow so small that every drop underflows to 0 has no ratio: an
+	// error, not NaN.
+	tiny := Path{Elements: []Element{Rated{Drop: units.Bar, Flow: 1}}}
+	s, err = ColdStart(tiny, 1e-200, oil, cold, run)
+	if s.Ratio != 0 || s.Cold.Elements != nil {
+		t.Errorf("underflowing drops: ratio %v beside %v", s.Ratio, err)
+	}
+	wantRangeError(t, "underflowing drops", err, "Ratio")
+	// Errors from the fluid and the path name ColdStart's parameters.
+	_, err = ColdStart(p, 60*units.LitrePerMinute, oil, units.TemperatureFromCelsius(-60), run)
+	wantRangeErrorIn(t, "below the pour point", err, "line.ColdStart", "cold")
+	_, err = ColdStart(p, 60*units.LitrePerMinute, oil, cold, units.TemperatureFromCelsius(400))
+	wantRangeErrorIn(t, "running too hot", err, "line.ColdStart", "running")
+	_, err = ColdStart(p, 60*units.LitrePerMinute, fluid.Fluid{}, cold, run)
+	wantRangeErrorIn(t, "zero fluid", err, "line.ColdStart", "f.Curve")
+	_, err = ColdStart(Path{Elements: []Element{Pipe{Bore: 0.01}}}, 60*units.LitrePerMinute, oil, cold, run)
+	wantRangeErrorIn(t, "bad element", err, "line.ColdStart", "p.Elements[0].Length")
+	_, err = ColdStart(p, 0, oil, cold, run)
+	wantRangeErrorIn(t, "no flow", err, "line.ColdStart", "q")
+	_, err = OilAt(oil, units.TemperatureFromCelsius(-60))
+	wantRangeErrorIn(t, "OilAt pour point", err, "line.OilAt", "t")
+	_, err = OilAt(fluid.Fluid{}, run)
+	wantRangeErrorIn(t, "OilAt zero fluid", err, "line.OilAt", "f.Curve")
 }

@@ -122,7 +122,7 @@ func (f Fitting) loss(q units.Flow, o Oil) (ElementDrop, error) {
 	if k == 0 {
 		var err error
 		if k, rule, err = f.Kind.K(f.Bore); err != nil {
-			return ElementDrop{}, err
+			return ElementDrop{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"kind": "Kind", "bore": "Bore"}))
 		}
 	} else if err := validate.InRange(fn, "K", k, 0, 1e4); err != nil {
 		return ElementDrop{}, err

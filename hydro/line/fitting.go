@@ -74,7 +74,8 @@ var craneRule = components.HandbookRule("Crane Technical Paper No. 410, Flow of 
 // tabulates f_T by nominal pipe size to two digits, a few percent above
 // this formula below 1 in. The entrance (0.5) and exit (1.0) are fixed
 // coefficients of the same text. It fails for CustomFitting, an unknown
-// kind, or a bore that is not finite and > 0.
+// kind, a bore that is not finite and > 0, or, for the L/D kinds, a bore
+// below 0.45 mm, where ε/D would exceed MaxRelativeRoughness.
 func (k FittingKind) K(bore units.Length) (float64, components.Rule, error) {
 	const fn = "line.FittingKind.K"
 	if k == CustomFitting || int(k) >= len(fittingRows) {
@@ -87,11 +88,16 @@ func (k FittingKind) K(bore units.Length) (float64, components.Rule, error) {
 	if row.ld == 0 {
 		return row.k, craneRule, nil
 	}
-	return fullyRough(float64(CommercialSteel/bore)) * row.ld, craneRule, nil
+	rr := float64(CommercialSteel / bore)
+	if rr > MaxRelativeRoughness {
+		return 0, components.Rule{}, validate.Fail(fn, "bore", bore,
+			"≥ "+(CommercialSteel/MaxRelativeRoughness).String()+" (the roughness of commercial steel at most a tenth of the bore)")
+	}
+	return fullyRough(rr) * row.ld, craneRule, nil
 }
 
 // fullyRough returns the Colebrook–White friction factor as Re → ∞:
-// f = 0.25 / log₁₀²(ε/(3.7·D)). rr must be > 0 and below 3.7.
+// f = 0.25 / log₁₀²(ε/(3.7·D)). rr must be in (0, MaxRelativeRoughness].
 func fullyRough(rr float64) float64 {
 	l := math.Log10(rr / 3.7)
 	return 0.25 / (l * l)

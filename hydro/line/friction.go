@@ -103,15 +103,16 @@ func Reynolds(v units.Velocity, d units.Length, nu units.KinematicViscosity) (fl
 // the last place (measured worst 2.2e-15 relative over 2000 < Re ≤ 10¹⁰,
 // 0 ≤ ε/D ≤ 0.1). It does not allocate.
 //
-// re must be finite and > 0 and relativeRoughness in [0, 0.1]; otherwise
-// the error matches units.ErrRange.
+// re must be finite and > 0 and relativeRoughness in [0, 0.1]; otherwise,
+// or when 64/Re overflows (a subnormal re), the error matches
+// units.ErrRange.
 func FrictionFactor(re, relativeRoughness float64) (float64, error) {
 	const fn = "line.FrictionFactor"
 	if err := checkFriction(fn, re, relativeRoughness); err != nil {
 		return 0, err
 	}
 	if re <= LaminarLimit {
-		return 64 / re, nil
+		return validate.Checked(fn, "f", 64/re) // a subnormal re overflows 64/Re
 	}
 	return colebrook(re, relativeRoughness), nil
 }

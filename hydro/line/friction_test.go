@@ -157,6 +157,8 @@ func TestFrictionBadInput(t *testing.T) {
 		{"Reynolds d 0", func() (float64, error) { return Reynolds(1, 0, 1e-5) }, "d"},
 		{"Reynolds nu 0", func() (float64, error) { return Reynolds(1, 0.01, 0) }, "nu"},
 		{"Reynolds v -1", func() (float64, error) { return Reynolds(-1, 0.01, 1e-5) }, "v"},
+		// A subnormal Reynolds number is > 0, but 64/Re overflows.
+		{"re subnormal", func() (float64, error) { return FrictionFactor(5e-324, 0) }, "f"},
 	} {
 		got, err := c.f()
 		if got != 0 {
@@ -200,4 +202,11 @@ func BenchmarkFrictionFactor(b *testing.B) {
 func wantRangeError(t *testing.T, name string, err error, param string) {
 	t.Helper()
 	t.Run(name, func(t *testing.T) { checktest.RangeError(t, err, param) })
+}
+
+// wantRangeErrorIn is wantRangeError that also checks the function the
+// error names: the one the caller called.
+func wantRangeErrorIn(t *testing.T, name string, err error, fn, param string) {
+	t.Helper()
+	t.Run(name, func(t *testing.T) { checktest.RangeErrorIn(t, err, fn, param) })
 }

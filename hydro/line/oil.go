@@ -20,17 +20,26 @@ type Oil struct {
 // thermal expansion (fluid.Fluid.Viscosity and fluid.Fluid.Density). The
 // rise of density with line pressure (about 0.7 % per 100 bar for mineral
 // oil) is left out, as is the rise of viscosity with pressure. It fails as
-// those methods fail (below the pour point, outside the curve's range).
+// those methods fail (below the pour point, outside the curve's range),
+// with an error that names t or the fluid's data as f.Curve, f.Density15, ….
 func OilAt(f fluid.Fluid, t units.Temperature) (Oil, error) {
+	const fn = "line.OilAt"
 	nu, err := f.Viscosity(t)
 	if err != nil {
-		return Oil{}, err
+		return Oil{}, validate.Renamed(err, fn, fluidFields("f.", "t", "p"))
 	}
 	rho, err := f.Density(t, 0)
 	if err != nil {
-		return Oil{}, err
+		return Oil{}, validate.Renamed(err, fn, fluidFields("f.", "t", "p"))
 	}
 	return Oil{Temperature: t, Viscosity: nu, Density: rho}, nil
+}
+
+// fluidFields maps the parameters in an error of a fluid.Fluid method to
+// the caller's: the temperature to temp, the pressure to pres, and the
+// fluid's own data (its curve, Density15, Bulk.K0, …) to fields of prefix.
+func fluidFields(prefix, temp, pres string) func(string) string {
+	return validate.Fields(prefix, map[string]string{"t": temp, "p": pres, "curve": prefix + "Curve"})
 }
 
 func (o Oil) check(fn string) error {

@@ -1,7 +1,6 @@
 package line
 
 import (
-	"errors"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -106,15 +105,10 @@ func (p Path) Drop(q units.Flow, o Oil) (PathDrop, error) {
 	return out, nil
 }
 
-// nameElement prefixes the parameter of a range error with Elements[i].
+// nameElement names Path.Drop in a range error and prefixes its parameter
+// with Elements[i].
 func nameElement(err error, i int) error {
-	var re *units.RangeError
-	if !errors.As(err, &re) {
-		return err
-	}
-	c := *re
-	c.Param = "Elements[" + strconv.Itoa(i) + "]." + c.Param
-	return &c
+	return validate.Renamed(err, "line.Path.Drop", validate.Fields("Elements["+strconv.Itoa(i)+"].", nil))
 }
 
 // assess adds the checks and findings of one element.

@@ -92,6 +92,19 @@ func TestFittingK(t *testing.T) {
 			t.Errorf("ID %g mm: elbow K %.3f (table %.2f), tee K %.3f (table %.2f), %v", c.id, ke, c.elbow, kt, c.teeBr, err)
 		}
 	}
+	// The rough-pipe f_T needs ε/D within the friction range (ε = 0.045 mm
+	// at most a tenth of the bore): at ε/(3.7·D) = 1 the formula divides by
+	// log²(1) = 0, and below 0.45 mm it means nothing.
+	for _, bore := range []units.Length{CommercialSteel / 3.7, 10 * units.Micrometre, 0.44 * units.Millimetre} {
+		k, _, err := Elbow90.K(bore)
+		if k != 0 {
+			t.Errorf("Elbow90.K(%v) = %v beside %v, want 0", bore, k, err)
+		}
+		wantRangeError(t, "tiny bore "+bore.String(), err, "bore")
+	}
+	if k, _, err := Elbow90.K(0.45 * units.Millimetre); err != nil || !(k > 0) {
+		t.Errorf("Elbow90.K(0.45 mm) = %v, %v; want a K", k, err)
+	}
 	if k, _, _ := Exit.K(0.01); k != 1 {
 		t.Errorf("exit K = %g, want 1", k)
 	}
@@ -182,7 +195,8 @@ func TestPathBadInput(t *testing.T) {
 		{"pipe length", Path{Elements: []Element{good, Pipe{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[1].Length"},
 		{"pipe bore", Path{Elements: []Element{Pipe{Length: 1}}}, 1e-3, vg46At50, "Elements[0].Bore"},
 		{"rough", Path{Elements: []Element{Pipe{Length: 1, Bore: 0.01, Roughness: 0.002}}}, 1e-3, vg46At50, "Elements[0].Roughness"},
-		{"fitting custom", Path{Elements: []Element{Fitting{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[0].kind"},
+		{"fitting custom", Path{Elements: []Element{Fitting{Bore: 0.01}}}, 1e-3, vg46At50, "Elements[0].Kind"},
+		{"fitting tiny bore", Path{Elements: []Element{Fitting{Kind: Elbow90, Bore: 1e-5}}}, 1e-3, vg46At50, "Elements[0].Bore"},
 		{"fitting K", Path{Elements: []Element{Fitting{Bore: 0.01, K: -1}}}, 1e-3, vg46At50, "Elements[0].K"},
 		{"fitting count", Path{Elements: []Element{Fitting{Bore: 0.01, K: 1, Count: -2}}}, 1e-3, vg46At50, "Elements[0].Count"},
 		{"rated drop", Path{Elements: []Element{Rated{Flow: 1}}}, 1e-3, vg46At50, "Elements[0].Drop"},
@@ -194,6 +208,6 @@ func TestPathBadInput(t *testing.T) {
 		if d.Total != 0 || d.Elements != nil {
 			t.Errorf("%s: non-zero result beside the error", c.name)
 		}
-		wantRangeError(t, c.name, err, c.param)
+		wantRangeErrorIn(t, c.name, err, "line.Path.Drop", c.param)
 	}
 }

@@ -62,7 +62,7 @@ func SelectTube(n TubeNeed) (TubeChoice, error) {
 		var w WallRating
 		if n.Pressure > 0 {
 			if w, err = Barlow(t.OD, t.Wall, n.Strength, n.Safety, OutsideDiameter); err != nil {
-				return TubeChoice{}, err
+				return TubeChoice{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"strength": "Strength", "safety": "Safety"}))
 			}
 			if w.Working < n.Pressure {
 				continue

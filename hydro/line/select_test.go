@@ -75,10 +75,13 @@ func TestSelectBadInput(t *testing.T) {
 		{"limit", bad(func(n *TubeNeed) { n.Limit = VelocityLimit{} }), "Limit.Max"},
 		{"class", bad(func(n *TubeNeed) { n.Class = 9 }), "Class"},
 		{"pressure", bad(func(n *TubeNeed) { n.Pressure = -1 }), "Pressure"},
-		{"strength", bad(func(n *TubeNeed) { n.Pressure = 1e7; n.Safety = 4 }), "strength"},
+
 		{"hose flow", second(SelectHose(-1, SuctionLine.Limit())), "Flow"},
 		{"hose limit", second(SelectHose(1e-3, VelocityLimit{})), "Limit.Max"},
 	} {
 		wantRangeError(t, c.name, c.err, c.param)
 	}
+	// Errors of the Barlow rating name SelectTube's fields.
+	wantRangeErrorIn(t, "strength", bad(func(n *TubeNeed) { n.Pressure = 1e7; n.Safety = 4 }), "line.SelectTube", "Strength")
+	wantRangeErrorIn(t, "safety", bad(func(n *TubeNeed) { n.Pressure = 1e7; n.Strength = 4e8 }), "line.SelectTube", "Safety")
 }

@@ -108,7 +108,9 @@ type Surge struct {
 // thin walls). Entrained air would lower the wave speed and the rise; it is
 // left out, so the figure stays an upper bound. The findings label it so,
 // and warn when the peak exceeds the rating. Velocity and Length must be
-// finite and > 0.
+// finite and > 0, and 2L/a must fit a time.Duration (292 years). Errors
+// name the Closure's fields: Temperature, Pressure, Fluid.… for the fluid's
+// data, Wall.Bore, Wall.OD, Wall.Modulus, Wall.Poisson.
 func (c Closure) Surge() (Surge, error) {
 	const fn = "line.Closure.Surge"
 	if err := validate.Positive(fn, "Velocity", c.Velocity); err != nil {
@@ -122,15 +124,16 @@ func (c Closure) Surge() (Surge, error) {
 	}
 	kf, err := c.Fluid.BulkModulus(fluid.IsentropicTangent, c.Temperature, c.Pressure)
 	if err != nil {
-		return Surge{}, err
+		return Surge{}, validate.Renamed(err, fn, fluidFields("Fluid.", "Temperature", "Pressure"))
 	}
 	rho, err := c.Fluid.Density(c.Temperature, c.Pressure)
 	if err != nil {
-		return Surge{}, err
+		return Surge{}, validate.Renamed(err, fn, fluidFields("Fluid.", "Temperature", "Pressure"))
 	}
 	kw, err := c.Wall.bulk()
 	if err != nil {
-		return Surge{}, err
+		return Surge{}, validate.Renamed(err, fn, validate.Fields("Wall.",
+			map[string]string{"di": "Wall.Bore", "do": "Wall.OD", "e": "Wall.Modulus", "nu": "Wall.Poisson", "B": "Wall.Modulus"}))
 	}
 	var s Surge
 	if s.WaveSpeed, err = WaveSpeed(rho, kf, kw); err != nil {
@@ -141,7 +144,11 @@ func (c Closure) Surge() (Surge, error) {
 		return Surge{}, err
 	}
 	s.Peak = c.Pressure + s.Rise
-	s.RoundTrip = time.Duration(2 * float64(c.Length) / float64(s.WaveSpeed) * float64(time.Second))
+	trip := 2 * float64(c.Length) / float64(s.WaveSpeed) // s
+	if !(trip <= float64(math.MaxInt64)/float64(time.Second)) {
+		return Surge{}, validate.Fail(fn, "Length", c.Length, "short enough for a wave round trip 2L/a within 292 years")
+	}
+	s.RoundTrip = time.Duration(trip * float64(time.Second))
 	rule := components.PhysicsRule("Joukowsky, Δp = ρ·a·Δv, for a closure faster than 2L/a: an upper bound")
 	s.Findings = components.Findings{components.NewFinding(components.Notice, components.Overpressure, "line.surge-bound", rule,
 		"closing in less than %v on oil moving at %v can raise the line by up to %v, to %v; slower closure gives less",

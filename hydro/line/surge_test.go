@@ -91,8 +91,25 @@ func TestSurgeBadInput(t *testing.T) {
 		{"velocity", bad(func(c *Closure) { c.Velocity = 0 }), "Velocity"},
 		{"length", bad(func(c *Closure) { c.Length = units.Length(math.Inf(1)) }), "Length"},
 		{"rating", bad(func(c *Closure) { c.Rating = -1 }), "Rating"},
-		{"wall od", bad(func(c *Closure) { c.Wall = Wall{Bore: 0.02, OD: 0.01, Modulus: 2e11} }), "do"},
+		// 2L/a beyond what a time.Duration holds (about 292 years).
+		{"round trip", bad(func(c *Closure) { c.Length = 1e300 }), "Length"},
 	} {
 		wantRangeError(t, c.name, c.err, c.param)
+	}
+	// Errors of the fluid and the wall name Surge and the Closure's fields.
+	for _, c := range []struct {
+		name  string
+		err   error
+		param string
+	}{
+		{"wall od", bad(func(c *Closure) { c.Wall = Wall{Bore: 0.02, OD: 0.01, Modulus: 2e11} }), "Wall.OD"},
+		{"wall bore", bad(func(c *Closure) { c.Wall = Wall{OD: 0.01, Modulus: 2e11} }), "Wall.Bore"},
+		{"wall modulus", bad(func(c *Closure) { c.Wall = Wall{Bore: 0.01, OD: 0.012} }), "Wall.Modulus"},
+		{"wall poisson", bad(func(c *Closure) { c.Wall = Wall{Bore: 0.01, OD: 0.012, Modulus: 2e11, Poisson: 0.7} }), "Wall.Poisson"},
+		{"temperature", bad(func(c *Closure) { c.Temperature = units.TemperatureFromCelsius(400) }), "Temperature"},
+		{"pressure", bad(func(c *Closure) { c.Pressure = units.Pressure(math.NaN()) }), "Pressure"},
+		{"zero fluid", bad(func(c *Closure) { c.Fluid = fluid.Fluid{} }), "Fluid.Bulk.K0"},
+	} {
+		wantRangeErrorIn(t, c.name, c.err, "line.Closure.Surge", c.param)
 	}
 }

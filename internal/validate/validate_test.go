@@ -80,3 +80,23 @@ func TestChecked(t *testing.T) {
 		}
 	}
 }
+
+func TestRenamed(t *testing.T) {
+	inner := validate.Positive("pkg.Inner", "strength", 0.0)
+	err := validate.Renamed(inner, "pkg.Outer", validate.Fields("Need.", map[string]string{"strength": "Strength"}))
+	var re *units.RangeError
+	if !errors.As(err, &re) || re.Func != "pkg.Outer" || re.Param != "Strength" || !errors.Is(err, units.ErrRange) {
+		t.Errorf("Renamed = %v, want pkg.Outer naming Strength", err)
+	}
+	if inner.(*units.RangeError).Param != "strength" {
+		t.Errorf("Renamed changed the error it was given: %v", inner)
+	}
+	err = validate.Renamed(validate.Positive("pkg.Inner", "K0", 0.0), "pkg.Outer", validate.Fields("Fluid.", nil))
+	if !errors.As(err, &re) || re.Param != "Fluid.K0" {
+		t.Errorf("Renamed with a prefix = %v, want Fluid.K0", err)
+	}
+	other := errors.New("not a range error")
+	if validate.Renamed(other, "pkg.Outer", validate.Fields("", nil)) != other || validate.Renamed(nil, "pkg.Outer", nil) != nil {
+		t.Error("Renamed changed an error that is not a *RangeError, or nil")
+	}
+}

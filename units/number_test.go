@@ -1,0 +1,178 @@
+package units
+
+import (
+	"encoding/json"
+	"errors"
+	"strings"
+	"sync"
+	"testing"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
+)
+
+// A comma is ambiguous: "3,000" is three thousand in the US and three in
+// much of Europe. The package refuses it and says why; a Parser reads the
+// one convention its caller names.
+
+func TestCommaRefused(t *testing.T) {
+	for _, c := range []struct {
+		in     string
+		detail []string
+	}{
+		{"3,000 psi", []string{`"3,000" is 3000 where a comma groups thousands`, "and 3.000 where it is the decimal mark", "units.Parser"}},
+		{"2,5 bar", []string{`"2,5" is 2.5 where a comma is the decimal mark`, "write 2.5"}},
+		{"1,234.5 L/min", []string{`"1,234.5"`}},
+		{"12,500,000 Pa", []string{"12500000"}},
+		{"-0,5 bar", []string{`"0,5"`}},
+		{"1 1,5/2 in", nil},
+	} {
+		for _, parse := range []func(string) (float64, error){pPressure, pFlow, pLength, pDynamic} {
+			v, err := parse(c.in)
+			if !errors.Is(err, ErrAmbiguous) && !errors.Is(err, ErrDimension) && !errors.Is(err, ErrSyntax) {
+				t.Errorf("parse %q = %g, %v; want an error", c.in, v, err)
+			}
+		}
+		_, err := Parse(c.in)
+		if len(c.detail) > 0 && !errors.Is(err, ErrAmbiguous) {
+			t.Errorf("Parse(%q): %v; want ErrAmbiguous", c.in, err)
+			continue
+		}
+		for _, d := range c.detail {
+			if !strings.Contains(err.Error(), d) {
+				t.Errorf("Parse(%q): %v; want it to say %s", c.in, err, d)
+			}
+		}
+	}
+}
+
+func TestParserConventions(t *testing.T) {
+	eu := Parser{Decimal: ','}
+	us := Parser{Group: ','}
+	de := Parser{Decimal: ',', Group: '.'}
+	for _, c := range []struct {
+		p    Parser
+		in   string
+		want Pressure
+	}{
+		{eu, "2,5 bar", 2.5 * Bar},
+		{eu, "0,8 bar vac", -0.8 * Bar},
+		{eu, "55 bar", 55 * Bar},
+		{us, "3,000 psi", 3000 * PSI},
+		{us, "3,000.5 psi", 3000.5 * PSI},
+		{us, "2.5 bar", 2.5 * Bar},
+		{us, "12,500,000 Pa", 12500000 * Pascal},
+		{de, "1.500,5 kPa", 1500.5 * Kilopascal},
+		{de, "210 bar", 210 * Bar},
+		{Parser{}, "210 bar", 210 * Bar},
+		{Parser{Decimal: '.'}, "2.5 bar", 2.5 * Bar},
+	} {
+		got, err := c.p.ParsePressure(c.in)
+		if err != nil || got != c.want {
+			t.Errorf("%+v.ParsePressure(%q) = %v, %v; want %v", c.p, c.in, got, err, c.want)
+		}
+	}
+	if l, err := eu.ParseLength("2 ft 6,5 in"); err != nil || l != 30.5*Inch {
+		t.Errorf("eu.ParseLength(2 ft 6,5 in) = %v, %v", l, err)
+	}
+	if q, err := us.Parse("1,200 L/min"); err != nil || q.Value() != float64(1200*LitrePerMinute) {
+		t.Errorf("us.Parse(1,200 L/min) = %v, %v", q, err)
+	}
+}
+
+func TestParserRefusals(t *testing.T) {
+	eu := Parser{Decimal: ','}
+	us := Parser{Group: ','}
+	for _, c := range []struct {
+		p      Parser
+		in     string
+		want   error
+		detail string
+	}{
+		{eu, "2.5 bar", ErrAmbiguous, "reads ',' as the decimal mark"},
+		{us, "3,00 psi", ErrSyntax, "groups of three digits"},
+		{us, "3000,000 psi", ErrSyntax, "at most three digits before"},
+		{us, "3,0000 psi", ErrSyntax, "groups of three digits"},
+		{Parser{}, "3,000 psi", ErrAmbiguous, "a comma in a number is ambiguous"},
+	} {
+		v, err := c.p.ParsePressure(c.in)
+		if !errors.Is(err, c.want) || v != 0 || !strings.Contains(err.Error(), c.detail) {
+			t.Errorf("%+v.ParsePressure(%q) = %v, %v; want %v saying %q", c.p, c.in, v, err, c.want, c.detail)
+		}
+		var pe *ParseError
+		if errors.As(err, &pe) && (pe.Func != "units.Parser.ParsePressure" || pe.Input != c.in) {
+			t.Errorf("%+v.ParsePressure(%q): ParseError{Func: %q, Input: %q}", c.p, c.in, pe.Func, pe.Input)
+		}
+	}
+	// A Parser with a mark it cannot use names the field.
+	for _, c := range []struct {
+		p     Parser
+		param string
+	}{
+		{Parser{Decimal: ';'}, "p.Decimal"},
+		{Parser{Group: ' '}, "p.Group"},
+		{Parser{Decimal: ',', Group: ','}, "p.Group"},
+		{Parser{Group: '.'}, "p.Group"},
+	} {
+		v, err := c.p.ParsePressure("1 bar")
+		checktest.RangeError(t, err, c.param)
+		if v != 0 {
+			t.Errorf("%+v.ParsePressure = %v with an error", c.p, v)
+		}
+		_, err = c.p.Parse("1 bar")
+		checktest.RangeError(t, err, c.param)
+	}
+}
+
+// TestParserConcurrent: a Parser is a value without state; many goroutines
+// read with one at once (run with -race).
+func TestParserConcurrent(t *testing.T) {
+	eu := Parser{Decimal: ','}
+	var wg sync.WaitGroup
+	for range 8 {
+		wg.Go(func() {
+			for range 200 {
+				if p, err := eu.ParsePressure("2,5 bar"); err != nil || p != 2.5*Bar {
+					t.Errorf("ParsePressure = %v, %v", p, err)
+					return
+				}
+			}
+		})
+	}
+	wg.Wait()
+}
+
+// TestJSONBareNumberRefused: a quantity in JSON is a string with its unit;
+// a bare number is refused with the text to write, and null leaves a value.
+func TestJSONBareNumberRefused(t *testing.T) {
+	var box struct {
+		P Pressure
+		Q Flow
+	}
+	err := json.Unmarshal([]byte(`{"P": 210}`), &box)
+	if !errors.Is(err, ErrSyntax) || !strings.Contains(err.Error(), `"210 bar"`) || box.P != 0 {
+		t.Errorf("json 210 into a Pressure = %v, %v; want ErrSyntax showing \"210 bar\"", box.P, err)
+	}
+	err = json.Unmarshal([]byte(`{"Q": 1.5e1}`), &box)
+	if !errors.Is(err, ErrSyntax) || !strings.Contains(err.Error(), `"1.5e1 L/min"`) {
+		t.Errorf("json 1.5e1 into a Flow: %v", err)
+	}
+	for _, bad := range []string{`{"P": true}`, `{"P": [1]}`, `{"P": {"v": 1}}`} {
+		if err := json.Unmarshal([]byte(bad), &box); !errors.Is(err, ErrSyntax) {
+			t.Errorf("json %s into a Pressure: %v; want ErrSyntax", bad, err)
+		}
+	}
+	box.P = 3 * Bar
+	if err := json.Unmarshal([]byte(`{"P": null}`), &box); err != nil || box.P != 3*Bar {
+		t.Errorf("json null into a Pressure = %v, %v; want it unchanged", box.P, err)
+	}
+	if err := json.Unmarshal([]byte(`{"P": "210 bar", "Q": "12,5 L/min"}`), &box); !errors.Is(err, ErrAmbiguous) {
+		t.Errorf("json with a comma: %v; want ErrAmbiguous", err)
+	}
+	if err := json.Unmarshal([]byte(`{"P": "3000 PSI"}`), &box); err != nil || box.P != 3000*PSI {
+		t.Errorf("json 3000 PSI = %v, %v", box.P, err)
+	}
+	var pe *ParseError
+	if err := json.Unmarshal([]byte(`{"P": 5}`), &box); !errors.As(err, &pe) || pe.Func != "units.Pressure.UnmarshalJSON" {
+		t.Errorf("json 5: %#v; want a ParseError from units.Pressure.UnmarshalJSON", err)
+	}
+}
