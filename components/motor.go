@@ -13,7 +13,7 @@ const (
 )
 
 var (
-	iecMotorRatings = fixed("IEC 60072-1 motor ratings", StandardRule("IEC 60072-1:1991, clause 9"),
+	iecMotorRatings = fixed("IEC 60072-1 motor ratings", StandardRule("IEC 60072-1:1991, rated output series"),
 		[]units.Power{0.06 * kW, 0.09 * kW, 0.12 * kW, 0.18 * kW, 0.25 * kW, 0.37 * kW, 0.55 * kW, 0.75 * kW,
 			1.1 * kW, 1.5 * kW, 2.2 * kW, 3 * kW, 4 * kW, 5.5 * kW, 7.5 * kW, 11 * kW, 15 * kW, 18.5 * kW,
 			22 * kW, 30 * kW, 37 * kW, 45 * kW, 55 * kW, 75 * kW, 90 * kW, 110 * kW, 132 * kW, 160 * kW,
@@ -27,11 +27,12 @@ var (
 		nil)
 )
 
-// IECMotorRatings returns the preferred rated outputs of IEC 60072-1
-// (clause 9, "Preferred rated output values") for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
+// IECMotorRatings returns the rated outputs of the IEC 60072-1 output
+// series for induction motors, 0.06 kW to 315 kW: 0.06 0.09 0.12 0.18
 // 0.25 0.37 0.55 0.75 1.1 1.5 2.2 3 4 5.5 7.5 11 15 18.5 22 30 37 45 55 75 90
 // 110 132 160 200 250 315 kW. The values to 55 kW were confirmed in a
-// published list; 75 kW and up are recalled (from memory).
+// published list; 75 kW and up are recalled (from memory). The Rule names
+// the standard without a clause number, which was not confirmed.
 func IECMotorRatings() Series[units.Power] { return iecMotorRatings }
 
 // NEMAMotorRatings returns the horsepower ratings of NEMA MG 1 for
@@ -49,8 +50,8 @@ func NEMAMotorRatings() Series[units.Power] { return nemaMotorRatings }
 // (f in Hz, p poles; a machine with p poles has p/2 pole pairs). At 50 Hz a
 // 4-pole motor turns at 1500 rev/min synchronous, at 60 Hz 1800 rev/min; an
 // induction motor runs a few per cent below it by its slip. It fails with an
-// error matching units.ErrRange when poles is not an even number ≥ 2 or
-// mains is not finite and > 0.
+// error matching units.ErrRange when poles is not an even number ≥ 2,
+// mains is not finite and > 0, or the speed underflows to 0.
 func SynchronousSpeed(poles int, mains units.Frequency) (units.RotationalSpeed, error) {
 	const fn = "components.SynchronousSpeed"
 	if poles < 2 || poles%2 != 0 {
@@ -59,5 +60,9 @@ func SynchronousSpeed(poles int, mains units.Frequency) (units.RotationalSpeed, 
 	if err := validate.Positive(fn, "mains", mains); err != nil {
 		return 0, err
 	}
-	return units.RotationalSpeed(float64(mains) / float64(poles/2)), nil
+	n := units.RotationalSpeed(float64(mains) / float64(poles/2))
+	if err := validate.PositiveResult(fn, "n", n); err != nil {
+		return 0, err // a mains frequency so small that the speed underflows to 0
+	}
+	return n, nil
 }

@@ -36,6 +36,7 @@ func TestSynchronousSpeedBadInput(t *testing.T) {
 		{0, 50, "poles"}, {3, 50, "poles"}, {-4, 50, "poles"},
 		{4, 0, "mains"}, {4, -50, "mains"}, {4, units.Frequency(math.NaN()), "mains"},
 		{4, units.Frequency(math.Inf(1)), "mains"},
+		{4, 5e-324, "n"}, // the speed underflows to 0: an error naming the result, not a 0 rev/s
 	} {
 		got, err := SynchronousSpeed(c.poles, c.mains)
 		if got != 0 {

@@ -216,12 +216,24 @@ func (s Series[T]) NextPreferred(min T) (T, error) {
 // above required, skipping second-choice sizes; otherwise it behaves as
 // [Series.Select]. The choice names the whole series.
 func (s Series[T]) SelectPreferred(required T) (Choice[T], error) {
-	if err := validate.Positive("components.Series.SelectPreferred", "required", required); err != nil {
+	const fn = "components.Series.SelectPreferred"
+	if err := validate.Positive(fn, "required", required); err != nil {
 		return Choice[T]{}, err
 	}
+	return s.choice(fn, required, s.preferredFrom(required))
+}
+
+// choice returns the choice of the i-th size (none when i is past the
+// end) for required. It fails when required is so small that the margin
+// Chosen/Required − 1 overflows.
+func (s Series[T]) choice(fn string, required T, i int) (Choice[T], error) {
 	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
-	if i := s.preferredFrom(required); i < len(s.values) {
+	if i < len(s.values) {
 		c.Chosen = s.values[i]
+	}
+	if c.Chosen > 0 && math.IsInf(float64(c.Chosen/required), 0) {
+		return Choice[T]{}, validate.Fail(fn, "required", required,
+			"large enough that the margin "+format(c.Chosen)+"/required is finite")
 	}
 	return c, nil
 }
@@ -283,16 +295,13 @@ func (s Series[T]) Nearest(v T) (T, error) {
 // requirement above the largest size is not an error: the choice comes back
 // with Chosen 0 and OK false, for the caller to report as a finding. It
 // fails with an error matching units.ErrRange only when required is not
-// finite and > 0.
+// finite and > 0, or so small (a denormal) that the margin overflows.
 func (s Series[T]) Select(required T) (Choice[T], error) {
-	if err := validate.Positive("components.Series.Select", "required", required); err != nil {
+	const fn = "components.Series.Select"
+	if err := validate.Positive(fn, "required", required); err != nil {
 		return Choice[T]{}, err
 	}
-	c := Choice[T]{Required: required, Series: s.name, Rule: s.rule}
-	if i := s.from(required); i < len(s.values) {
-		c.Chosen = s.values[i]
-	}
-	return c, nil
+	return s.choice(fn, required, s.from(required))
 }
 
 func (s Series[T]) label() string {

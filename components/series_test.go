@@ -102,6 +102,20 @@ func TestSeriesSelect(t *testing.T) {
 	if err != nil || c.OK() || c.Chosen != 0 || c.Margin() != 0 {
 		t.Errorf("Select beyond the largest = %+v, %v; want a failed choice and no error", c, err)
 	}
+	// A requirement so small that Chosen/Required overflows would give an
+	// infinite margin, which JSON cannot carry: an error naming required.
+	for name, sel := range map[string]func(units.Length) (Choice[units.Length], error){
+		"Select": s.Select, "SelectPreferred": s.SelectPreferred,
+	} {
+		c, err := sel(5e-324)
+		var re *units.RangeError
+		if !errors.As(err, &re) || re.Param != "required" || c != (Choice[units.Length]{}) {
+			t.Errorf("%s(5e-324 m) = %+v, %v; want the zero Choice and a RangeError naming required", name, c, err)
+		}
+		if c, err := sel(1e-300); err != nil || math.IsInf(c.Margin(), 0) {
+			t.Errorf("%s(1e-300 m) = %+v (margin %v), %v; want a finite margin", name, c, c.Margin(), err)
+		}
+	}
 }
 
 func TestSeriesBadInput(t *testing.T) {

@@ -214,3 +214,14 @@ func ExampleFluid_DataSheet() {
 	// test-rig clamp oil, VG 46, pour point -39 °C: start from -11.7 °C, run up to 90.24 °C
 	// fluid.FromDataSheet: PourPoint = 45 °C is out of range: want 0 (not known), or above 0 K and below 40 °C (V40 is measured on the flowing fluid)
 }
+
+// A data sheet's "HM 46": the ISO 6743-4 class and the ISO 3448 grade.
+func ExampleParseClassGrade() {
+	class, grade, err := fluid.ParseClassGrade("HM 46")
+	fmt.Println(class, grade, err)
+	g, _ := fluid.ParseGrade("ISO 68")
+	fmt.Println(g.Designation(), g.Mid())
+	// Output:
+	// HM VG 46 <nil>
+	// ISO VG 68 68 mm²/s
+}

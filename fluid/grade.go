@@ -193,28 +193,81 @@ func (g Grade) next() Grade {
 	return 0
 }
 
-// ParseGrade reads an ISO 3448 grade. The grammar, letters in any case,
-// surrounding spaces ignored:
+// ParseGrade reads an ISO 3448 grade as data sheets write it. The grammar,
+// letters in any case, surrounding spaces ignored:
 //
-//	grade = [ "ISO" sep ] "VG" [ sep ] number
+//	grade = [ "ISO" sep ] [ "VG" [ sep ] ] number
 //	sep   = one or more spaces, or one "-"
 //
-// so "VG 46", "ISO VG 46", "VG46", "iso vg 46" and "ISO-VG-46" all give
-// VG46. The number is plain decimal digits without sign or leading zero.
+// so "VG 46", "ISO VG 46", "VG46", "iso vg 46", "ISO-VG-46", "ISO 46" and a
+// bare "46" all give VG46. The number is plain decimal digits without sign
+// or leading zero, and must be one of the 18 grades (ErrNoGrade).
 func ParseGrade(s string) (Grade, error) { return parseGrade("ParseGrade", s) }
 
 func parseGrade(fn, s string) (Grade, error) {
 	p := gradeParser{s: s}
 	p.spaces()
-	if p.word("ISO") {
-		if !p.sep() {
-			return 0, p.fail(fn, units.ErrSyntax)
-		}
+	return p.grade(fn)
+}
+
+// ParseClassGrade reads a hydraulic fluid as data sheets name it: an
+// ISO 6743-4 class and an ISO 3448 grade. The grammar, letters in any case,
+// surrounding spaces ignored:
+//
+//	fluid = [ "ISO" sep ] class [ sep ] grade
+//
+// with grade as in ParseGrade and class one of the classes this package
+// knows (HM, HV, HFC, HFDU, HEES), so "HM 46", "HM46", "hv-68", "ISO HM 46"
+// and "HM ISO VG 46" all read. An unknown class is an error matching
+// units.ErrSyntax that lists the known ones; a grade ISO 3448 does not
+// define matches ErrNoGrade. On error both results are zero.
+func ParseClassGrade(s string) (Class, Grade, error) {
+	const fn = "ParseClassGrade"
+	p := gradeParser{s: s}
+	p.spaces()
+	if p.word("ISO") && !p.sep() {
+		return 0, 0, p.fail(fn, units.ErrSyntax)
 	}
-	if !p.word("VG") {
-		return 0, p.fail(fn, units.ErrSyntax)
+	start := p.i
+	for p.i < len(s) && (s[p.i]|0x20 >= 'a' && s[p.i]|0x20 <= 'z') {
+		p.i++
+	}
+	c := classNamed(s[start:p.i])
+	if c == 0 {
+		p.i = start
+		e := p.fail(fn, units.ErrSyntax)
+		e.Detail = "want an ISO 6743-4 class: HM, HV, HFC, HFDU or HEES, then the ISO 3448 grade, as in HM 46"
+		return 0, 0, e
 	}
 	p.sep()
+	g, err := p.grade(fn)
+	if err != nil {
+		return 0, 0, err
+	}
+	return c, g, nil
+}
+
+// classNamed returns the class whose ISO 6743-4 symbol is name, letter case
+// ignored, or 0.
+func classNamed(name string) Class {
+	for _, c := range []Class{HM, HV, HFC, HFDU, HEES} {
+		if strings.EqualFold(c.String(), name) {
+			return c
+		}
+	}
+	return 0
+}
+
+// grade reads the grade production of ParseGrade from p.i to the end of
+// the text (trailing spaces allowed).
+func (p *gradeParser) grade(fn string) (Grade, error) {
+	s := p.s
+	if p.word("ISO") && !p.sep() {
+		return 0, p.fail(fn, units.ErrSyntax)
+	}
+	if p.word("VG") {
+		p.sep()
+	}
 	start := p.i
 	n := 0
 	for p.i < len(s) && s[p.i] >= '0' && s[p.i] <= '9' {
@@ -266,7 +319,7 @@ func (p *gradeParser) word(w string) bool {
 	return false
 }
 
-func (p *gradeParser) fail(fn string, err error) error {
+func (p *gradeParser) fail(fn string, err error) *units.ParseError {
 	return &units.ParseError{Func: "fluid." + fn, Input: p.s, Pos: p.i, Err: err}
 }
 

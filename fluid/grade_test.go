@@ -89,6 +89,8 @@ func TestParseGrade(t *testing.T) {
 		{"VG 46", VG46}, {"ISO VG 46", VG46}, {"VG46", VG46}, {"ISO VG46", VG46},
 		// case, separators and surrounding spaces
 		{"iso vg 68", VG68}, {"ISO-VG-32", VG32}, {"  VG 1500 ", VG1500}, {"ISO  VG  2", VG2},
+		// as data sheets also write them: without VG, or the number alone
+		{"ISO 46", VG46}, {"iso-68", VG68}, {"46", VG46}, {" 220 ", VG220},
 	}
 	for _, c := range good {
 		g, err := ParseGrade(c.in)
@@ -103,7 +105,9 @@ func TestParseGrade(t *testing.T) {
 	}{
 		// malformed
 		{"", 0, units.ErrSyntax},
-		{"46", 0, units.ErrSyntax},
+		{"ISO", 3, units.ErrSyntax},
+		{"ISO46", 3, units.ErrSyntax},
+		{"46 VG", 3, units.ErrSyntax},
 		{"VG", 2, units.ErrSyntax},
 		{"VG -46", 3, units.ErrSyntax},
 		{"VG 046", 3, units.ErrSyntax},
@@ -113,6 +117,8 @@ func TestParseGrade(t *testing.T) {
 		{"SAE 10W", 0, units.ErrSyntax},
 		// well formed, not a grade
 		{"VG 47", 3, ErrNoGrade},
+		{"47", 0, ErrNoGrade},
+		{"ISO 47", 4, ErrNoGrade},
 		{"VG 0", 3, units.ErrSyntax},
 		{"VG 99999999999999999999", 3, ErrNoGrade},
 	}
@@ -239,4 +245,67 @@ func TestGradeLimitsInSI(t *testing.T) {
 			t.Errorf("GradeOf(%v mm²/s) = %v, %v; want ErrNoGrade", v, g, err)
 		}
 	}
+}
+
+// TestParseClassGrade: a class with a grade, as data sheets write them.
+func TestParseClassGrade(t *testing.T) {
+	for _, c := range []struct {
+		in    string
+		class Class
+		grade Grade
+	}{
+		{"HM 46", HM, VG46}, {"HM46", HM, VG46}, {"hm 46", HM, VG46}, {"HV-68", HV, VG68},
+		{"ISO HM 46", HM, VG46}, {"HM ISO VG 46", HM, VG46}, {"HM VG46", HM, VG46},
+		{"HFC 46", HFC, VG46}, {"HFDU 68", HFDU, VG68}, {"  HEES 46 ", HEES, VG46},
+	} {
+		class, grade, err := ParseClassGrade(c.in)
+		if err != nil || class != c.class || grade != c.grade {
+			t.Errorf("ParseClassGrade(%q) = %v, %v, %v; want %v, %v", c.in, class, grade, err, c.class, c.grade)
+		}
+	}
+	for _, c := range []struct {
+		in     string
+		pos    int
+		err    error
+		detail string
+	}{
+		{"HLP 46", 0, units.ErrSyntax, "HM, HV, HFC, HFDU or HEES"},
+		{"46", 0, units.ErrSyntax, "ISO 6743-4 class"},
+		{"HM", 2, units.ErrSyntax, ""},
+		{"HM 47", 3, ErrNoGrade, ""},
+		{"HM 46 extra", 6, units.ErrSyntax, ""},
+		{"ISOHM 46", 3, units.ErrSyntax, ""},
+	} {
+		class, grade, err := ParseClassGrade(c.in)
+		var pe *units.ParseError
+		if !errors.As(err, &pe) || !errors.Is(err, c.err) || pe.Pos != c.pos || pe.Func != "fluid.ParseClassGrade" ||
+			!strings.Contains(err.Error(), c.detail) || class != 0 || grade != 0 {
+			t.Errorf("ParseClassGrade(%q) = %v, %v, %#v; want %v at %d", c.in, class, grade, err, c.err, c.pos)
+		}
+	}
+}
+
+func FuzzParseClassGrade(f *testing.F) {
+	for _, s := range []string{"HM 46", "HV-68", "ISO HM 46", "HM ISO VG 46", "HLP 46", "HM", "", "HM 47", "hfdu 1500"} {
+		f.Add(s)
+	}
+	f.Fuzz(func(t *testing.T, s string) {
+		class, grade, err := ParseClassGrade(s)
+		if err != nil {
+			var pe *units.ParseError
+			if !errors.As(err, &pe) || pe.Pos < 0 || pe.Pos > len(s) || (!errors.Is(err, units.ErrSyntax) && !errors.Is(err, ErrNoGrade)) {
+				t.Fatalf("ParseClassGrade(%q): bad error %#v", s, err)
+			}
+			if class != 0 || grade != 0 {
+				t.Fatalf("ParseClassGrade(%q) = %v, %v with an error", s, class, grade)
+			}
+			return
+		}
+		if !grade.Valid() || classNamed(class.String()) != class {
+			t.Fatalf("ParseClassGrade(%q) = %v, %v", s, class, grade)
+		}
+		if c2, g2, err := ParseClassGrade(class.String() + " " + grade.Designation()); err != nil || c2 != class || g2 != grade {
+			t.Fatalf("ParseClassGrade(%q) does not read back: %v %v %v", s, c2, g2, err)
+		}
+	})
 }

@@ -1,6 +1,9 @@
 package fluid
 
-import "github.com/hydrosize/hydrosize/units"
+import (
+	"github.com/hydrosize/hydrosize/internal/saybolt"
+	"github.com/hydrosize/hydrosize/units"
+)
 
 // The limits of this package's models, in one place. Each says where it
 // comes from: the standard that states it, the physics that forces it, or
@@ -75,7 +78,7 @@ const (
 )
 
 // The ASTM D2161 SUS equation holds from 1.81 mm²/s (about 32 SUS).
-const minSUSViscosity = 1.81 * units.SquareMillimetrePerSecond
+const minSUSViscosity = saybolt.MinViscosity * units.SquareMillimetrePerSecond
 
 // Limits of a fluid's data (FromDataSheet and the Fluid methods): density at
 // 15 °C from 500 to 2000 kg/m³, volumetric expansion from 0 to 2·10⁻³ 1/K,

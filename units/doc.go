@@ -124,7 +124,10 @@
 // type, and refuses others with what to write instead (listed under Spellings):
 // ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
 // refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
-// ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+// ton-force differ by 10 %); ParsePressure refuses a plain mercury column; and
+// ParseKinematicViscosity reads Saybolt Universal Seconds ("150 SUS", "150 SSU")
+// through the ASTM D2161 equation at 100 °F, from 31.95 SUS (1.81 mm²/s) up.
+// SUS are not a factor of a unit, so Parse and Convert do not read them.
 //
 // Errors are *ParseError values that quote the input and the byte offset and
 // unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
@@ -184,6 +187,7 @@
 //   - Temperature: K kelvin; °R degR R; °C degC ℃ C deg C celsius ºC ° C º C; °F degF ℉ F deg F fahrenheit ºF ° F º F
 //   - TemperatureDifference: ΔK delta K deltaK; Δ°C delta degC deltaC ΔC delta C; Δ°F delta degF deltaF ΔF delta F
 //   - KinematicViscosity: m²/s m2/s m^2/s; mm²/s mm2/s mm^2/s; cSt cst CST; St
+//     (ParseKinematicViscosity reads SUS (ASTM D2161, at 100 °F), SSU (ASTM D2161, at 100 °F), SUS at 100 °F (ASTM D2161, at 100 °F), SSU at 100 °F (ASTM D2161, at 100 °F).)
 //   - DynamicViscosity: Pa·s Pa*s Pa.s Pa s Pas; mPa·s mPa*s mPa.s mPa s mPas; cP cp cps; P
 //   - Density: kg/m³ kg/m3 kg/m^3; g/cm³ g/cm3 g/cc g/mL g/ml; kg/L kg/l; lbm/ft³ lbm/ft3 lb/ft³ lb/ft3 pcf; lbm/gal lb/gal ppg
 //   - SpecificHeatCapacity: J/(kg·K) J/kg/K J/(kg*K) J/kgK; kJ/(kg·K) kJ/kg/K kJ/(kg*K) kJ/kgK; BTU/(lbm·°F) BTU/(lbm*°F) BTU/lbm/°F Btu/(lb·°F) Btu/lb/F BTU/lb/F

@@ -42,8 +42,9 @@ type unit struct {
 type context struct {
 	Spelling string
 	Unit     string // symbol of the unit of this type it reads as; "" to refuse
-	Err      string // with Unit "": the sentinel, such as "ErrAmbiguous"
-	Detail   string // with Unit "": what the error says
+	Read     string // or a function that reads the number (not a factor: SUS)
+	Err      string // or, to refuse: the sentinel, such as "ErrAmbiguous"
+	Detail   string // and what the error says
 	UnitIdx  int    // index in unitTable of Unit (set by main)
 }
 
@@ -300,6 +301,14 @@ var quantities = []quantity{
 			{Const: "SquareMillimetrePerSecond", Value: "1e-6", Doc: "is 10⁻⁶ m²/s, the unit of ISO 3448 grades.", Accessor: "SquareMillimetresPerSecond", Symbol: "mm²/s", Aliases: []string{"mm2/s", "mm^2/s"}},
 			{Const: "Centistokes", Value: "1e-6", Doc: "is one centistokes, 1 mm²/s exactly.", Accessor: "Centistokes", Symbol: "cSt", Aliases: []string{"cst", "CST"}},
 			{Const: "Stokes", Value: "1e-4", Doc: "is one stokes, 1 cm²/s exactly.", Accessor: "Stokes", Symbol: "St"},
+		},
+		// Saybolt Universal Seconds are not a factor of a unit: the typed
+		// parser reads them through ASTM D2161 at 100 °F.
+		Context: []context{
+			{Spelling: "SUS", Read: "readSaybolt"},
+			{Spelling: "SSU", Read: "readSaybolt"},
+			{Spelling: "SUS at 100 °F", Read: "readSaybolt"},
+			{Spelling: "SSU at 100 °F", Read: "readSaybolt"},
 		}},
 	{Name: "DynamicViscosity", Kind: "dynamic viscosity", Dim: "dim(-1, 1, -1, 0, 0)", Base: "PascalSecond", Metric: "mPa·s", US: "cP",
 		Doc: "DynamicViscosity is an absolute (dynamic) viscosity in pascal seconds (Pa·s).",
@@ -413,8 +422,14 @@ func main() {
 			if fitting[q.Name+" "+c.Spelling] {
 				fail(fmt.Errorf("%s: context spelling %q is a registered spelling of a %s unit", q.Name, c.Spelling, q.Name))
 			}
-			if (c.Unit == "") == (c.Err == "") || (c.Unit != "" && c.UnitIdx == 0) {
-				fail(fmt.Errorf("%s: context spelling %q wants a unit of %s or an error, not both", q.Name, c.Spelling, q.Name))
+			kinds := 0
+			for _, k := range []string{c.Unit, c.Read, c.Err} {
+				if k != "" {
+					kinds++
+				}
+			}
+			if kinds != 1 || (c.Unit != "" && c.UnitIdx == 0) {
+				fail(fmt.Errorf("%s: context spelling %q wants one of a unit of %s, a Read function or an error", q.Name, c.Spelling, q.Name))
 			}
 		}
 	}
@@ -608,7 +623,10 @@ A typed parser also reads a few spellings that mean something only for its
 type, and refuses others with what to write instead (listed under Spellings):
 ParseForce reads "lb" and "lbs" as pound-force, the US load convention, and
 refuses "kg" (write kgf) and a plain "ton" or "t" (a tonne-force and a short
-ton-force differ by 10 %); ParsePressure refuses a plain mercury column.
+ton-force differ by 10 %); ParsePressure refuses a plain mercury column; and
+ParseKinematicViscosity reads Saybolt Universal Seconds ("150 SUS", "150 SSU")
+through the ASTM D2161 equation at 100 °F, from 31.95 SUS (1.81 mm²/s) up.
+SUS are not a factor of a unit, so Parse and Convert do not read them.
 
 Errors are *ParseError values that quote the input and the byte offset and
 unwrap to ErrSyntax, ErrUnknownUnit (with the nearest known spellings),
@@ -647,9 +665,12 @@ whatever a caller put in the fields.
 func contextDoc(q quantity) string {
 	var reads, refuses []string
 	for _, c := range q.Context {
-		if c.Unit != "" {
+		switch {
+		case c.Unit != "":
 			reads = append(reads, c.Spelling+" as "+c.Unit)
-		} else {
+		case c.Read != "":
+			reads = append(reads, c.Spelling+" (ASTM D2161, at 100 °F)")
+		default:
 			refuses = append(refuses, c.Spelling)
 		}
 	}
@@ -865,7 +886,7 @@ var (
 {{- range $q := .}}{{if not $q.NoType}}
 	type{{$q.Name}} = typeInfo{name: "{{$q.Name}}", kind: "{{$q.Kind}}", dim: {{$q.Dim}}, accept: {{accept $q.Accept}}, useOffset: {{$q.Offset}}, {{if $q.Min}}hasMin: true, min: {{$q.Min}}, minText: {{quote $q.MinText}}, {{end}}examples: {{quote (examples $q)}}{{if $q.Context}},
 		context: []contextSpelling{ {{range $c := $q.Context}}
-			{spelling: {{quote $c.Spelling}}, {{if $c.Unit}}unit: {{$c.UnitIdx}}{{else}}unit: -1, err: {{$c.Err}}, detail: {{quote $c.Detail}}{{end}}},{{end}}
+			{spelling: {{quote $c.Spelling}}, {{if $c.Unit}}unit: {{$c.UnitIdx}}{{else if $c.Read}}unit: -1, read: {{$c.Read}}{{else}}unit: -1, err: {{$c.Err}}, detail: {{quote $c.Detail}}{{end}}},{{end}}
 		}{{end}}}
 {{- end}}{{end}}
 )

@@ -5,7 +5,12 @@ package units
 // dimension, reference and range. The unit itself is resolved by the
 // registry and the expression parser (registry.go, expr.go).
 
-import "math"
+import (
+	"math"
+	"strconv"
+
+	"github.com/hydrosize/hydrosize/internal/saybolt"
+)
 
 // scanNumber returns the length of the decimal number at the start of s, the
 // number production of the grammar in the package documentation (no
@@ -136,6 +141,13 @@ func parseTypedSlow(fn, s string, t *typeInfo, st numberStyle) (float64, error) 
 			return v, nil
 		}
 	}
+	if c := t.contextOf(in[at:]); c != nil && c.read != nil {
+		v, f := c.read(num)
+		if f.err != nil {
+			return 0, f.at(fn, s, 0)
+		}
+		return v, nil
+	}
 	r, f := resolveTyped(in[at:], t)
 	if f.err != nil {
 		if f.err == ErrUnknownUnit && f.word == in[at:] {
@@ -204,6 +216,19 @@ func compoundLength(num float64, in string, at int, st numberStyle) (float64, bo
 		return 0, false, failure{err: ErrRange, detail: "value is not finite"}
 	}
 	return v, true, failure{}
+}
+
+// readSaybolt reads sus Saybolt Universal Seconds at 100 °F as a kinematic
+// viscosity in m²/s, through ASTM D2161 (the equation is in
+// internal/saybolt, shared with package fluid). It wants at least the SUS of
+// 1.81 mm²/s, where the standard's equation starts (about 31.95 SUS).
+func readSaybolt(sus float64) (float64, failure) {
+	least := saybolt.Seconds(saybolt.MinViscosity)
+	if !(sus >= least) || math.IsInf(sus, 0) {
+		return 0, failure{err: ErrRange, detail: "want at least " + strconv.FormatFloat(least, 'f', 2, 64) +
+			" SUS (1.81 mm²/s, where the ASTM D2161 equation starts)"}
+	}
+	return saybolt.Viscosity(sus) * 1e-6, failure{}
 }
 
 // negativeVacuum is the failure of a negative vacuum reading.

@@ -44,6 +44,9 @@ func parseQuantity(fn, s string, st numberStyle) (Quantity, error) {
 	if f.err == nil && num < 0 && r.factor < 0 {
 		f = negativeVacuum()
 	}
+	if f.err == ErrUnknownUnit && f.word == in[at:] {
+		f.detail += contextHint(f.word)
+	}
 	if f.err != nil {
 		return Quantity{}, f.at(fn, s, at)
 	}

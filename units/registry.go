@@ -54,8 +54,9 @@ type typeInfo struct {
 // with unit −1, an error that says what to write instead.
 type contextSpelling struct {
 	spelling string
-	unit     int   // index in unitTable, or −1 to refuse
-	err      error // the sentinel of a refusal
+	unit     int                              // index in unitTable, or −1
+	read     func(float64) (float64, failure) // or: reads the number to SI (SUS)
+	err      error                            // or: the sentinel of a refusal
 	detail   string
 }
 
@@ -244,4 +245,19 @@ func ambiguousDetail(s string, e foldEntry) string {
 		d += " (m is milli, 10⁻³; M is mega, 10⁶)"
 	}
 	return d + ": write the one you mean"
+}
+
+// contextHint says, for a spelling the registry does not know, which typed
+// parser reads it or what to write instead ("; ParseKinematicViscosity reads
+// it as a kinematic viscosity"), or "" when no type knows it either.
+func contextHint(spelling string) string {
+	for _, t := range allTypes {
+		if c := t.contextOf(spelling); c != nil {
+			if c.err != nil {
+				return "; " + c.detail
+			}
+			return "; Parse" + t.name + " reads it as a " + t.kind
+		}
+	}
+	return ""
 }

@@ -131,6 +131,48 @@ var messyTemperatures = []struct {
 	{"104 ºF", TemperatureFromFahrenheit(104)},
 }
 
+// TestSayboltSeconds: "150 SUS" reads through ASTM D2161 at 100 °F, the
+// equation shared with fluid.ViscosityFromSaybolt (internal/saybolt).
+// ASTM D2161, Appendix X1: 700 SUS is 151.0891 mm²/s, to the printed 4
+// decimals; the trade's 150 SUS for an ISO VG 32 oil is 31.89 mm²/s by the
+// equation (to the 2 decimals of its check, 32 mm²/s → 150.49 SUS).
+func TestSayboltSeconds(t *testing.T) {
+	for _, c := range []struct {
+		in   string
+		want float64 // mm²/s
+		tol  float64
+	}{
+		{"700 SUS", 151.0891, 5e-5},
+		{"700 SSU", 151.0891, 5e-5},
+		{"150 SUS", 31.8915, 5e-5},
+		{"150 sus", 31.8915, 5e-5},
+		{"150 SUS at 100 °F", 31.8915, 5e-5},
+		{"4632 SUS", 1000, 1e-9}, // the linear form above 500 mm²/s: SUS = 4.632ν
+	} {
+		v, err := ParseKinematicViscosity(c.in)
+		if err != nil || math.Abs(v.SquareMillimetresPerSecond()-c.want) > c.tol {
+			t.Errorf("ParseKinematicViscosity(%q) = %.6f mm²/s, %v; want %g", c.in, v.SquareMillimetresPerSecond(), err, c.want)
+		}
+	}
+	for _, c := range []struct {
+		in     string
+		parse  func(string) (float64, error)
+		want   error
+		detail string
+	}{
+		{"20 SUS", parseErr(ParseKinematicViscosity), ErrRange, "31.95 SUS"},
+		{"-150 SUS", parseErr(ParseKinematicViscosity), ErrRange, "ASTM D2161"},
+		{"150 SUS", pDynamic, ErrUnknownUnit, "ParseKinematicViscosity reads it"},
+		{"50 ton", pDynamic, ErrUnknownUnit, "a ton is ambiguous"},
+		{"150 SUS", pPressure, ErrUnknownUnit, ""},
+	} {
+		v, err := c.parse(c.in)
+		if !errors.Is(err, c.want) || v != 0 || !strings.Contains(err.Error(), c.detail) {
+			t.Errorf("parse %q = %g, %v; want %v saying %q", c.in, v, err, c.want, c.detail)
+		}
+	}
+}
+
 func TestMessySpellings(t *testing.T) {
 	for _, c := range messySpellings {
 		got, err := c.parse(c.in)

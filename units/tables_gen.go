@@ -33,17 +33,23 @@ var (
 			{spelling: "mm Hg", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
 			{spelling: "Torr", unit: -1, err: ErrReference, detail: "a plain inch or millimetre of mercury is a barometric (absolute) reading: for a vacuum gauge reading write \"inHg vac\" or \"mmHg vac\" (a gauge pressure below ambient), or parse it as an AbsolutePressure"},
 		}}
-	typeAbsolutePressure        = typeInfo{name: "AbsolutePressure", kind: "absolute pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refAbsolute, useOffset: false, hasMin: true, min: 0, minText: "≥ 0 Pa (absolute vacuum)", examples: "bara, psia, Pa(a), kPa(a)"}
-	typeFlow                    = typeInfo{name: "Flow", kind: "volume flow", dim: dim(3, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "L/min, gpm, m³/s, L/s"}
-	typeVelocity                = typeInfo{name: "Velocity", kind: "velocity", dim: dim(1, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "m/s, ft/s, mm/s, in/s"}
-	typeDisplacement            = typeInfo{name: "Displacement", kind: "displacement", dim: dim(3, 0, 0, 0, -1), accept: refNone, useOffset: false, examples: "cm³/rev, in³/rev, m³/rev"}
-	typeRotationalSpeed         = typeInfo{name: "RotationalSpeed", kind: "rotational speed", dim: dim(0, 0, -1, 0, 1), accept: refNone, useOffset: false, examples: "rpm, rev/s, rad/s"}
-	typeTorque                  = typeInfo{name: "Torque", kind: "torque", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "N·m, lbf·ft, kN·m, lbf·in"}
-	typePower                   = typeInfo{name: "Power", kind: "power", dim: dim(2, 1, -3, 0, 0), accept: refNone, useOffset: false, examples: "kW, hp, W, PS"}
-	typeEnergy                  = typeInfo{name: "Energy", kind: "energy", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kJ, BTU, J, MJ"}
-	typeTemperature             = typeInfo{name: "Temperature", kind: "temperature", dim: dim(0, 0, 0, 1, 0), accept: refPoint, useOffset: true, hasMin: true, min: 0, minText: "≥ 0 K (absolute zero)", examples: "°C, °F, K, °R"}
-	typeTemperatureDifference   = typeInfo{name: "TemperatureDifference", kind: "temperature difference", dim: dim(0, 0, 0, 1, 0), accept: refNone | refPoint, useOffset: false, examples: "K, °F, ΔK, Δ°C"}
-	typeKinematicViscosity      = typeInfo{name: "KinematicViscosity", kind: "kinematic viscosity", dim: dim(2, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "mm²/s, cSt, m²/s, St"}
+	typeAbsolutePressure      = typeInfo{name: "AbsolutePressure", kind: "absolute pressure", dim: dim(-1, 1, -2, 0, 0), accept: refNone | refAbsolute, useOffset: false, hasMin: true, min: 0, minText: "≥ 0 Pa (absolute vacuum)", examples: "bara, psia, Pa(a), kPa(a)"}
+	typeFlow                  = typeInfo{name: "Flow", kind: "volume flow", dim: dim(3, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "L/min, gpm, m³/s, L/s"}
+	typeVelocity              = typeInfo{name: "Velocity", kind: "velocity", dim: dim(1, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "m/s, ft/s, mm/s, in/s"}
+	typeDisplacement          = typeInfo{name: "Displacement", kind: "displacement", dim: dim(3, 0, 0, 0, -1), accept: refNone, useOffset: false, examples: "cm³/rev, in³/rev, m³/rev"}
+	typeRotationalSpeed       = typeInfo{name: "RotationalSpeed", kind: "rotational speed", dim: dim(0, 0, -1, 0, 1), accept: refNone, useOffset: false, examples: "rpm, rev/s, rad/s"}
+	typeTorque                = typeInfo{name: "Torque", kind: "torque", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "N·m, lbf·ft, kN·m, lbf·in"}
+	typePower                 = typeInfo{name: "Power", kind: "power", dim: dim(2, 1, -3, 0, 0), accept: refNone, useOffset: false, examples: "kW, hp, W, PS"}
+	typeEnergy                = typeInfo{name: "Energy", kind: "energy", dim: dim(2, 1, -2, 0, 0), accept: refNone, useOffset: false, examples: "kJ, BTU, J, MJ"}
+	typeTemperature           = typeInfo{name: "Temperature", kind: "temperature", dim: dim(0, 0, 0, 1, 0), accept: refPoint, useOffset: true, hasMin: true, min: 0, minText: "≥ 0 K (absolute zero)", examples: "°C, °F, K, °R"}
+	typeTemperatureDifference = typeInfo{name: "TemperatureDifference", kind: "temperature difference", dim: dim(0, 0, 0, 1, 0), accept: refNone | refPoint, useOffset: false, examples: "K, °F, ΔK, Δ°C"}
+	typeKinematicViscosity    = typeInfo{name: "KinematicViscosity", kind: "kinematic viscosity", dim: dim(2, 0, -1, 0, 0), accept: refNone, useOffset: false, examples: "mm²/s, cSt, m²/s, St",
+		context: []contextSpelling{
+			{spelling: "SUS", unit: -1, read: readSaybolt},
+			{spelling: "SSU", unit: -1, read: readSaybolt},
+			{spelling: "SUS at 100 °F", unit: -1, read: readSaybolt},
+			{spelling: "SSU at 100 °F", unit: -1, read: readSaybolt},
+		}}
 	typeDynamicViscosity        = typeInfo{name: "DynamicViscosity", kind: "dynamic viscosity", dim: dim(-1, 1, -1, 0, 0), accept: refNone, useOffset: false, examples: "mPa·s, cP, Pa·s, P"}
 	typeDensity                 = typeInfo{name: "Density", kind: "density", dim: dim(-3, 1, 0, 0, 0), accept: refNone, useOffset: false, examples: "kg/m³, lbm/ft³, g/cm³, kg/L"}
 	typeSpecificHeatCapacity    = typeInfo{name: "SpecificHeatCapacity", kind: "specific heat capacity", dim: dim(2, 0, -2, -1, 0), accept: refNone, useOffset: false, examples: "kJ/(kg·K), BTU/(lbm·°F), J/(kg·K)"}

@@ -121,7 +121,7 @@ func CriticalLoad(d, lk units.Length, e, yield units.Pressure) (units.Force, Buc
 		}
 	}
 	p, m := critical(d, lk, e, yield)
-	if err := validate.Result(fn, "P", p); err != nil {
+	if _, err := validate.Checked(fn, "P", p); err != nil {
 		return 0, Euler, err
 	}
 	return p, m, nil
@@ -254,11 +254,18 @@ func (c Column) Check() (BucklingCheck, error) {
 	if err := c.validateSetup(fn, "Column."); err != nil {
 		return BucklingCheck{}, err
 	}
+	return c.checked(fn)
+}
+
+// checked returns the check of the column, or an error naming the first of
+// its numbers that is NaN or ±Inf (inputs so extreme that the arithmetic
+// overflows: a rod of a denormal diameter, a thrust that underflows to 0).
+func (c Column) checked(fn string) (BucklingCheck, error) {
 	r := c.check()
-	if err := validate.Result(fn, "Critical", r.Critical); err != nil {
-		return BucklingCheck{}, err
-	}
-	if err := validate.Result(fn, "Thrust", r.Thrust); err != nil {
+	if err := finite(fn, output{"Length", float64(r.Length)}, output{"FreeLength", float64(r.FreeLength)},
+		output{"Slenderness", r.Slenderness}, output{"Transition", r.Transition},
+		output{"Critical", float64(r.Critical)}, output{"Thrust", float64(r.Thrust)},
+		output{"Safety", r.Safety.Value}); err != nil {
 		return BucklingCheck{}, err
 	}
 	return r, nil
@@ -325,7 +332,9 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 		return r, nil
 	}
 	c.Cylinder.Rod = ch.Chosen
-	r.Check = c.check()
+	if r.Check, err = c.checked(fn); err != nil {
+		return RodChoice{}, err
+	}
 	return r, nil
 }
 

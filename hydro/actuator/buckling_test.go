@@ -254,6 +254,30 @@ func TestSizeWithBuckling(t *testing.T) {
 	}
 }
 
+// TestSizeBucklingNoRod: 21.2 m pin to pin at full extension is too long for
+// any standard rod below any bore at 250 bar relief (the 500 mm bore would
+// need d⁴ = 64·lk²·3.5·T/(π³·E), d = 525 mm; hand arithmetic [X]): sizing
+// fails, and says it is the buckling, with a warning, not only that no size
+// was found.
+func TestSizeBucklingNoRod(t *testing.T) {
+	col := balerColumn()
+	col.Retracted = 20 * units.Metre
+	d := Duty{Force: 150 * units.Kilonewton, Pressure: 230 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Bore.Chosen != 0 || r.Rod.Chosen != 0 || r.Cylinder != (Cylinder{}) || r.Buckling != nil {
+		t.Errorf("bore %+v, rod %+v, cylinder %+v, buckling %v; want nothing chosen", r.Bore, r.Rod, r.Cylinder, r.Buckling)
+	}
+	if len(r.Findings.Topic("actuator.buckling-no-rod").AtLeast(components.Warning).Hazard(components.Structural)) != 1 {
+		t.Errorf("findings %v; want the buckling warning of the largest bore", r.Findings)
+	}
+	if !near(r.Rod.Required, 525*mm, 2e-3) {
+		t.Errorf("rod required %v; want about 525 mm, the buckling need at the 500 mm bore", r.Rod.Required)
+	}
+}
+
 func TestColumnBadInput(t *testing.T) {
 	for _, w := range []struct {
 		param string

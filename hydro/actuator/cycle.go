@@ -122,7 +122,7 @@ func (c Cylinder) Move(dir Direction, p Profile) (StrokeMotion, error) {
 	if c.Action == DoubleActing {
 		r.PeakReturn = m.PeakSpeed.TimesArea(c.OutletArea(dir))
 	}
-	if err := validate.Result(fn, "PeakFlow", r.PeakFlow); err != nil {
+	if err := finite(fn, output{"PeakFlow", float64(r.PeakFlow)}, output{"PeakReturn", float64(r.PeakReturn)}); err != nil {
 		return StrokeMotion{}, err
 	}
 	return r, nil
@@ -153,7 +153,7 @@ type Cushion struct {
 type CushionCheck struct {
 	Decel    units.Acceleration               // average deceleration v²/(2L)
 	Force    units.Force                      // m·a + p_drive·A_in + F_assist, carried by the cushion chamber
-	Energy   units.Energy                     // the energy absorbed: ½·m·v² + (p_drive·A_in + F_assist)·L
+	Energy   units.Energy                     // the energy absorbed, Force·L = ½·m·v² + (p_drive·A_in + F_assist)·L (0 when Force is 0)
 	Pressure units.Pressure                   // average cushion pressure Force/A_c
 	Rating   components.Check[units.Pressure] // Pressure at most Cylinder.Rating
 	Findings components.Findings              // a warning when the rating is exceeded
@@ -192,9 +192,12 @@ func (c Cylinder) Cushioning(dir Direction, cu Cushion) (CushionCheck, error) {
 	push := cu.Drive.TimesArea(c.Area(dir)) + cu.Assist
 	r := CushionCheck{Decel: units.Acceleration(float64(cu.Speed) * float64(cu.Speed) / (2 * float64(cu.Length)))}
 	r.Force = max(cu.Mass.TimesAcceleration(r.Decel)+push, 0)
-	r.Energy = units.Energy(0.5*float64(cu.Mass)*float64(cu.Speed)*float64(cu.Speed) + float64(push)*float64(cu.Length))
+	r.Energy = units.Energy(float64(r.Force) * float64(cu.Length))
 	p, err := pressureOn(fn, r.Force, ac)
 	if err != nil {
+		return CushionCheck{}, err
+	}
+	if err := finite(fn, output{"Decel", float64(r.Decel)}, output{"Energy", float64(r.Energy)}); err != nil {
 		return CushionCheck{}, err
 	}
 	r.Pressure = p

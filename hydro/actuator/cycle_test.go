@@ -107,7 +107,7 @@ func TestCushioning(t *testing.T) {
 	}
 	// Friction that stops the mass on its own needs no cushion pressure.
 	cu = Cushion{Length: 30 * mm, Mass: 10, Speed: 0.1, Assist: -1e5}
-	if r, err := c.Cushioning(Extend, cu); err != nil || r.Pressure != 0 {
+	if r, err := c.Cushioning(Extend, cu); err != nil || r.Pressure != 0 || r.Energy != 0 {
 		t.Errorf("friction stops it: %+v, %v", r, err)
 	}
 }

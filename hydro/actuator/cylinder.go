@@ -121,10 +121,11 @@ func (c Cylinder) Volume(dir Direction) units.Volume { return c.Area(dir).TimesL
 // double-rod cylinder, 2 for a "2:1" single-rod one. φ is also the ratio of
 // retract to extend speed at one flow.
 func (c Cylinder) AreaRatio() (float64, error) {
-	if err := c.validate("actuator.Cylinder.AreaRatio"); err != nil {
+	const fn = "actuator.Cylinder.AreaRatio"
+	if err := c.validate(fn); err != nil {
 		return 0, err
 	}
-	return float64(c.Area(Extend) / c.Area(Retract)), nil
+	return validate.Checked(fn, "φ", float64(c.Area(Extend)/c.Area(Retract)))
 }
 
 // check validates the cylinder for a stroke in dir.
@@ -160,7 +161,7 @@ func (c Cylinder) Force(dir Direction, p, back units.Pressure) (units.Force, err
 	if err := pressures(fn, p, back); err != nil {
 		return 0, err
 	}
-	return c.force(dir, p, back), nil
+	return validate.Checked(fn, "F", c.force(dir, p, back))
 }
 
 func (c Cylinder) force(dir Direction, p, back units.Pressure) units.Force {
@@ -238,8 +239,7 @@ func (c Cylinder) FlowFor(dir Direction, v units.Velocity) (units.Flow, error) {
 	if err := validate.Positive(fn, "v", v); err != nil {
 		return 0, err
 	}
-	q := v.TimesArea(c.Area(dir))
-	return validate.Checked(fn, "Q", q)
+	return validate.Checked(fn, "Q", v.TimesArea(c.Area(dir)))
 }
 
 // ReturnFlow returns the flow leaving the outlet side when flow q enters
@@ -258,8 +258,7 @@ func (c Cylinder) ReturnFlow(dir Direction, q units.Flow) (units.Flow, error) {
 	if c.Action == SingleActing {
 		return 0, nil
 	}
-	r := q * units.Flow(c.OutletArea(dir)/c.Area(dir))
-	return validate.Checked(fn, "Q_out", r)
+	return validate.Checked(fn, "Q_out", q*units.Flow(c.OutletArea(dir)/c.Area(dir)))
 }
 
 // StrokeTime returns the time for a full stroke dir at constant inlet flow

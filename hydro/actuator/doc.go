@@ -28,9 +28,10 @@
 // A [Duty] describes one stroke: the process force, the moving mass on a
 // guide at an incline with friction, the speed and the distance or time to
 // reach it, the pressure available and the back pressure. [Duty.Size] adds
-// up the force ([LoadForces]: F + m·g·sin θ + μ·m·g·cos θ + m·a), divides by
-// a seal friction allowance (efficiency 0.90 unless given, common practice),
-// finds the minimum bore, then the smallest standard bore and rod (ISO 3320
+// up the force ([LoadForces]: F + m·g·sin θ + μ·m·g·cos θ + m·a), takes a
+// seal friction allowance off the driving force (η·p·A_in − p_back·A_out ≥ F,
+// η = 0.90 unless given, common practice; friction never helps against the
+// back pressure), finds the minimum bore, then the smallest standard bore and rod (ISO 3320
 // unless the caller passes a series, such as components.InchBores or a
 // maker's list) that deliver the force, and the pressure the chosen
 // cylinder actually needs. The rod is the smallest standard rod giving at
@@ -116,7 +117,9 @@
 // All functions and methods are safe for concurrent use. Functions that
 // return an error validate every input and return errors matching
 // units.ErrRange that name the parameter or field; on error they return the
-// zero value. Sizing, buckling checks, the oil spring, motions and the
+// zero value. Inputs at the ends of the float range whose arithmetic
+// overflows (a denormal rod, a 1e300 m bore) give an error naming the
+// result, never a NaN or ±Inf beside a nil error. Sizing, buckling checks, the oil spring, motions and the
 // cylinder and motor calculations allocate nothing unless they return
 // findings or fail.
 package actuator

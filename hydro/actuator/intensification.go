@@ -21,8 +21,9 @@ import (
 // load is more than p·A_in can push (the piston stalls and the outlet side
 // is not compressed).
 //
-// This is the one implementation of the intensification balance: the
-// meter-out checks of hydro/valve call it. p must be finite and > 0, the
+// This is the one implementation of the intensification balance: a family
+// that checks a meter-out circuit calls it rather than repeating it. p must
+// be finite and > 0, the
 // areas finite and > 0, resist finite; errors match units.ErrRange.
 func IntensifiedPressure(p units.Pressure, inlet, outlet units.Area, resist units.Force) (units.Pressure, error) {
 	const fn = "actuator.IntensifiedPressure"
@@ -77,7 +78,11 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	if err != nil {
 		return Intensification{}, rename(err, fn)
 	}
-	r := Intensification{Pressure: po, Ratio: float64(po / p),
+	ratio, err := validate.Checked(fn, "Ratio", float64(po/p))
+	if err != nil {
+		return Intensification{}, err // an inlet pressure so small that p_out/p overflows
+	}
+	r := Intensification{Pressure: po, Ratio: ratio,
 		Rating: components.Within(po, c.Rating, components.CallerRule("Cylinder.Rating"))}
 	if !r.Rating.OK() {
 		r.Findings = components.Findings{components.NewFinding(components.Danger, components.Overpressure,

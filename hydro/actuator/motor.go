@@ -76,8 +76,7 @@ func (m Motor) Torque(dp units.Pressure) (units.Torque, error) {
 	if err := checkMotor(m, fn, "dp", dp); err != nil {
 		return 0, err
 	}
-	t := m.Displacement.TimesPressure(dp) * units.Torque(m.Mechanical)
-	return validate.Checked(fn, "T", t)
+	return validate.Checked(fn, "T", m.Displacement.TimesPressure(dp)*units.Torque(m.Mechanical))
 }
 
 // StartingTorque returns the breakaway torque at pressure difference dp
@@ -88,8 +87,7 @@ func (m Motor) StartingTorque(dp units.Pressure) (units.Torque, error) {
 		return 0, err
 	}
 	eta, _ := m.starting()
-	t := m.Displacement.TimesPressure(dp) * units.Torque(eta)
-	return validate.Checked(fn, "T", t)
+	return validate.Checked(fn, "T", m.Displacement.TimesPressure(dp)*units.Torque(eta))
 }
 
 // PressureFor returns the pressure difference that gives running torque t
@@ -99,8 +97,7 @@ func (m Motor) PressureFor(t units.Torque) (units.Pressure, error) {
 	if err := checkMotor(m, fn, "t", t); err != nil {
 		return 0, err
 	}
-	p := units.Pressure(2 * math.Pi * float64(t) / (float64(m.Displacement) * m.Mechanical))
-	return validate.Checked(fn, "dp", p)
+	return validate.Checked(fn, "dp", units.Pressure(2*math.Pi*float64(t)/(float64(m.Displacement)*m.Mechanical)))
 }
 
 // Speed returns the shaft speed on flow q (finite, > 0): n = Q·η_v/D.
@@ -109,8 +106,7 @@ func (m Motor) Speed(q units.Flow) (units.RotationalSpeed, error) {
 	if err := checkMotor(m, fn, "q", q); err != nil {
 		return 0, err
 	}
-	n := units.RotationalSpeed(float64(q) * m.Volumetric / float64(m.Displacement))
-	return validate.Checked(fn, "n", n)
+	return validate.Checked(fn, "n", units.RotationalSpeed(float64(q)*m.Volumetric/float64(m.Displacement)))
 }
 
 // FlowFor returns the flow that turns the shaft at speed n (finite, > 0):
@@ -121,8 +117,7 @@ func (m Motor) FlowFor(n units.RotationalSpeed) (units.Flow, error) {
 	if err := checkMotor(m, fn, "n", n); err != nil {
 		return 0, err
 	}
-	q := m.Displacement.TimesSpeed(n) / units.Flow(m.Volumetric)
-	return validate.Checked(fn, "Q", q)
+	return validate.Checked(fn, "Q", m.Displacement.TimesSpeed(n)/units.Flow(m.Volumetric))
 }
 
 // Power returns the shaft power with pressure difference dp and flow q
@@ -137,8 +132,7 @@ func (m Motor) Power(dp units.Pressure, q units.Flow) (units.Power, error) {
 	if err := validate.Positive(fn, "q", q); err != nil {
 		return 0, err
 	}
-	p := dp.TimesFlow(q) * units.Power(m.Volumetric*m.Mechanical)
-	return validate.Checked(fn, "P", p)
+	return validate.Checked(fn, "P", dp.TimesFlow(q)*units.Power(m.Volumetric*m.Mechanical))
 }
 
 // checkMotor validates the motor and one positive argument.

@@ -84,10 +84,10 @@ func (d MotorDuty) Size() (MotorSize, error) {
 		r.Pressure = components.Within(units.Pressure(float64(d.Pressure)*float64(r.Displacement.Required/d.Displacements.Largest())),
 			d.Pressure, components.CallerRule("MotorDuty.Pressure"))
 	}
-	r.Findings = d.findings(r)
-	if err := validate.Result(fn, "Flow", r.Flow); err != nil {
+	if err := finite(fn, output{"Pressure", float64(r.Pressure.Value)}, output{"Flow", float64(r.Flow)}); err != nil {
 		return MotorSize{}, err
 	}
+	r.Findings = d.findings(r)
 	return r, nil
 }
 

@@ -51,10 +51,8 @@ func (c Cylinder) Regenerative(q units.Flow, p units.Pressure) (Regeneration, er
 	}
 	r := Regeneration{Speed: v, Force: p.TimesArea(c.RodArea()),
 		CapFlow: v.TimesArea(c.CapArea()), RodFlow: v.TimesArea(c.AnnulusArea())}
-	if err := validate.Result(fn, "Force", r.Force); err != nil {
-		return Regeneration{}, err
-	}
-	if err := validate.Result(fn, "CapFlow", r.CapFlow); err != nil {
+	if err := finite(fn, output{"Force", float64(r.Force)}, output{"CapFlow", float64(r.CapFlow)},
+		output{"RodFlow", float64(r.RodFlow)}); err != nil {
 		return Regeneration{}, err
 	}
 	return r, nil

@@ -5,6 +5,7 @@ import (
 	"math"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -49,3 +50,19 @@ func prefixed(err error, prefix string) error {
 // diameterOf returns the diameter of a circle of area a, d = √(4A/π), the
 // inverse of units.CircleArea.
 func diameterOf(a units.Area) units.Length { return units.Length(math.Sqrt(4 * float64(a) / math.Pi)) }
+
+// output is one number of a result, named for the error that reports it.
+type output struct {
+	name string
+	v    float64
+}
+
+// finite returns an error naming the first output that is NaN or ±Inf.
+func finite(fn string, outs ...output) error {
+	for _, o := range outs {
+		if err := validate.Result(fn, o.name, o.v); err != nil {
+			return err
+		}
+	}
+	return nil
+}

@@ -84,7 +84,20 @@ func (d Duty) Forces() (LoadForces, error) {
 	if err := d.validate(fn); err != nil {
 		return LoadForces{}, err
 	}
-	return d.forces(), nil
+	return d.loads(fn)
+}
+
+// loads returns the breakdown of the force, or an error naming the first
+// term that overflows (a mass or friction coefficient so large that m·g·μ
+// is not finite).
+func (d Duty) loads(fn string) (LoadForces, error) {
+	l := d.forces()
+	if err := finite(fn, output{"Gravity", float64(l.Gravity)}, output{"Friction", float64(l.Friction)},
+		output{"Accel", float64(l.Accel)}, output{"Acceleration", float64(l.Acceleration)},
+		output{"Total", float64(l.Total())}); err != nil {
+		return LoadForces{}, err
+	}
+	return l, nil
 }
 
 func (d Duty) forces() LoadForces {
@@ -180,9 +193,13 @@ func (d Duty) ratio() (float64, components.Rule) {
 // (see [LoadForces]) at the available pressure, with the seal efficiency η
 // and a rod that gives the least area ratio φ = A₁/A₂:
 //
-//	η·(p·A_in − p_back·A_out) ≥ F,  A₁ = F / (η·(p·a_in − p_back·a_out)),  D = √(4·A₁/π)
+//	η·p·A_in − p_back·A_out ≥ F,  A₁ = F / (η·p·a_in − p_back·a_out),  D = √(4·A₁/π)
 //
-// where a_in, a_out are 1 for the cap side and 1/φ for an annulus side. It
+// where a_in, a_out are 1 for the cap side and 1/φ for an annulus side.
+// Seal friction takes its share (1 − η) of the driving force p·A_in (the
+// allowance grows with the working pressure, as seal friction does); the
+// back pressure opposes the motion in full, friction never helping against
+// it. It
 // fails with an error matching units.ErrRange for a bad field (see
 // [Duty.Size]), when the total force is not > 0 (a lowering stroke the load
 // drives on its own has nothing to size: size the lifting stroke, and hold
@@ -193,7 +210,11 @@ func (d Duty) MinimumBore() (units.Length, error) {
 	if err := d.validate(fn); err != nil {
 		return 0, err
 	}
-	return d.minimumBore(fn, d.forces().Total())
+	l, err := d.loads(fn)
+	if err != nil {
+		return 0, err
+	}
+	return d.minimumBore(fn, l.Total())
 }
 
 func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
@@ -211,13 +232,13 @@ func (d Duty) minimumBore(fn string, total units.Force) (units.Length, error) {
 	default:
 		out = 1
 	}
-	net := eta * (float64(d.Pressure)*in - float64(d.BackPressure)*out)
+	net := eta*float64(d.Pressure)*in - float64(d.BackPressure)*out
 	if net <= 0 {
 		return 0, validate.Fail(fn, "Duty.BackPressure", d.BackPressure,
-			"< "+units.Pressure(float64(d.Pressure)*in/out).String()+" (the inlet pressure times the area ratio)")
+			"< "+units.Pressure(eta*float64(d.Pressure)*in/out).String()+
+				" (the inlet pressure after seal friction times the area ratio)")
 	}
-	bore := diameterOf(units.Area(float64(total) / net))
-	return validate.Checked(fn, "bore", bore)
+	return validate.Checked(fn, "bore", diameterOf(units.Area(float64(total)/net)))
 }
 
 // CylinderSize is the result of sizing a cylinder for a [Duty]: the forces,
@@ -230,9 +251,12 @@ type CylinderSize struct {
 	Cylinder Cylinder                        // the chosen cylinder; zero when no standard size meets the duty
 
 	// Pressure is the pressure the chosen cylinder needs at the inlet for
-	// the total force (after seal friction, against the back pressure),
-	// held at most at Duty.Pressure. When no standard size meets the duty
-	// it is the failed check of the largest bore with a rod of exactly the
+	// the total force, p = (F + p_back·A_out)/(η·A_in) (seal friction takes
+	// its share of p·A_in; the back pressure opposes in full), held at most
+	// at Duty.Pressure. When no standard size meets the duty it is the
+	// failed check of the largest bore tried with its standard rod, or, when
+	// no bore could be tried (the minimum bore is beyond the series, or no
+	// rod fits), the check of the largest bore with a rod of exactly the
 	// least area ratio.
 	Pressure components.Check[units.Pressure]
 
@@ -261,8 +285,9 @@ type CylinderSize struct {
 // that cylinder actually needs.
 //
 // A requirement beyond the largest standard bore or rod is not an error:
-// the result carries a failed choice (Chosen 0, OK false), a zero Cylinder
-// and a finding, so a report can show it beside the rest.
+// the result carries failed bore and rod choices (Chosen 0, OK false), a
+// zero Cylinder and a finding (with the buckling warning when no standard
+// rod passes the buckling check), so a report can show it beside the rest.
 //
 // The result's findings include the load-holding cautions: a load the stroke
 // raises (its weight along the path exceeding its friction) would drive the
@@ -281,7 +306,11 @@ func (d Duty) Size() (CylinderSize, error) {
 	if err := d.validate(fn); err != nil {
 		return CylinderSize{}, err
 	}
-	r := CylinderSize{Forces: d.forces()}
+	forces, err := d.loads(fn)
+	if err != nil {
+		return CylinderSize{}, err
+	}
+	r := CylinderSize{Forces: forces}
 	r.SealEfficiency, r.SealRule = d.efficiency()
 	r.AreaRatio, r.AreaRatioRule = d.ratio()
 	if d.Buckling != nil {
@@ -296,73 +325,101 @@ func (d Duty) Size() (CylinderSize, error) {
 	}
 	bores, rods := boresOr(d.Bores), rodsOr(d.Rods)
 	r.Bore = components.Choice[units.Length]{Required: minBore, Series: bores.Name(), Rule: bores.Rule()}
-	need := total / units.Force(r.SealEfficiency)
-	found := false
+	found, tried := false, false
+	var why components.Findings // why the last bore tried had no rod
 	for b := range bores.All() {
 		if b < minBore {
 			continue
 		}
-		c, rod, bk, ok := d.tryBore(b, rods, r.AreaRatio)
+		f, ok := d.tryBore(b, rods, r.AreaRatio)
 		if !ok {
-			r.Rod = rod
+			r.Rod, why = f.rod, f.why
 			continue
 		}
-		p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+		p, err := d.needs(f.cyl, total, r.SealEfficiency)
 		if err != nil {
 			return CylinderSize{}, rename(err, fn)
 		}
-		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling = b, rod, c, bk
+		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling, why = b, f.rod, f.cyl, f.bk, nil
 		r.Pressure = components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
+		tried = true
 		if found = r.Pressure.OK(); found {
 			break
 		}
 	}
 	if !found {
-		r.Bore.Chosen, r.Cylinder, r.Buckling = 0, Cylinder{}, nil
-		r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, need)
+		r.Bore.Chosen, r.Rod.Chosen, r.Cylinder, r.Buckling = 0, 0, Cylinder{}, nil
+		if !tried {
+			r.Pressure = d.largestNeeds(bores.Largest(), r.AreaRatio, total, r.SealEfficiency)
+		}
 	} else if d.Speed > 0 {
 		r.Flow = d.Speed.TimesArea(r.Cylinder.Area(d.Direction))
 		if d.Action == DoubleActing {
 			r.ReturnFlow = d.Speed.TimesArea(r.Cylinder.OutletArea(d.Direction))
 		}
+		if err := finite(fn, output{"Flow", float64(r.Flow)}, output{"ReturnFlow", float64(r.ReturnFlow)}); err != nil {
+			return CylinderSize{}, err
+		}
 	}
-	r.Findings = d.findings(r, bores)
+	r.Findings = d.findings(r, bores, why)
 	return r, nil
+}
+
+// needs returns the inlet pressure cylinder c needs for total force f with
+// seal efficiency eta: p = (F + p_back·A_out)/(η·A_in).
+func (d Duty) needs(c Cylinder, f units.Force, eta float64) (units.Pressure, error) {
+	const fn = "actuator.Duty.Size"
+	p, err := c.PressureFor(d.Direction, f, d.BackPressure)
+	if err != nil {
+		return 0, err
+	}
+	return validate.Checked(fn, "p", p/units.Pressure(eta))
 }
 
 // largestNeeds returns the failed pressure check of a duty no standard size
 // meets: the pressure the largest bore would need with a rod of exactly the
 // least area ratio.
-func (d Duty) largestNeeds(bore units.Length, phi float64, need units.Force) components.Check[units.Pressure] {
+func (d Duty) largestNeeds(bore units.Length, phi float64, f units.Force, eta float64) components.Check[units.Pressure] {
 	c := Cylinder{Bore: bore, Rod: bore * units.Length(math.Sqrt(1-1/phi)), Stroke: d.Stroke, Ends: d.Ends}
-	p, err := c.PressureFor(d.Direction, need, d.BackPressure)
+	p, err := d.needs(c, f, eta)
 	if err != nil {
 		p = units.Pressure(math.MaxFloat64) // beyond any finite limit: still a failed check
 	}
 	return components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
 }
 
+// fit is a bore with the rod chosen for it: the cylinder, the rod choice,
+// the buckling check when one was asked for, and, when no rod fits the
+// bore, the findings that say why.
+type fit struct {
+	cyl Cylinder
+	rod components.Choice[units.Length]
+	bk  *BucklingCheck
+	why components.Findings
+}
+
 // tryBore picks the rod for bore b: the smallest standard rod giving at
 // least area ratio phi and, when d.Buckling is set, passing the buckling
-// check. ok is false when no standard rod below the bore does.
-func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (Cylinder, components.Choice[units.Length], *BucklingCheck, bool) {
+// check. ok is false when no standard rod below the bore does; the fit's
+// rod then has Chosen 0.
+func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (fit, bool) {
 	c := Cylinder{Bore: b, Stroke: d.Stroke, Ends: d.Ends, Action: d.Action}
 	least := b * units.Length(math.Sqrt(1-1/phi))
 	rod, err := rods.Select(least)
 	if err != nil || !rod.OK() || rod.Chosen >= b {
 		rod.Chosen = 0
-		return Cylinder{}, rod, nil, false
+		return fit{rod: rod}, false
 	}
 	c.Rod = rod.Chosen
 	if d.Buckling == nil {
-		return c, rod, nil, true
+		return fit{cyl: c, rod: rod}, true
 	}
 	col := *d.Buckling
 	col.Cylinder = c
 	bk, err := col.MinimumRod(rods)
 	if err != nil || !bk.Rod.OK() || bk.Rod.Chosen >= b {
-		rod.Chosen = 0
-		return Cylinder{}, rod, nil, false
+		bk.Rod.Chosen = 0
+		return fit{rod: bk.Rod, why: bk.Findings}, false
 	}
 	if bk.Rod.Chosen > rod.Chosen {
 		rod = bk.Rod
@@ -371,13 +428,16 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 	col.Cylinder = c
 	chk, err := col.Check()
 	if err != nil {
-		return Cylinder{}, rod, nil, false
+		rod.Chosen = 0
+		return fit{rod: rod}, false
 	}
-	return c, rod, &chk, true
+	return fit{cyl: c, rod: rod, bk: &chk}, true
 }
 
-// findings gathers the cautions and design notes of a sizing.
-func (d Duty) findings(r CylinderSize, bores components.Series[units.Length]) components.Findings {
+// findings gathers the cautions and design notes of a sizing; why says why
+// the last bore tried had no rod (a buckling warning), when that is why no
+// size was chosen.
+func (d Duty) findings(r CylinderSize, bores components.Series[units.Length], why components.Findings) components.Findings {
 	var fs components.Findings
 	if f, ok := d.holding(r.Forces); ok {
 		fs = append(fs, f)
@@ -400,6 +460,9 @@ func (d Duty) findings(r CylinderSize, bores components.Series[units.Length]) co
 	}
 	if r.Buckling != nil {
 		fs = fs.Merge(r.Buckling.Findings...)
+	}
+	if r.Bore.Chosen == 0 {
+		fs = fs.Merge(why...)
 	}
 	return fs
 }

@@ -75,10 +75,11 @@ func TestSizePush(t *testing.T) {
 }
 
 // TestSizePullStepsUp: 50 kN pull at 200 bar, 5 bar on the cap side, least
-// area ratio 2. A₁ = 50 kN/(0.9·(100 bar − 5 bar)) → D = 86.29 mm → 90 mm,
-// whose least rod 63.6 mm rounds up to 70 mm and needs 233.7 bar; 100 mm
-// (rod 80 mm) needs 210.4 bar; 110 mm (rod 80 mm) needs 134.71 bar and is
-// chosen, a second-choice size (hand arithmetic [X]).
+// area ratio 2. A₁ = 50 kN/(0.9·100 bar − 5 bar) → D = 86.54 mm → 90 mm,
+// whose least rod 63.6 mm rounds up to 70 mm and needs
+// (50 kN + 5 bar·A₁)/(0.9·A₂) = 235.1 bar; 100 mm (rod 80 mm) needs
+// 211.9 bar; 110 mm (rod 80 mm) needs 135.89 bar and is chosen, a
+// second-choice size (hand arithmetic [X]).
 func TestSizePullStepsUp(t *testing.T) {
 	d := Duty{Direction: Retract, Force: 50 * units.Kilonewton, Pressure: 200 * units.Bar,
 		BackPressure: 5 * units.Bar, AreaRatio: 2, Stroke: 300 * mm}
@@ -86,11 +87,11 @@ func TestSizePullStepsUp(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Bore.Required, 86.29*mm, 1e-4) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 80*mm {
-		t.Errorf("Bore %+v, Rod %+v; want 86.29 mm → 110 mm with an 80 mm rod", r.Bore, r.Rod)
+	if !near(r.Bore.Required, 86.5427*mm, 1e-5) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 80*mm {
+		t.Errorf("Bore %+v, Rod %+v; want 86.54 mm → 110 mm with an 80 mm rod", r.Bore, r.Rod)
 	}
-	if !near(r.Pressure.Value, 134.711*units.Bar, 1e-5) || !r.Pressure.OK() {
-		t.Errorf("Pressure = %+v; want 134.7 bar", r.Pressure)
+	if !near(r.Pressure.Value, 135.8908*units.Bar, 1e-5) || !r.Pressure.OK() {
+		t.Errorf("Pressure = %+v; want 135.89 bar", r.Pressure)
 	}
 	if len(r.Findings.Topic("actuator.second-choice-bore")) != 1 {
 		t.Errorf("findings %v; want the second-choice notice for 110 mm", r.Findings)
@@ -101,6 +102,33 @@ func TestSizePullStepsUp(t *testing.T) {
 	r, _ = d.Size()
 	if !near(r.Flow, 26.861*units.LitrePerMinute, 1e-4) || !near(r.ReturnFlow, 57.020*units.LitrePerMinute, 1e-4) {
 		t.Errorf("flows %v, %v; want 26.86 and 57.02 L/min", r.Flow, r.ReturnFlow)
+	}
+}
+
+// TestSizeSealFrictionAndBackPressure: seal friction takes its share of the
+// driving force p·A_in and never helps against the back pressure, which
+// opposes the motion in full: η·p·A_in − p_b·A_out ≥ F (common-practice
+// friction allowance on the inlet force; force balance [X]). 100 kN push
+// at 160 bar against 40 bar of meter-out back pressure, φ ≥ 1.25:
+// A₁ = 100 kN/(0.9·160 bar − 40 bar/1.25) = 8.929·10⁻³ m², D = 106.62 mm
+// → 110 mm, rod ≥ 49.19 mm → 50 mm; that cylinder needs
+// (100 kN + 40 bar·A₂)/(0.9·A₁) = 152.18 bar (hand arithmetic [X]).
+func TestSizeSealFrictionAndBackPressure(t *testing.T) {
+	d := Duty{Force: 100 * units.Kilonewton, Pressure: 160 * units.Bar, BackPressure: 40 * units.Bar, Stroke: 500 * mm}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Bore.Required, 106.6218*mm, 1e-6) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 50*mm {
+		t.Errorf("bore %+v, rod %+v; want 106.62 mm → 110 mm with a 50 mm rod", r.Bore, r.Rod)
+	}
+	if !near(r.Pressure.Value, 152.17994*units.Bar, 1e-6) {
+		t.Errorf("pressure %v; want 152.18 bar", r.Pressure.Value)
+	}
+	c := r.Cylinder
+	net := float64(r.Pressure.Value.TimesArea(c.CapArea()))*r.SealEfficiency - float64(d.BackPressure.TimesArea(c.AnnulusArea()))
+	if !near(net, float64(d.Force), 1e-12) {
+		t.Errorf("at the pressure it needs the chosen cylinder gives η·p·A₁ − p_b·A₂ = %v N; want %v", net, d.Force)
 	}
 }
 
@@ -118,8 +146,8 @@ func TestSizeRoundTrip(t *testing.T) {
 					t.Errorf("%v %v %v: %+v, %v", f, dir, ends, r.Bore, err)
 					continue
 				}
-				got, err := r.Cylinder.Force(dir, d.Pressure, d.BackPressure)
-				if err != nil || float64(got)*r.SealEfficiency < float64(r.Forces.Total())*(1-1e-12) {
+				got := delivered(r.Cylinder, dir, d.Pressure, d.BackPressure, r.SealEfficiency)
+				if got < r.Forces.Total()*(1-1e-12) {
 					t.Errorf("%v %v %v: the chosen %+v gives %v after friction, want ≥ %v", f, dir, ends, r.Cylinder, got, r.Forces.Total())
 				}
 				if !r.Pressure.OK() || r.Bore.Chosen < r.Bore.Required {
@@ -135,7 +163,7 @@ func TestSizeRoundTrip(t *testing.T) {
 				if lower.Rod >= b {
 					continue
 				}
-				if low, _ := lower.Force(dir, d.Pressure, d.BackPressure); float64(low)*r.SealEfficiency >= float64(r.Forces.Total()) {
+				if low := delivered(lower, dir, d.Pressure, d.BackPressure, r.SealEfficiency); low >= r.Forces.Total() {
 					t.Errorf("%v %v %v: the smaller bore %v would do (%v)", f, dir, ends, b, low)
 				}
 			}
@@ -195,6 +223,28 @@ func TestSizeBeyondSeries(t *testing.T) {
 	// 20 MN/0.9/(π/4·0.5²) = 1131.8 bar.
 	if !near(r.Pressure.Value, 1131.77*units.Bar, 1e-4) {
 		t.Errorf("largest bore needs %v; want 1131.8 bar", r.Pressure.Value)
+	}
+}
+
+// TestSizeNoBoreNoRod: the minimum bore, 499 mm, is within ISO 3320, but
+// the 500 mm bore with the 360 mm rod its least area ratio 2 asks for needs
+// 880 kN/(0.9·π/4·(0.5² − 0.36²)) = 114.9 bar for the pull, more than the
+// 100 bar available (hand arithmetic [X]): no cylinder is chosen, so no rod
+// is chosen either.
+func TestSizeNoBoreNoRod(t *testing.T) {
+	d := Duty{Direction: Retract, Force: 880 * units.Kilonewton, Pressure: 100 * units.Bar, AreaRatio: 2, Stroke: 1}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if !near(r.Bore.Required, 499.0*mm, 1e-3) || r.Bore.Chosen != 0 || r.Cylinder != (Cylinder{}) {
+		t.Errorf("bore %+v, cylinder %+v; want 499 mm required and none chosen", r.Bore, r.Cylinder)
+	}
+	if r.Rod.Chosen != 0 || r.Rod.OK() {
+		t.Errorf("rod %+v; want no rod chosen when no bore is", r.Rod)
+	}
+	if r.Pressure.OK() || len(r.Findings.Topic("actuator.no-standard-size")) != 1 {
+		t.Errorf("pressure %+v, findings %v; want a failed check and the no-standard-size notice", r.Pressure, r.Findings)
 	}
 }
 
@@ -314,4 +364,10 @@ func TestSizeLandsOnISO3320(t *testing.T) {
 			t.Errorf("%v mm: second-choice notice %v; want %v", b, got, second[b])
 		}
 	}
+}
+
+// delivered is the force at the rod after seal friction, η·p·A_in −
+// p_b·A_out, written out here from the areas (the force balance [X]).
+func delivered(c Cylinder, dir Direction, p, back units.Pressure, eta float64) units.Force {
+	return p.TimesArea(c.Area(dir))*units.Force(eta) - back.TimesArea(c.OutletArea(dir))
 }

@@ -149,11 +149,12 @@ func (o OilSpring) k(c1, c2 column, x float64) float64 {
 // [OilSpring.Stiffness]. The mass of oil in long lines, referred to the
 // piston, adds to m and lowers f; it is not included.
 func (o OilSpring) NaturalFrequency(x units.Length) (units.Frequency, error) {
-	k, err := o.at("actuator.OilSpring.NaturalFrequency", x)
+	const fn = "actuator.OilSpring.NaturalFrequency"
+	k, err := o.at(fn, x)
 	if err != nil {
 		return 0, err
 	}
-	return frequency(k, float64(o.Mass)), nil
+	return validate.Checked(fn, "f", frequency(k, float64(o.Mass)))
 }
 
 func frequency(k, m float64) units.Frequency {
@@ -197,7 +198,9 @@ func (o OilSpring) Lowest() (Resonance, error) {
 	if err := validate.Result(fn, "k", r.Stiffness); err != nil {
 		return Resonance{}, err
 	}
-	r.Frequency = frequency(float64(r.Stiffness), float64(o.Mass))
+	if r.Frequency, err = validate.Checked(fn, "Frequency", frequency(float64(r.Stiffness), float64(o.Mass))); err != nil {
+		return Resonance{}, err
+	}
 	n, rule := o.RampFactor, components.CallerRule("OilSpring.RampFactor")
 	if n == 0 {
 		n, rule = DefaultRampFactor, components.PracticeRule("ramp time at least 18/ω₀, about three natural periods")
