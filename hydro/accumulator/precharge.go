@@ -157,7 +157,8 @@ func (c Charging) Recommend() (Precharge, error) {
 // 8:1 for a diaphragm, common practice). A failed check carries a caution.
 // A fill at or above Min is a failed check, not an error: it is a design
 // question. The Charging must be valid as for Recommend, and fill finite
-// and > 0.
+// and > 0; a charge or ratio that overflows is an error naming precharge
+// or Ratio.
 func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 	const fn = "accumulator.Charging.Check"
 	if err := c.validate(fn); err != nil {
@@ -195,7 +196,11 @@ func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, erro
 			c.Hottest, hot, c.Min))
 	}
 	if lim := c.Kind.maxRatio(); lim > 0 {
-		p.Ratio = components.Within(float64(c.Max/cold), lim,
+		ratio, err := validate.Checked(fn, "Ratio", float64(c.Max/cold))
+		if err != nil {
+			return Precharge{}, err
+		}
+		p.Ratio = components.Within(ratio, lim,
 			components.PracticeRule(c.Kind.String()+" accumulator: maximum pressure at most "+strconv.FormatFloat(lim, 'g', -1, 64)+" × the precharge"))
 		if !p.Ratio.OK() {
 			p.Findings = p.Findings.Merge(components.NewFinding(components.Caution, components.NoHazard, "accumulator.precharge-cold", p.Ratio.Rule,

@@ -79,6 +79,8 @@ func TestPrechargeBadInput(t *testing.T) {
 		{"check fill", second(ok.Check(0)), "fill"},
 		{"at p", second(PrechargeAt(0, 300, 300)), "p"},
 		{"at to", second(PrechargeAt(1e6, 300, 0)), "to"},
+		// Max over the coldest charge overflows: an error, not an +Inf check.
+		{"ratio", bad(func(c *Charging) { c.Min, c.Max = 1e-300, 1e300 }), "Ratio"},
 	} {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
 	}

@@ -123,6 +123,10 @@ func TestBudgetBadInput(t *testing.T) {
 		{"source", []Phase{{Duration: 1, Loads: []Load{ok, {Power: 1}}}}, "phases[0].Loads[1].Source"},
 		{"power", []Phase{{Duration: 1, Loads: []Load{{Source: FromOther, Power: -1}}}}, "phases[0].Loads[0].Power"},
 		{"over input", []Phase{{Duration: 1, Input: 50, Loads: []Load{ok}}}, "phases[0].Loads"},
+		// A cycle longer than a time.Duration holds (the total wrapped
+		// negative) and an input energy that overflows.
+		{"too long", []Phase{{Duration: math.MaxInt64/2 + 1, Loads: []Load{ok}}, {Duration: math.MaxInt64/2 + 1, Loads: []Load{ok}}}, "phases[1].Duration"},
+		{"input overflows", []Phase{{Duration: 2 * time.Second, Input: math.MaxFloat64, Loads: []Load{ok}}}, "Input"},
 	} {
 		t.Run(c.name, func(t *testing.T) { _, err := Budget(c.phases); checktest.RangeError(t, err, c.param) })
 	}
