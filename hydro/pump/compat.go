@@ -221,18 +221,23 @@ func (p Pump) throughCenter(c Circuit) (components.Finding, error) {
 		return components.NewFinding(components.Caution, components.HotSurface, "pump.open-center-load-sensing", heatRule,
 			"a load-sensing pump needs closed-center load-sensing valves: through this %v center it senses no load and passes up to %v to tank at %v or more, about %v of heat",
 			c.Center.String(), pt.Flow, pt.Pressure, pt.Shaft), nil
-	case c.CenterDrop == 0:
-		return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
-			"with every valve centred the pump's %v passes to tank through the %v center; give the center's P→T pressure drop to quote its heat",
-			pt.Flow, c.Center.String()), nil
 	case p.Control == PressureCompensated:
 		st, err := p.Standby()
 		if err != nil {
 			return components.Finding{}, err
 		}
+		if c.CenterDrop == 0 {
+			return components.NewFinding(components.Caution, components.NoHazard, "pump.open-center-compensated", heatRule,
+				"the %v center keeps the pressure-compensated pump at full stroke: its %v passes to tank and the compensator never acts (give the center's P→T pressure drop to quote the heat); a closed-center valve would let it stroke back to about %v",
+				c.Center.String(), pt.Flow, st.Shaft), nil
+		}
 		return components.NewFinding(components.Caution, components.NoHazard, "pump.open-center-compensated", heatRule,
 			"the %v center keeps the pressure-compensated pump at full stroke: its %v passes to tank at %v, about %v of heat, and the compensator never acts; a closed-center valve would let it stroke back to about %v",
 			c.Center.String(), pt.Flow, pt.Pressure, pt.Shaft, st.Shaft), nil
+	case c.CenterDrop == 0:
+		return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
+			"with every valve centred the pump's %v passes to tank through the %v center; give the center's P→T pressure drop to quote its heat",
+			pt.Flow, c.Center.String()), nil
 	}
 	return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
 		"with every valve centred the pump's %v passes to tank through the %v center at %v: about %v of heat",

@@ -224,3 +224,19 @@ func TestCompatibilityOverflow(t *testing.T) {
 		}
 	}
 }
+
+// An open center keeps a compensated pump at full stroke whether or not
+// the caller knows the center's drop: without it the finding still says
+// so (a Caution), and only the heat is left out.
+func TestCompatibilityOpenCenterCompensatedNoDrop(t *testing.T) {
+	fs, err := compensated().Compatibility(Circuit{Center: valve.OpenCenter, Relief: 220 * units.Bar})
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := finding(t, fs, "pump.open-center-compensated")
+	if f.Severity != components.Caution {
+		t.Errorf("open center on a compensated pump, drop unknown: %v", f)
+	}
+	// It still quotes what the pump would cost on standby behind a closed center.
+	near(t, "standby on a closed center", power(t, f), 200e5*45e-6*1450/60*0.05/0.92, 1e-14)
+}
