@@ -32,8 +32,7 @@ func rename(err error, fn string) error {
 
 // prefixed returns err with prefix put before the parameter it names
 // ("Column." + "Relief"), built only when there is an error. A parameter
-// that is not a field (the lower-case "rod" of EffectiveLengthFactor) is
-// left as it is.
+// that is not a field (a lower-case parameter) is left as it is.
 func prefixed(err error, prefix string) error {
 	if err == nil {
 		return nil

@@ -1,6 +1,8 @@
 package drive
 
 import (
+	"math"
+	"strings"
 	"testing"
 	"time"
 
@@ -76,4 +78,29 @@ func TestSelectMotorBadInput(t *testing.T) {
 	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Speed")
 	_, err = SelectMotor(MotorNeed{Duty: d, Speed: 25, Breakdown: 1})
 	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Breakdown")
+}
+
+// A Duty built by hand rather than by Cycle: every power it carries must be
+// finite and ≥ 0, and the checks' limits finite; the error names the field
+// and SelectMotor, never a helper.
+func TestSelectMotorHandBuiltDuty(t *testing.T) {
+	d, _ := Cycle(workedCycle())
+	for param, mut := range map[string]func(*MotorNeed){
+		"Duty.Peak":    func(n *MotorNeed) { n.Duty.Peak = units.Power(math.Inf(1)) },
+		"Duty.Average": func(n *MotorNeed) { n.Duty.Average = units.Power(math.NaN()) },
+		"Duty.RMS":     func(n *MotorNeed) { n.Duty.RMS = units.Power(math.NaN()) },
+		"Duty.Peak ":   func(n *MotorNeed) { n.Duty.Peak = -1 },
+		// A speed so low that the rated torque overflows.
+		"RatedTorque": func(n *MotorNeed) { n.Speed = 5e-324 },
+		// A breakdown multiple so large that the torque limit overflows.
+		"Torque.Limit": func(n *MotorNeed) { n.Breakdown = math.MaxFloat64 },
+	} {
+		n := MotorNeed{Duty: d, Speed: 1455 * units.RevolutionPerMinute, Breakdown: 2.5}
+		mut(&n)
+		m, err := SelectMotor(n)
+		checktest.RangeErrorIn(t, err, "drive.SelectMotor", strings.TrimSpace(param))
+		if m.Rating.Required != 0 || m.Findings != nil {
+			t.Errorf("%s: %+v beside the error; want the zero Motor", param, m)
+		}
+	}
 }

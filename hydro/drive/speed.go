@@ -49,11 +49,23 @@ func MotorSpeeds(poles int, mains units.Frequency, slip *float64) (Speeds, error
 
 // rename returns err with its function renamed to fn when it is a range
 // error from a helper, so the caller sees the function it called.
-func rename(err error, fn string) error {
+func rename(err error, fn string) error { return asParam(err, fn, "") }
+
+// asParam returns err with its function renamed to fn and, unless param is
+// empty, its parameter to param, when it is a range error from a helper:
+// the caller sees the function it called and the argument or field it
+// passed. A nil err stays nil.
+func asParam(err error, fn, param string) error {
+	if err == nil {
+		return nil // before re is declared: errors.As makes it escape, and the success path allocates nothing
+	}
 	var re *units.RangeError
 	if errors.As(err, &re) {
 		c := *re
 		c.Func = fn
+		if param != "" {
+			c.Param = param
+		}
 		return &c
 	}
 	return err

@@ -55,7 +55,8 @@ var heatRule = components.PhysicsRule("energy balance: throttled flow turns Δp�
 // The pump must pass [Pump.Validate]; the circuit needs a valid Center, a
 // Relief > 0, a CenterDrop ≥ 0, and for each demand a Pressure ≥ 0 and a
 // Flow > 0; Series needs an open or tandem center. Errors match
-// units.ErrRange and name the field.
+// units.ErrRange and name the field; demands whose sums or heat overflow
+// fail with an error naming the finding's topic.
 func (p Pump) Compatibility(c Circuit) (components.Findings, error) {
 	const fn = "pump.Pump.Compatibility"
 	tr, err := p.checkCircuit(fn, c)
@@ -82,7 +83,34 @@ func (p Pump) Compatibility(c Circuit) (components.Findings, error) {
 	if err != nil {
 		return nil, err
 	}
-	return fs.Merge(moving...), nil
+	fs = fs.Merge(moving...)
+	if err := quoted(fn, fs); err != nil {
+		return nil, err
+	}
+	return fs, nil
+}
+
+// quoted checks that every quantity the findings quote is finite: with
+// every input finite, a sum of demands or a heat product can still
+// overflow. The error names the finding's topic as the result.
+func quoted(fn string, fs components.Findings) error {
+	for _, f := range fs {
+		for _, a := range f.Args() {
+			var err error
+			switch v := a.(type) {
+			case units.Pressure:
+				err = validate.Result(fn, f.Topic, v)
+			case units.Flow:
+				err = validate.Result(fn, f.Topic, v)
+			case units.Power:
+				err = validate.Result(fn, f.Topic, v)
+			}
+			if err != nil {
+				return err
+			}
+		}
+	}
+	return nil
 }
 
 func (p Pump) checkCircuit(fn string, c Circuit) (valve.CenterTraits, error) {
@@ -303,7 +331,10 @@ func (p Pump) inSeries(c Circuit) components.Findings {
 		sum)}
 }
 
-// sharing is several demands moving together on valves in parallel.
+// sharing is several demands moving together on valves in parallel. When
+// they ask more than the pump gives, the heat is taken on the flow it does
+// give, shared in proportion to the asks (as flow-sharing valves split
+// it), so the heat never exceeds the pump's hydraulic output.
 func (p Pump) sharing(c Circuit) (components.Findings, error) {
 	lo, hi := c.Demands[0], c.Demands[0]
 	var want units.Flow
@@ -341,9 +372,13 @@ func (p Pump) sharing(c Circuit) (components.Findings, error) {
 	if fixed && want < most {
 		supply = c.Relief // the surplus lifts the pump to the relief
 	}
+	share := 1.0 // the fraction of its ask each actuator gets
+	if want > most {
+		share = float64(most / want) // saturated: the pump's flow, shared in proportion to the asks
+	}
 	var heat units.Power
 	for _, d := range c.Demands {
-		heat += (supply - d.Pressure).TimesFlow(d.Flow)
+		heat += (supply - d.Pressure).TimesFlow(units.Flow(share * float64(d.Flow)))
 	}
 	if fixed && want < most {
 		heat += c.Relief.TimesFlow(most - want)

@@ -185,3 +185,42 @@ func TestCompatibilityBadInput(t *testing.T) {
 	_, err := (Pump{}).Compatibility(good)
 	checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", "Displacement")
 }
+
+// Saturated: two cylinders of a baling press ask 100 L/min each, at 50 and
+// 150 bar, of the fixed pump's 61.9875 L/min. The pump cannot give more
+// than it has, so the heat must close the energy balance on what it
+// delivers: pump output 150 bar × 61.9875 L/min = the loads' useful power
+// on their shares of that flow + the heat. With the flow shared in
+// proportion to the demands (each gets 61.9875/200 of its ask) that is
+// 15 496.9 − (50 + 150) bar × 30.99 L/min = 5165.6 W, where charging the
+// full 200 L/min asked would give 16 666.7 W, more than the pump delivers.
+func TestCompatibilitySaturatedHeat(t *testing.T) {
+	lpm := units.LitrePerMinute
+	c := Circuit{Center: valve.TandemCenter, Relief: 210 * units.Bar, CenterDrop: 5 * units.Bar, Together: true,
+		Demands: []Demand{{Name: "ram", Pressure: 50 * units.Bar, Flow: 100 * lpm}, {Name: "gate", Pressure: 150 * units.Bar, Flow: 100 * lpm}}}
+	fs, err := baler().Compatibility(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	finding(t, fs, "pump.saturated")
+	q := 61.9875 / 60000 // m³/s the pump delivers
+	share := q / 2       // each cylinder's share, 100/200 of it
+	want := 150e5*q - (50e5*share + 150e5*share)
+	near(t, "saturated heat by energy balance", power(t, finding(t, fs, "pump.sharing-heat")), units.Power(want), 1e-13)
+}
+
+// Demands whose sums or heat overflow, though each number is finite, are
+// an error, not a finding that quotes +Inf.
+func TestCompatibilityOverflow(t *testing.T) {
+	for topic, c := range map[string]Circuit{
+		"pump.series-stall": {Center: valve.TandemCenter, Relief: 2e7, Series: true, Together: true,
+			Demands: []Demand{{Pressure: 1e308, Flow: 1e-4}, {Pressure: 1e308, Flow: 1e-4}}},
+		"pump.saturated": {Center: valve.ClosedCenter, Relief: 2e7, Together: true,
+			Demands: []Demand{{Pressure: 1e5, Flow: 1e308}, {Pressure: 1e5, Flow: 1e308}}},
+	} {
+		fs, err := baler().Compatibility(c)
+		if checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", topic); fs != nil {
+			t.Errorf("%s: findings %v beside the error", topic, fs)
+		}
+	}
+}

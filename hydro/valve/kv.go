@@ -92,15 +92,15 @@ func (k Kv) Drop(q units.Flow, rho units.Density) (units.Pressure, error) {
 }
 
 // KvFor returns the coefficient a valve needs to pass flow q at pressure
-// drop dp in a fluid of density rho. q, dp and rho must be finite and > 0;
-// errors match units.ErrRange.
+// drop dp in a fluid of density rho. q, dp and rho must be finite and > 0,
+// and the coefficient finite; errors match units.ErrRange.
 func KvFor(q units.Flow, dp units.Pressure, rho units.Density) (Kv, error) {
 	const fn = "valve.KvFor"
 	a, err := OrificeArea(1, q, dp, rho)
 	if err != nil {
 		return 0, renamed(err, fn)
 	}
-	return Kv(float64(a / Kv(1).area())), nil
+	return validate.Checked(fn, "Kv", Kv(float64(a/Kv(1).area())))
 }
 
 // renamed returns err with its function renamed to fn when it is a range
