@@ -145,12 +145,20 @@ func TestCompatibilitySharing(t *testing.T) {
 	near(t, "fixed sharing heat", power(t, finding(t, fs, "pump.sharing-heat")), 210e5*61.9875/60000-(80e5*20+160e5*35)/60000, 1e-13)
 
 	// The same valves in series add their loads: 240 bar, above the relief.
+	// Stalled, the whole shaft power is heat: D·n·p/η_hm = 45 cm³ ×
+	// 1450/60 s⁻¹ × 210 bar / 0.92 = 24 823.37 W (by hand).
 	c.Series = true
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series-stall")
+	stall := finding(t, fs, "pump.series-stall")
+	if stall.Hazard != components.HotSurface {
+		t.Errorf("series stall hazard = %v; want hot surface", stall.Hazard)
+	}
+	near(t, "series stall heat", power(t, stall), 45e-6*1450/60*210e5/0.92, 1e-12)
+	// Moving at 80 + 100 = 180 bar the pump's own loss is shaft − p·Q =
+	// 45e-6 × 1450/60 × 180e5 × (1/0.92 − 0.95) = 2680.93 W (by hand).
 	c.Demands[1].Pressure = 100 * units.Bar
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series")
+	near(t, "series pump loss", power(t, finding(t, fs, "pump.series")), 45e-6*1450/60*180e5*(1/0.92-0.95), 1e-12)
 }
 
 func TestCompatibilityStall(t *testing.T) {
