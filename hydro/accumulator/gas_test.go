@@ -112,3 +112,17 @@ func TestGasLawBadInput(t *testing.T) {
 	t.Run("v0", func(t *testing.T) { _, err := ok.Delivered(-1); checktest.RangeError(t, err, "v0") })
 	t.Run("volumes", func(t *testing.T) { _, _, err := ok.Volumes(0); checktest.RangeError(t, err, "v0") })
 }
+
+// BenchmarkCycleSize sizes a mixed cycle (isothermal charge, adiabatic
+// discharge) for a range of volumes.
+func BenchmarkCycleSize(b *testing.B) {
+	c := Cycle{Precharge: 90 * bara, Min: 100 * bara, Max: 200 * bara, Charge: Isothermal, Discharge: Adiabatic}
+	dvs := [...]units.Volume{0.5e-3, 1e-3, 2.5e-3, 5e-3, 12e-3}
+	b.ReportAllocs()
+	var sink units.Volume
+	for i := 0; b.Loop(); i++ {
+		v, _ := c.Size(dvs[i%len(dvs)])
+		sink += v
+	}
+	_ = sink
+}

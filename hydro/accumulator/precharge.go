@@ -32,8 +32,12 @@ func PrechargeAt(p units.AbsolutePressure, from, to units.Temperature) (units.Ab
 	if err := validate.Positive(fn, "to", to); err != nil {
 		return 0, err
 	}
-	r := p * units.AbsolutePressure(to/from)
-	return validate.Checked(fn, "p", r)
+	return validate.Checked(fn, "p", atTemperature(p, from, to))
+}
+
+// atTemperature is Gay-Lussac's law, p·T₂/T₁, unchecked.
+func atTemperature(p units.AbsolutePressure, from, to units.Temperature) units.AbsolutePressure {
+	return p * units.AbsolutePressure(to/from)
 }
 
 // Kind is the construction of an accumulator, which limits how far its gas
@@ -173,7 +177,7 @@ func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 }
 
 func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, error) {
-	at := func(t units.Temperature) units.AbsolutePressure { return fill * units.AbsolutePressure(t/c.Fill) }
+	at := func(t units.Temperature) units.AbsolutePressure { return atTemperature(fill, c.Fill, t) }
 	p := Precharge{Fill: fill, Working: at(c.Working)}
 	for _, t := range []units.Temperature{c.Coldest, c.Fill, c.Working, c.Hottest} {
 		if !slices.ContainsFunc(p.Points, func(q PrechargePoint) bool { return q.Temperature == t }) {

@@ -107,16 +107,30 @@ func checkDuty(fn string, d Duty) error {
 	return nil
 }
 
-// basis says what sizing on the peak or on the average would have chosen.
+// basis says what sizing on the peak or on the average would have chosen,
+// naming only a basis that chooses differently from c.
 func basis(d Duty, ratings components.Series[units.Power], c components.Choice[units.Power]) components.Findings {
 	peak, _ := ratings.Select(d.Peak)
 	avg, _ := ratings.Select(max(d.Average, ratings.Smallest()))
-	if peak.Chosen == c.Chosen && avg.Chosen == c.Chosen {
-		return nil
+	onPeak, onAvg := peak.Chosen != c.Chosen, avg.Chosen != c.Chosen
+	note := func(format string, args ...any) components.Findings {
+		return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule, format, args...)}
 	}
-	return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule,
-		"this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
-		d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)}
+	switch {
+	case onPeak && !peak.OK():
+		return note("this cycle peaks at %v and heats the motor like a steady %v: no rating of %v reaches the peak, but %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, ratings.Name(), c.Chosen)
+	case onPeak && onAvg:
+		return note("this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)
+	case onPeak:
+		return note("this cycle peaks at %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized); %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, peak.Chosen, c.Chosen)
+	case onAvg:
+		return note("this cycle averages %v but heats the motor like a steady %v: sized on the average it would take %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Average, d.RMS, avg.Chosen, c.Chosen)
+	}
+	return nil
 }
 
 // torque returns P/(2π·n) (units.Power.PerSpeed), or an error naming the

@@ -145,12 +145,20 @@ func TestCompatibilitySharing(t *testing.T) {
 	near(t, "fixed sharing heat", power(t, finding(t, fs, "pump.sharing-heat")), 210e5*61.9875/60000-(80e5*20+160e5*35)/60000, 1e-13)
 
 	// The same valves in series add their loads: 240 bar, above the relief.
+	// Stalled, the whole shaft power is heat: D·n·p/η_hm = 45 cm³ ×
+	// 1450/60 s⁻¹ × 210 bar / 0.92 = 24 823.37 W (by hand).
 	c.Series = true
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series-stall")
+	stall := finding(t, fs, "pump.series-stall")
+	if stall.Hazard != components.HotSurface {
+		t.Errorf("series stall hazard = %v; want hot surface", stall.Hazard)
+	}
+	near(t, "series stall heat", power(t, stall), 45e-6*1450/60*210e5/0.92, 1e-12)
+	// Moving at 80 + 100 = 180 bar the pump's own loss is shaft − p·Q =
+	// 45e-6 × 1450/60 × 180e5 × (1/0.92 − 0.95) = 2680.93 W (by hand).
 	c.Demands[1].Pressure = 100 * units.Bar
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series")
+	near(t, "series pump loss", power(t, finding(t, fs, "pump.series")), 45e-6*1450/60*180e5*(1/0.92-0.95), 1e-12)
 }
 
 func TestCompatibilityStall(t *testing.T) {
@@ -223,4 +231,20 @@ func TestCompatibilityOverflow(t *testing.T) {
 			t.Errorf("%s: findings %v beside the error", topic, fs)
 		}
 	}
+}
+
+// An open center keeps a compensated pump at full stroke whether or not
+// the caller knows the center's drop: without it the finding still says
+// so (a Caution), and only the heat is left out.
+func TestCompatibilityOpenCenterCompensatedNoDrop(t *testing.T) {
+	fs, err := compensated().Compatibility(Circuit{Center: valve.OpenCenter, Relief: 220 * units.Bar})
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := finding(t, fs, "pump.open-center-compensated")
+	if f.Severity != components.Caution {
+		t.Errorf("open center on a compensated pump, drop unknown: %v", f)
+	}
+	// It still quotes what the pump would cost on standby behind a closed center.
+	near(t, "standby on a closed center", power(t, f), 200e5*45e-6*1450/60*0.05/0.92, 1e-14)
 }

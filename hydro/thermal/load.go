@@ -51,7 +51,7 @@ var energyRule = components.PhysicsRule("energy balance: power not delivered as 
 // input P_in = p·Q/η, heat P_in − p·Q = p·Q·(1/η − 1). All of it is counted
 // into the oil (a pump's case is cooled mostly by its drain flow); the
 // electric motor's own losses go to the air and are not counted. p and q
-// must be finite and ≥ 0, overall in (0, 1].
+// must be finite and ≥ 0, overall in [0.001, 1].
 func PumpLoss(name string, p units.Pressure, q units.Flow, overall float64) (Load, error) {
 	const fn = "thermal.PumpLoss"
 	hyd, err := hydraulic(fn, p, q)
@@ -70,7 +70,7 @@ func PumpLoss(name string, p units.Pressure, q units.Flow, overall float64) (Loa
 
 // MotorLoss returns the heat a hydraulic motor (or cylinder) makes taking
 // flow q across pressure difference dp with overall efficiency overall:
-// Δp·Q·(1 − η). dp and q must be finite and ≥ 0, overall in (0, 1].
+// Δp·Q·(1 − η). dp and q must be finite and ≥ 0, overall in [0.001, 1].
 func MotorLoss(name string, dp units.Pressure, q units.Flow, overall float64) (Load, error) {
 	const fn = "thermal.MotorLoss"
 	hyd, err := hydraulic(fn, dp, q)

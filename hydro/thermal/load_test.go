@@ -144,3 +144,21 @@ func TestBudgetBadInput(t *testing.T) {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
 	}
 }
+
+// BenchmarkBudget totals a two-phase cycle of five loads.
+func BenchmarkBudget(b *testing.B) {
+	q := 60 * units.LitrePerMinute
+	pump, _ := PumpLoss("pump", 210*units.Bar, q, 0.85)
+	valve, _ := Throttling("flow control", 40*units.Bar, q)
+	lines, _ := LineLoss("lines", 8*units.Bar, q)
+	ram, _ := MotorLoss("ram", 162*units.Bar, q, 0.95)
+	relief, _ := ReliefFlow("relief", 210*units.Bar, q)
+	phases := []Phase{{Name: "press", Duration: 20 * time.Second, Loads: []Load{pump, valve, lines, ram}},
+		{Name: "dwell", Duration: 40 * time.Second, Loads: []Load{pump, relief}}}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Budget(phases); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -146,3 +146,21 @@ func TestTransientBadInput(t *testing.T) {
 		checktest.RangeErrorIn(t, bad(func(l *Lumped) { l.Fluid = fluid.Fluid{} }), "thermal.Lumped.Response", "Fluid.Density15")
 	})
 }
+
+// BenchmarkLumpedAt evaluates the warm-up of the demo unit at a spread of
+// times (fluid properties at the mean temperature each call).
+func BenchmarkLumpedAt(b *testing.B) {
+	oil, err := fluid.Typical(fluid.HM, fluid.VG46)
+	if err != nil {
+		b.Fatal(err)
+	}
+	l := Lumped{Fluid: oil, Oil: 250 * units.Litre, Steel: 300, Dissipation: 45, Ambient: celsius(25), Load: 2 * units.Kilowatt}
+	start := celsius(20)
+	b.ReportAllocs()
+	var sink units.Temperature
+	for i := 0; b.Loop(); i++ {
+		t, _ := l.At(start, time.Duration(i%600)*time.Minute)
+		sink += t
+	}
+	_ = sink
+}
