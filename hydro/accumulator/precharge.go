@@ -149,8 +149,11 @@ func (c Charging) Recommend() (Precharge, error) {
 		return Precharge{}, err
 	}
 	p, err := c.check(fn, fill)
+	if err != nil {
+		return Precharge{}, err
+	}
 	p.Rule = components.PracticeRule("precharge about 0.9 × the minimum working pressure at the working gas temperature")
-	return p, err
+	return p, nil
 }
 
 // Check returns how a precharge fill, set at the fill temperature, fares:
@@ -172,8 +175,11 @@ func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 		return Precharge{}, err
 	}
 	p, err := c.check(fn, fill)
+	if err != nil {
+		return Precharge{}, err
+	}
 	p.Rule = components.CallerRule("fill")
-	return p, err
+	return p, nil
 }
 
 func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, error) {

@@ -64,7 +64,7 @@ func SelectMotor(need MotorNeed) (Motor, error) {
 	required := max(d.RMS, units.Power(float64(d.Peak)/need.Breakdown))
 	c, err := ratings.Select(required)
 	if err != nil {
-		return Motor{}, asParam(err, fn, "Duty")
+		return Motor{}, validate.Renamed(err, fn, validate.Param("Duty"))
 	}
 	m := Motor{Rating: c}
 	if m.RatedTorque, err = torque(fn, "RatedTorque", c.Chosen, need.Speed); err != nil {
@@ -137,5 +137,5 @@ func basis(d Duty, ratings components.Series[units.Power], c components.Choice[u
 // result name of fn when the quotient overflows.
 func torque(fn, name string, p units.Power, n units.RotationalSpeed) (units.Torque, error) {
 	t, err := p.PerSpeed(n)
-	return t, asParam(err, fn, name)
+	return t, validate.Renamed(err, fn, validate.Param(name))
 }

@@ -33,3 +33,13 @@ func Fields(prefix string, names map[string]string) func(string) string {
 		return prefix + p
 	}
 }
+
+// Param returns a param mapping for Renamed that names every parameter
+// name: a helper's error reported under the caller's own argument or field.
+// An empty name keeps the helper's parameter.
+func Param(name string) func(string) string {
+	if name == "" {
+		return nil
+	}
+	return func(string) string { return name }
+}
