@@ -1,9 +1,11 @@
 package fluid
 
 import (
+	"errors"
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -80,9 +82,9 @@ func TestFluidBadInput(t *testing.T) {
 	wantRangeError(t, err, "Density15")
 	_, err = CragoeSpecificHeat(2, celsius(40))
 	wantRangeError(t, err, "sg")
-	g := f // a model FromDataSheet would refuse, set inside the package
-	g.thermal.C40 = -5
-	_, err = g.SpecificHeat(celsius(40))
+	g := f                 // a model FromDataSheet would refuse, set inside the package
+	g.thermal.CSlope = -50 // c < 0 at 200 °C
+	_, err = g.SpecificHeat(celsius(200))
 	wantRangeError(t, err, "c")
 	_, err = Fluid{}.BulkModulus(IsothermalTangent, celsius(40), 0)
 	wantRangeError(t, err, "Bulk.K0")
@@ -90,3 +92,44 @@ func TestFluidBadInput(t *testing.T) {
 		t.Error("Class.String")
 	}
 }
+
+// TestFluidErrorsNameTheMethod: a Fluid method that hands its work to
+// another function (Viscosity to Curve.At, Grade to GradeOf, VI to
+// ViscosityIndex) reports its own name and the fluid's field, so a caller
+// reads the function it called.
+func TestFluidErrorsNameTheMethod(t *testing.T) {
+	f, _ := Typical(HM, VG46)
+	between, err := FromDataSheet(DataSheet{Class: HM, V40: 40 * units.Centistokes, VI: 100, Density15: 870})
+	if err != nil {
+		t.Fatal(err)
+	}
+	thin, err := FromDataSheet(DataSheet{Class: HM, V40: 3 * units.Centistokes, V100: 1.2 * units.Centistokes, Density15: 800})
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, c := range []struct {
+		fn, param string
+		err       error
+	}{
+		{"fluid.Fluid.Viscosity", "t", second(f.Viscosity(celsius(1500)))},
+		{"fluid.Fluid.Viscosity", "curve", second(Fluid{}.Viscosity(celsius(40)))},
+		{"fluid.Fluid.DynamicViscosity", "t", second(f.DynamicViscosity(celsius(1500), 0))},
+		{"fluid.Fluid.DynamicViscosity", "t", second(f.DynamicViscosity(celsius(-45), 0))}, // below the pour point
+		{"fluid.Fluid.DynamicViscosity", "p", second(f.DynamicViscosity(celsius(40), -2*units.Bar))},
+		{"fluid.Fluid.Grade", "V40", second(between.Grade())},
+		{"fluid.Fluid.Grade", "V40", second(Fluid{}.Grade())},
+		{"fluid.Fluid.VI", "V100", second(thin.VI())},
+		{"fluid.Fluid.VI", "V40", second(Fluid{}.VI())},
+		{"fluid.Fluid.SpecificHeat", "Thermal.C40", second(Fluid{}.SpecificHeat(celsius(40)))},
+		{"fluid.Fluid.ThermalConductivity", "Thermal.K40", second(Fluid{}.ThermalConductivity(celsius(40)))},
+		{"fluid.CurveFromVI", "v40", second(CurveFromVI(1*units.Centistokes, 100))},
+		{"fluid.CurveFromVI", "vi", second(CurveFromVI(46*units.Centistokes, 1e6))},
+	} {
+		checktest.RangeErrorIn(t, c.err, c.fn, c.param)
+	}
+	if _, err := between.Grade(); !errors.Is(err, ErrNoGrade) {
+		t.Errorf("Grade of a fluid between grades: %v does not match ErrNoGrade", err)
+	}
+}
+
+func second[T any](_ T, err error) error { return err }

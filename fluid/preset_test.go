@@ -85,6 +85,15 @@ func TestFromDataSheet(t *testing.T) {
 // Every bad data sheet gives the zero Fluid and an error from
 // fluid.FromDataSheet that names the DataSheet field, never a parameter of
 // the functions FromDataSheet calls (CurveThrough's v1, v2 or t2).
+// A VI printed beside V100 that agrees with them (ASTM D2270 example: U
+// 22.83, Y 5.05 → VI 156) is accepted.
+func TestFromDataSheetAgreeingVI(t *testing.T) {
+	d := DataSheet{Class: HM, V40: mm2s(22.83), V100: mm2s(5.05), VI: 156, Density15: 870}
+	if _, err := FromDataSheet(d); err != nil {
+		t.Errorf("FromDataSheet with VI 156 beside V40 22.83 and V100 5.05: %v", err)
+	}
+}
+
 func TestFromDataSheetBadInput(t *testing.T) {
 	ok := DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(6), Density15: 870}
 	with := func(change func(*DataSheet)) DataSheet { d := ok; change(&d); return d }
@@ -115,6 +124,10 @@ func TestFromDataSheetBadInput(t *testing.T) {
 		{"V100", with(func(d *DataSheet) { d.V100 = mm2s(-1) })},
 		{"V100", with(func(d *DataSheet) { d.V40, d.V100 = mm2s(46), mm2s(46*(1-1e-12)) })},
 		{"vi", with(func(d *DataSheet) { d.V100, d.VI = 0, math.NaN() })},
+		// A VI beside V100 must agree with them: ASTM D2270 example, U 22.83,
+		// Y 5.05 → VI 156; a sheet that says 150 contradicts itself.
+		{"VI", with(func(d *DataSheet) { d.V40, d.V100, d.VI = mm2s(22.83), mm2s(5.05), 150 })},
+		{"VI", with(func(d *DataSheet) { d.VI = math.NaN() })},
 	} {
 		f, err := FromDataSheet(c.d)
 		wantRangeError(t, err, c.param)

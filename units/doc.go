@@ -142,7 +142,9 @@
 // width and precision. A System chooses the unit of each type for reports:
 // Metric and USCustomary return the trade systems, and a caller adjusts its own
 // copy with the System's With methods (no caller can change the systems that
-// another gets). MarshalText writes text that UnmarshalText reads back to the
+// another gets). Where the trade writes one type in two units by purpose, a
+// System names a unit per purpose: USCustomary writes a piston speed in in/s
+// (FormatPistonSpeed) and a line velocity in ft/s (FormatLineVelocity). MarshalText writes text that UnmarshalText reads back to the
 // identical float64, so quantities travel through JSON, YAML and flags; it
 // refuses, with ErrRange, every value that UnmarshalText would refuse (NaN, ±Inf,
 // a temperature below absolute zero, an absolute pressure below vacuum), so

@@ -170,3 +170,15 @@ func ExampleParser() {
 	// 3000 psi
 	// true
 }
+
+// A log splitter's cylinder extends at 0.12 m/s while its pressure line
+// carries oil at 4.2 m/s: the US trade writes the first in in/s and the
+// second in ft/s.
+func ExampleSystem_FormatPistonSpeed() {
+	us := units.USCustomary()
+	fmt.Println(us.FormatPistonSpeed(0.12*units.MetrePerSecond), us.FormatLineVelocity(4.2*units.MetrePerSecond))
+	fmt.Println(units.Metric().FormatPistonSpeed(0.12 * units.MetrePerSecond))
+	// Output:
+	// 4.724 in/s 13.78 ft/s
+	// 0.12 m/s
+}

@@ -7,7 +7,12 @@ import "strconv"
 // USCustomary return the two trade systems; a caller adjusts its own copy
 // with the With methods, each of which returns a changed copy:
 //
-//	shop, err := units.USCustomary().WithVelocity("in/s") // piston speeds in in/s
+//	shop, err := units.USCustomary().WithVelocity("in/s") // every velocity in in/s
+//
+// Where the trade writes one type in two units by purpose, a System names a
+// unit per purpose: USCustomary writes a piston speed in in/s
+// (FormatPistonSpeed) and a line velocity in ft/s (FormatLineVelocity); a
+// purpose a System sets no unit for follows its unit for the type.
 //
 // A System is a value: copies are independent, and no caller can change the
 // systems another caller gets from Metric or USCustomary. Every unit it
@@ -17,7 +22,7 @@ import "strconv"
 type System struct {
 	name   string
 	digits int
-	units  [numSlots]uint16 // per type, 1 + the index in unitTable of its unit; 0 means the metric unit
+	units  [numSlots]uint16 // per type and purpose, 1 + the index in unitTable of its unit; 0 means the metric unit (for a purpose, the type's)
 }
 
 // Metric returns the metric trade system: bar, L/min, kN, mm, cm³/rev, kW,
@@ -25,7 +30,8 @@ type System struct {
 func Metric() System { return metricSystem }
 
 // USCustomary returns the US customary trade system: psi, gpm, lbf, in,
-// in³/rev, hp, °F, with four significant digits.
+// in³/rev, hp, °F, piston speeds in in/s and line velocities in ft/s, with
+// four significant digits.
 func USCustomary() System { return usCustomarySystem }
 
 // Name returns the label of s, such as "metric" or "US customary".
@@ -61,6 +67,15 @@ func (s *System) unit(slot, metric int) *unitDef {
 		return &unitTable[i-1]
 	}
 	return &unitTable[metric]
+}
+
+// purposeUnit returns the unit of the purpose slot, or, when s sets none,
+// the unit of the type's slot typeSlot (the metric unit when that is unset).
+func (s *System) purposeUnit(slot, typeSlot, metric int) *unitDef {
+	if i := s.units[slot]; i != 0 {
+		return &unitTable[i-1]
+	}
+	return s.unit(typeSlot, metric)
 }
 
 // with sets the unit of slot to the registered spelling for type t, for the

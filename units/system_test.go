@@ -159,3 +159,67 @@ func TestSystemWithRefuses(t *testing.T) {
 		t.Errorf("WithDigits(6): %v, %v", s.FormatPressure(1234.5678*PSI), err)
 	}
 }
+
+// TestSystemPurposes: the US trade writes a cylinder's speed in in/s and a
+// line's velocity in ft/s; metric writes both in m/s. A purpose a System
+// sets no unit for follows the type's unit.
+func TestSystemPurposes(t *testing.T) {
+	piston, line := Velocity(0.1), Velocity(4.5) // 0.1 m/s = 3.937 in/s; 4.5 m/s = 14.76 ft/s
+	us, metric := USCustomary(), Metric()
+	for _, c := range []struct {
+		name, got, want string
+	}{
+		{"US piston", us.FormatPistonSpeed(piston), "3.937 in/s"},
+		{"US line", us.FormatLineVelocity(line), "14.76 ft/s"},
+		{"US velocity", us.FormatVelocity(line), "14.76 ft/s"},
+		{"metric piston", metric.FormatPistonSpeed(piston), "0.1 m/s"},
+		{"metric line", metric.FormatLineVelocity(line), "4.5 m/s"},
+		{"zero System piston", System{}.FormatPistonSpeed(piston), "0.1 m/s"},
+		{"US piston unit", us.PistonSpeedUnit(), "in/s"},
+		{"US line unit", us.LineVelocityUnit(), "ft/s"},
+		{"metric piston unit", metric.PistonSpeedUnit(), "m/s"},
+	} {
+		if c.got != c.want {
+			t.Errorf("%s = %q, want %q", c.name, c.got, c.want)
+		}
+	}
+	// Setting a purpose changes only that purpose; an unset purpose follows
+	// the type.
+	shop, err := metric.WithPistonSpeed("mm/s")
+	if err != nil || shop.FormatPistonSpeed(piston) != "100 mm/s" || shop.FormatLineVelocity(line) != "4.5 m/s" {
+		t.Errorf("metric with piston speeds in mm/s: %q, %q, %v", shop.FormatPistonSpeed(piston), shop.FormatLineVelocity(line), err)
+	}
+	fps, err := metric.WithVelocity("ft/s")
+	if err != nil || fps.FormatPistonSpeed(piston) != "0.3281 ft/s" {
+		t.Errorf("metric with velocities in ft/s: piston %q, %v", fps.FormatPistonSpeed(piston), err)
+	}
+	if mps, _ := us.WithVelocity("m/s"); mps.FormatPistonSpeed(piston) != "3.937 in/s" {
+		t.Errorf("US with velocities in m/s: piston %q, want it still in in/s", mps.FormatPistonSpeed(piston))
+	}
+	if metric.FormatPistonSpeed(piston) != "0.1 m/s" {
+		t.Error("WithPistonSpeed changed the system it was called on")
+	}
+	for _, bad := range []struct {
+		unit string
+		want error
+	}{{"bar", ErrDimension}, {"furlong/s", ErrUnknownUnit}} {
+		s, err := us.WithLineVelocity(bad.unit)
+		if !errors.Is(err, bad.want) || s.Name() != "" {
+			t.Errorf("WithLineVelocity(%q) = %v, %v; want the zero System and %v", bad.unit, s.Name(), err, bad.want)
+		}
+	}
+	buf := make([]byte, 0, 64)
+	if n := testing.AllocsPerRun(100, func() { sinkBytes = us.AppendPistonSpeed(buf[:0], piston) }); n != 0 {
+		t.Errorf("AppendPistonSpeed: %v allocs, want 0", n)
+	}
+	// Each purpose reads back through ParseVelocity, to the four significant
+	// digits written.
+	for _, c := range []struct {
+		s    string
+		want Velocity
+	}{{us.FormatPistonSpeed(piston), piston}, {us.FormatLineVelocity(line), line}} {
+		if v, err := ParseVelocity(c.s); err != nil || math.Abs(float64(v-c.want)) > 5e-4*float64(c.want) {
+			t.Errorf("ParseVelocity(%q) = %v, %v; want %v", c.s, v, err, c.want)
+		}
+	}
+}

@@ -2,7 +2,7 @@
 
 package units
 
-// Slots of System.units, one per quantity type.
+// Slots of System.units, one per quantity type, then one per purpose.
 const (
 	slotLength = iota
 	slotArea
@@ -29,6 +29,8 @@ const (
 	slotStiffness
 	slotFrequency
 	slotAcceleration
+	slotPistonSpeed
+	slotLineVelocity
 	numSlots
 )
 
@@ -88,6 +90,8 @@ var usCustomarySystem = System{name: "US customary", digits: 4, units: [numSlots
 	slotStiffness:               120 + 1, // lbf/in
 	slotFrequency:               121 + 1, // Hz
 	slotAcceleration:            125 + 1, // ft/s²
+	slotPistonSpeed:             65 + 1,  // in/s
+	slotLineVelocity:            64 + 1,  // ft/s
 }}
 
 // AppendLength appends q in the system's unit for Length to b.
@@ -306,6 +310,58 @@ func (s System) VelocityUnit() string { return s.unit(slotVelocity, metricVeloci
 // registered spelling of a unit of velocity.
 func (s System) WithVelocity(unit string) (System, error) {
 	return s.with(slotVelocity, "units.System.WithVelocity", unit, &typeVelocity)
+}
+
+// AppendPistonSpeed appends q, the speed of a cylinder's piston and rod, to b in the system's unit for
+// that purpose (in/s in USCustomary), or in its unit for Velocity
+// where it sets none. It does not allocate when b has room.
+func (s System) AppendPistonSpeed(b []byte, q Velocity) []byte {
+	return appendIn(b, float64(q), s.purposeUnit(slotPistonSpeed, slotVelocity, metricVelocity), s.Digits())
+}
+
+// FormatPistonSpeed formats q, the speed of a cylinder's piston and rod, as AppendPistonSpeed does.
+func (s System) FormatPistonSpeed(q Velocity) string {
+	var buf [40]byte
+	return string(s.AppendPistonSpeed(buf[:0], q))
+}
+
+// PistonSpeedUnit returns the spelling of the unit s writes the speed of a cylinder's piston and rod in.
+func (s System) PistonSpeedUnit() string {
+	return s.purposeUnit(slotPistonSpeed, slotVelocity, metricVelocity).sym
+}
+
+// WithPistonSpeed returns a copy of s that writes the speed of a cylinder's piston and rod in the
+// registered unit spelled unit; s itself is not changed. It fails,
+// returning the zero System, when unit is not a registered spelling of a
+// unit of velocity.
+func (s System) WithPistonSpeed(unit string) (System, error) {
+	return s.with(slotPistonSpeed, "units.System.WithPistonSpeed", unit, &typeVelocity)
+}
+
+// AppendLineVelocity appends q, the mean velocity of the oil in a line, to b in the system's unit for
+// that purpose (ft/s in USCustomary), or in its unit for Velocity
+// where it sets none. It does not allocate when b has room.
+func (s System) AppendLineVelocity(b []byte, q Velocity) []byte {
+	return appendIn(b, float64(q), s.purposeUnit(slotLineVelocity, slotVelocity, metricVelocity), s.Digits())
+}
+
+// FormatLineVelocity formats q, the mean velocity of the oil in a line, as AppendLineVelocity does.
+func (s System) FormatLineVelocity(q Velocity) string {
+	var buf [40]byte
+	return string(s.AppendLineVelocity(buf[:0], q))
+}
+
+// LineVelocityUnit returns the spelling of the unit s writes the mean velocity of the oil in a line in.
+func (s System) LineVelocityUnit() string {
+	return s.purposeUnit(slotLineVelocity, slotVelocity, metricVelocity).sym
+}
+
+// WithLineVelocity returns a copy of s that writes the mean velocity of the oil in a line in the
+// registered unit spelled unit; s itself is not changed. It fails,
+// returning the zero System, when unit is not a registered spelling of a
+// unit of velocity.
+func (s System) WithLineVelocity(unit string) (System, error) {
+	return s.with(slotLineVelocity, "units.System.WithLineVelocity", unit, &typeVelocity)
 }
 
 // AppendDisplacement appends q in the system's unit for Displacement to b.

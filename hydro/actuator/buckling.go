@@ -196,7 +196,9 @@ func (c Column) validateFields(fn string) error {
 			return err
 		}
 	} else if _, err := EffectiveLengthFactor(c.Body, c.RodEnd); err != nil {
-		return rename(err, fn) // names "rod": the rod end does not suit the body
+		return &units.RangeError{Func: fn, Param: "RodEnd", Value: c.RodEnd.String(),
+			Valid: "pinned and guided or fixed and guided with a " + c.Body.String() +
+				" mount (a pinned body with a free rod end swings), or K set"}
 	}
 	if c.Factor != 0 {
 		return validate.InRange(fn, "Factor", c.Factor, 1, 100)
@@ -319,7 +321,7 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	}
 	ch, err := rods.Select(least)
 	if err != nil {
-		return RodChoice{}, rename(err, fn)
+		return RodChoice{}, validate.Renamed(err, fn, nil)
 	}
 	r := RodChoice{Rod: ch}
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {

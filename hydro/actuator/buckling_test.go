@@ -292,7 +292,7 @@ func TestColumnBadInput(t *testing.T) {
 		{"Column.Factor", func(c *Column) { c.Factor = 0.5 }},
 		{"Column.Body", func(c *Column) { c.Body = 9 }},
 		{"Column.RodEnd", func(c *Column) { c.RodEnd = 9 }},
-		{"rod", func(c *Column) { c.RodEnd = RodFree }}, // clevis body with a free rod end
+		{"Column.RodEnd", func(c *Column) { c.RodEnd = RodFree }}, // clevis body with a free rod end: the field, not EffectiveLengthFactor's "rod"
 	} {
 		c := balerColumn()
 		w.edit(&c)

@@ -34,7 +34,7 @@ type Motion struct {
 //	s_a = v²/(2a), s_d = v²/(2d); if s_a + s_d ≤ s: t = v/a + (s − s_a − s_d)/v + v/d
 //	otherwise (triangular): v_p = √(2·s·a·d/(a + d)), t = v_p/a + v_p/d
 //
-// (kinematics of uniform acceleration [X]). Errors match units.ErrRange and
+// (the kinematics of uniform acceleration from rest). Errors match units.ErrRange and
 // name the field.
 func (p Profile) Time() (Motion, error) {
 	const fn = "actuator.Profile.Time"
@@ -164,7 +164,7 @@ type CushionCheck struct {
 //
 //	a = v²/(2·L),  p_c = (m·a + p_drive·A_in + F_assist) / A_c
 //
-// (a force balance at uniform deceleration [X]), checked against
+// (Newton's second law at uniform deceleration), checked against
 // Cylinder.Rating, which must be set (> 0). A cushion that stops the mass
 // evenly holds this average; real cushions peak above it, so treat a result
 // near the rating as over it. Above the rating the result carries a warning

@@ -237,6 +237,17 @@ func TestIntensification(t *testing.T) {
 	checktest.RangeError(t, err, "Cylinder.Rating")
 }
 
+// An inlet pressure so small that the outlet over it overflows: the
+// ratio is an error, not +Inf beside nil. 5e-324 Pa at the inlet and an
+// overrunning 1 kN put about 255 kPa on the annulus.
+func TestIntensificationRatioOverflow(t *testing.T) {
+	c := Cylinder{Bore: 100 * mm, Rod: 70 * mm, Stroke: 1, Rating: 250 * units.Bar}
+	r, err := c.Intensification(Extend, 5e-324, -1e3)
+	if checktest.RangeErrorIn(t, err, "actuator.Cylinder.Intensification", "Ratio"); r.Pressure != 0 || r.Findings != nil {
+		t.Errorf("Intensification = %+v beside the error; want the zero value", r)
+	}
+}
+
 func TestCylinderBadInput(t *testing.T) {
 	good := Cylinder{Bore: 50 * mm, Rod: 28 * mm, Stroke: 200 * mm}
 	nan := math.NaN()

@@ -296,13 +296,16 @@ func TestDutyBadInput(t *testing.T) {
 		{"Duty.Action", func(d *Duty) { d.Action = 3 }},
 		{"Duty.Direction", func(d *Duty) { d.Action, d.Direction = SingleActing, Retract }},
 		{"Duty.Buckling.Yield", func(d *Duty) { d.Buckling = &Column{Retracted: 1, Relief: 1} }},
+		{"Duty.Buckling.RodEnd", func(d *Duty) {
+			d.Buckling = &Column{Body: Trunnion, RodEnd: RodFree, Retracted: 1, Relief: 1, Yield: 1}
+		}},
 	} {
 		d := ok
 		d.Direction = Retract // the pull stroke, so a large back pressure leaves no net force
 		w.edit(&d)
 		_, err := d.Size()
 		checktest.RangeErrorIn(t, err, "actuator.Duty.Size", w.param)
-		if w.param == "Duty.Buckling.Yield" {
+		if w.param == "Duty.Buckling.Yield" || w.param == "Duty.Buckling.RodEnd" {
 			continue
 		}
 		_, err = d.MinimumBore()

@@ -134,7 +134,7 @@ func TestNextRating(t *testing.T) {
 		}
 	}
 	_, err := NextIEC(0)
-	checktest.RangeError(t, err, "required")
+	checktest.RangeErrorIn(t, err, "drive.NextIEC", "p")
 }
 
 // Synchronous speed n = 120·f/p (IEC 60034-1 and every machines text): 4
@@ -194,5 +194,18 @@ func workedCycle() []Phase {
 		{Name: "press", Duration: 2 * time.Second, Power: 30 * kW, Efficiency: 0.85},
 		{Name: "return", Duration: 8 * time.Second, Power: 10 * kW, Efficiency: 0.85},
 		{Name: "dwell", Duration: 10 * time.Second, Power: 2 * kW, Efficiency: 0.85},
+	}
+}
+
+// The rating selections name the function the caller called and its
+// parameter, not the series helper they use.
+func TestNextRatingBadInput(t *testing.T) {
+	for _, p := range []units.Power{0, -1, units.Power(math.NaN()), units.Power(math.Inf(1))} {
+		ch, err := NextIEC(p)
+		if checktest.RangeErrorIn(t, err, "drive.NextIEC", "p"); ch.Required != 0 {
+			t.Errorf("NextIEC(%v) = %+v beside the error", p, ch)
+		}
+		_, err = NextNEMA(p)
+		checktest.RangeErrorIn(t, err, "drive.NextNEMA", "p")
 	}
 }

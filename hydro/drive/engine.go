@@ -112,8 +112,9 @@ type EngineLoad struct {
 // engine is limited by the power it can give at each instant, not by an
 // RMS heating load. A shortfall is a failed check with a Caution finding
 // (the engine lugs down and may stall, and the pump's flow falls with its
-// speed), not an error. shaft must be finite and ≥ 0, n within the curve;
-// errors match units.ErrRange. Load allocates only when it returns a
+// speed), not an error. shaft must be finite and ≥ 0, n within the curve,
+// and the results (Required, PumpSpeed > 0, the torques) finite; errors
+// match units.ErrRange and name the argument, field or result. Load allocates only when it returns a
 // finding or fails.
 func (e Engine) Load(shaft units.Power, n units.RotationalSpeed) (EngineLoad, error) {
 	const fn = "drive.Engine.Load"
@@ -127,13 +128,20 @@ func (e Engine) Load(shaft units.Power, n units.RotationalSpeed) (EngineLoad, er
 	if err != nil {
 		return EngineLoad{}, err
 	}
-	l := EngineLoad{EngineSpeed: n, PumpSpeed: units.RotationalSpeed(float64(n) * e.Ratio),
-		Required: units.Power(float64(shaft) / e.Efficiency), Available: avail}
-	if err := validate.Result(fn, "PumpSpeed", l.PumpSpeed); err != nil {
+	l := EngineLoad{EngineSpeed: n, PumpSpeed: units.RotationalSpeed(float64(n) * e.Ratio), Available: avail}
+	if l.PumpSpeed <= 0 || validate.Result(fn, "PumpSpeed", l.PumpSpeed) != nil {
+		return EngineLoad{}, validate.Fail(fn, "PumpSpeed", l.PumpSpeed, "a finite result > 0 (Ratio too extreme)")
+	}
+	if l.Required, err = validate.Checked(fn, "Required", units.Power(float64(shaft)/e.Efficiency)); err != nil {
+		return EngineLoad{}, err
+	}
+	if l.EngineTorque, err = torque(fn, "EngineTorque", l.Required, n); err != nil {
+		return EngineLoad{}, err
+	}
+	if l.PumpTorque, err = torque(fn, "PumpTorque", shaft, l.PumpSpeed); err != nil {
 		return EngineLoad{}, err
 	}
 	l.Power = components.Within(l.Required, avail, components.CallerRule("engine power curve"))
-	l.EngineTorque, l.PumpTorque = torque(l.Required, n), torque(shaft, l.PumpSpeed)
 	if !l.Power.OK() {
 		l.Findings = components.Findings{components.NewFinding(components.Caution, components.NoHazard, "drive.engine-short",
 			components.CallerRule("engine power curve"),

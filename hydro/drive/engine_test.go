@@ -1,6 +1,7 @@
 package drive
 
 import (
+	"math"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -76,4 +77,29 @@ func TestEngineBadInput(t *testing.T) {
 	}
 	_, err := skidderEngine().Load(-1, 2000*rpm)
 	checktest.RangeErrorIn(t, err, "drive.Engine.Load", "shaft")
+}
+
+// Results that would overflow are errors, not infinite or silently zero
+// values: a shaft power so large that the engine's share overflows, a PTO
+// ratio so small that the pump's torque overflows, and one that takes the
+// pump's speed to zero.
+func TestEngineLoadExtremes(t *testing.T) {
+	rpm := units.RevolutionPerMinute
+	e := skidderEngine()
+	e.Efficiency = 0.5
+	l, err := e.Load(math.MaxFloat64, 2000*rpm)
+	if checktest.RangeErrorIn(t, err, "drive.Engine.Load", "Required"); l.Required != 0 || l.Findings != nil {
+		t.Errorf("overflowing load: %+v beside the error", l)
+	}
+	e = skidderEngine()
+	e.Ratio = 5e-324
+	l, err = e.Load(35e3, 2000*rpm)
+	if checktest.RangeErrorIn(t, err, "drive.Engine.Load", "PumpTorque"); l.PumpTorque != 0 {
+		t.Errorf("overflowing pump torque: %+v beside the error", l)
+	}
+	e.Curve = []CurvePoint{{0.1, 1e3}, {0.4, 2e3}} // rev/s: 0.2 × 5e-324 rounds to 0
+	l, err = e.Load(1e3, 0.2)
+	if checktest.RangeErrorIn(t, err, "drive.Engine.Load", "PumpSpeed"); l.PumpSpeed != 0 {
+		t.Errorf("pump speed of zero: %+v beside the error", l)
+	}
 }

@@ -40,14 +40,16 @@ type Motor struct {
 // Breakdown × P_rated/n. The result says what sizing on the peak power
 // (oversized) or on the average (overheats) would have chosen instead. A
 // duty beyond the largest rating is not an error: the choice comes back
-// with Chosen 0, failed checks and a finding. need.Duty must come from
-// Cycle (Period > 0), Speed be finite and > 0, Breakdown finite and > 1;
-// errors match units.ErrRange and name the field.
+// with Chosen 0, failed checks and a finding. need.Duty should come from
+// Cycle; one built by hand needs finite powers ≥ 0, a Period > 0 and an
+// RMS > 0. Speed must be finite and > 0, Breakdown finite and > 1; a
+// torque that overflows is an error too. Errors match units.ErrRange and
+// name the field.
 func SelectMotor(need MotorNeed) (Motor, error) {
 	const fn = "drive.SelectMotor"
 	d := need.Duty
-	if d.Period <= 0 || d.RMS <= 0 {
-		return Motor{}, &units.RangeError{Func: fn, Param: "Duty", Value: "a cycle with no load", Valid: "a Duty from Cycle that draws power"}
+	if err := checkDuty(fn, d); err != nil {
+		return Motor{}, err
 	}
 	if err := validate.Positive(fn, "Speed", need.Speed); err != nil {
 		return Motor{}, err
@@ -62,12 +64,21 @@ func SelectMotor(need MotorNeed) (Motor, error) {
 	required := max(d.RMS, units.Power(float64(d.Peak)/need.Breakdown))
 	c, err := ratings.Select(required)
 	if err != nil {
+		return Motor{}, validate.Renamed(err, fn, validate.Param("Duty"))
+	}
+	m := Motor{Rating: c}
+	if m.RatedTorque, err = torque(fn, "RatedTorque", c.Chosen, need.Speed); err != nil {
 		return Motor{}, err
 	}
-	m := Motor{Rating: c,
-		RatedTorque: torque(c.Chosen, need.Speed), PeakTorque: torque(d.Peak, need.Speed)}
+	if m.PeakTorque, err = torque(fn, "PeakTorque", d.Peak, need.Speed); err != nil {
+		return Motor{}, err
+	}
+	limit, err := validate.Checked(fn, "Torque.Limit", units.Torque(need.Breakdown*float64(m.RatedTorque)))
+	if err != nil {
+		return Motor{}, err
+	}
 	m.Thermal = components.Within(d.RMS, c.Chosen, d.RMSRule)
-	m.Torque = components.Within(m.PeakTorque, units.Torque(need.Breakdown*float64(m.RatedTorque)), components.CallerRule("Breakdown"))
+	m.Torque = components.Within(m.PeakTorque, limit, components.CallerRule("Breakdown"))
 	if !c.OK() {
 		m.Findings = components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.beyond-ratings",
 			ratings.Rule(), "no rating of %v reaches the %v this cycle needs: split the drive or take a larger motor series",
@@ -78,20 +89,53 @@ func SelectMotor(need MotorNeed) (Motor, error) {
 	return m, nil
 }
 
-// basis says what sizing on the peak or on the average would have chosen.
+// checkDuty checks a Duty, which a caller may have built by hand: its
+// powers finite and ≥ 0, and a period and an RMS load above zero.
+func checkDuty(fn string, d Duty) error {
+	if err := validate.NonNegative(fn, "Duty.Peak", d.Peak); err != nil {
+		return err
+	}
+	if err := validate.NonNegative(fn, "Duty.Average", d.Average); err != nil {
+		return err
+	}
+	if err := validate.NonNegative(fn, "Duty.RMS", d.RMS); err != nil {
+		return err
+	}
+	if d.Period <= 0 || d.RMS <= 0 {
+		return &units.RangeError{Func: fn, Param: "Duty", Value: "a cycle with no load", Valid: "a Duty from Cycle that draws power"}
+	}
+	return nil
+}
+
+// basis says what sizing on the peak or on the average would have chosen,
+// naming only a basis that chooses differently from c.
 func basis(d Duty, ratings components.Series[units.Power], c components.Choice[units.Power]) components.Findings {
 	peak, _ := ratings.Select(d.Peak)
 	avg, _ := ratings.Select(max(d.Average, ratings.Smallest()))
-	if peak.Chosen == c.Chosen && avg.Chosen == c.Chosen {
-		return nil
+	onPeak, onAvg := peak.Chosen != c.Chosen, avg.Chosen != c.Chosen
+	note := func(format string, args ...any) components.Findings {
+		return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule, format, args...)}
 	}
-	return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule,
-		"this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
-		d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)}
+	switch {
+	case onPeak && !peak.OK():
+		return note("this cycle peaks at %v and heats the motor like a steady %v: no rating of %v reaches the peak, but %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, ratings.Name(), c.Chosen)
+	case onPeak && onAvg:
+		return note("this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)
+	case onPeak:
+		return note("this cycle peaks at %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized); %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, peak.Chosen, c.Chosen)
+	case onAvg:
+		return note("this cycle averages %v but heats the motor like a steady %v: sized on the average it would take %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Average, d.RMS, avg.Chosen, c.Chosen)
+	}
+	return nil
 }
 
-// torque returns P/(2π·n) for a speed already checked > 0.
-func torque(p units.Power, n units.RotationalSpeed) units.Torque {
-	t, _ := p.PerSpeed(n)
-	return t
+// torque returns P/(2π·n) (units.Power.PerSpeed), or an error naming the
+// result name of fn when the quotient overflows.
+func torque(fn, name string, p units.Power, n units.RotationalSpeed) (units.Torque, error) {
+	t, err := p.PerSpeed(n)
+	return t, validate.Renamed(err, fn, validate.Param(name))
 }

@@ -1,6 +1,9 @@
 package drive
 
 import (
+	"math"
+	"slices"
+	"strings"
 	"testing"
 	"time"
 
@@ -76,4 +79,73 @@ func TestSelectMotorBadInput(t *testing.T) {
 	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Speed")
 	_, err = SelectMotor(MotorNeed{Duty: d, Speed: 25, Breakdown: 1})
 	checktest.RangeErrorIn(t, err, "drive.SelectMotor", "Breakdown")
+}
+
+// A Duty built by hand rather than by Cycle: every power it carries must be
+// finite and ≥ 0, and the checks' limits finite; the error names the field
+// and SelectMotor, never a helper.
+func TestSelectMotorHandBuiltDuty(t *testing.T) {
+	d, _ := Cycle(workedCycle())
+	for param, mut := range map[string]func(*MotorNeed){
+		"Duty.Peak":    func(n *MotorNeed) { n.Duty.Peak = units.Power(math.Inf(1)) },
+		"Duty.Average": func(n *MotorNeed) { n.Duty.Average = units.Power(math.NaN()) },
+		"Duty.RMS":     func(n *MotorNeed) { n.Duty.RMS = units.Power(math.NaN()) },
+		"Duty.Peak ":   func(n *MotorNeed) { n.Duty.Peak = -1 },
+		// A speed so low that the rated torque overflows.
+		"RatedTorque": func(n *MotorNeed) { n.Speed = 5e-324 },
+		// A breakdown multiple so large that the torque limit overflows.
+		"Torque.Limit": func(n *MotorNeed) { n.Breakdown = math.MaxFloat64 },
+	} {
+		n := MotorNeed{Duty: d, Speed: 1455 * units.RevolutionPerMinute, Breakdown: 2.5}
+		mut(&n)
+		m, err := SelectMotor(n)
+		checktest.RangeErrorIn(t, err, "drive.SelectMotor", strings.TrimSpace(param))
+		if m.Rating.Required != 0 || m.Findings != nil {
+			t.Errorf("%s: %+v beside the error; want the zero Motor", param, m)
+		}
+	}
+}
+
+// The sizing-basis notice names only the basis that would choose
+// differently: it never calls the chosen motor oversized or overheating.
+//
+//   - 50 s at 6 kW and 1 s at 8 kW: RMS √((36·50 + 64)/51) = 6.05 kW and
+//     average 6.04 kW both take 7.5 kW; the 8 kW peak alone would take 11 kW.
+//   - 6 s at 2.2 kW and 4 s idle: RMS 2.2·√0.6 = 1.70 kW and the peak both
+//     take 2.2 kW; the 1.32 kW average alone would take 1.5 kW.
+//   - 100 s at 10 kW and 1 s at 400 kW, breakdown 2.5: the torque needs
+//     400/2.5 = 160 kW, and no IEC rating reaches the 400 kW peak itself.
+func TestSelectMotorBasisNamesOnlyTheDifference(t *testing.T) {
+	kW := units.Kilowatt
+	n := 1455 * units.RevolutionPerMinute
+	for _, c := range []struct {
+		name         string
+		phases       []Phase
+		chosen, want units.Power
+		say, never   string
+	}{
+		{"peak only", []Phase{{Duration: 50 * time.Second, Power: 6 * kW, Efficiency: 0.9}, {Duration: time.Second, Power: 8 * kW, Efficiency: 0.9}},
+			7.5 * kW, 11 * kW, "oversized", "overheat"},
+		{"average only", []Phase{{Duration: 6 * time.Second, Power: 2.2 * kW, Efficiency: 0.9}, {Duration: 4 * time.Second}},
+			2.2 * kW, 1.5 * kW, "overheat", "oversized"},
+		{"peak beyond the series", []Phase{{Duration: 100 * time.Second, Power: 10 * kW, Efficiency: 0.9}, {Duration: time.Second, Power: 400 * kW, Efficiency: 0.9}},
+			160 * kW, 160 * kW, "no rating", "oversized"},
+	} {
+		d, err := Cycle(c.phases)
+		if err != nil {
+			t.Fatal(err)
+		}
+		m, err := SelectMotor(MotorNeed{Duty: d, Speed: n, Breakdown: 2.5})
+		if err != nil || m.Rating.Chosen != c.chosen {
+			t.Fatalf("%s: %+v, %v; want %v", c.name, m.Rating, err, c.chosen)
+		}
+		f := m.Findings.Topic("drive.sizing-basis")
+		if len(f) != 1 {
+			t.Fatalf("%s: findings %v; want the sizing-basis notice", c.name, m.Findings)
+		}
+		text := f[0].Text(units.Metric())
+		if !strings.Contains(text, c.say) || strings.Contains(text, c.never) || !slices.Contains(f[0].Args(), any(c.want)) {
+			t.Errorf("%s: %q; want it to say %q of %v and never %q", c.name, text, c.say, c.want, c.never)
+		}
+	}
 }

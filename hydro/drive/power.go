@@ -51,11 +51,13 @@ func efficiency(fn, param string, eta float64) error {
 // false). p must be finite and > 0; the error matches units.ErrRange.
 // NextIEC allocates nothing.
 func NextIEC(p units.Power) (components.Choice[units.Power], error) {
-	return components.IECMotorRatings().Select(p)
+	c, err := components.IECMotorRatings().Select(p)
+	return c, validate.Renamed(err, "drive.NextIEC", validate.Param("p"))
 }
 
 // NextNEMA returns the smallest NEMA MG 1 horsepower rating at or above p
 // (components.NEMAMotorRatings, ½–500 hp), as [NextIEC] does.
 func NextNEMA(p units.Power) (components.Choice[units.Power], error) {
-	return components.NEMAMotorRatings().Select(p)
+	c, err := components.NEMAMotorRatings().Select(p)
+	return c, validate.Renamed(err, "drive.NextNEMA", validate.Param("p"))
 }

@@ -145,12 +145,20 @@ func TestCompatibilitySharing(t *testing.T) {
 	near(t, "fixed sharing heat", power(t, finding(t, fs, "pump.sharing-heat")), 210e5*61.9875/60000-(80e5*20+160e5*35)/60000, 1e-13)
 
 	// The same valves in series add their loads: 240 bar, above the relief.
+	// Stalled, the whole shaft power is heat: D·n·p/η_hm = 45 cm³ ×
+	// 1450/60 s⁻¹ × 210 bar / 0.92 = 24 823.37 W (by hand).
 	c.Series = true
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series-stall")
+	stall := finding(t, fs, "pump.series-stall")
+	if stall.Hazard != components.HotSurface {
+		t.Errorf("series stall hazard = %v; want hot surface", stall.Hazard)
+	}
+	near(t, "series stall heat", power(t, stall), 45e-6*1450/60*210e5/0.92, 1e-12)
+	// Moving at 80 + 100 = 180 bar the pump's own loss is shaft − p·Q =
+	// 45e-6 × 1450/60 × 180e5 × (1/0.92 − 0.95) = 2680.93 W (by hand).
 	c.Demands[1].Pressure = 100 * units.Bar
 	fs, _ = baler().Compatibility(c)
-	finding(t, fs, "pump.series")
+	near(t, "series pump loss", power(t, finding(t, fs, "pump.series")), 45e-6*1450/60*180e5*(1/0.92-0.95), 1e-12)
 }
 
 func TestCompatibilityStall(t *testing.T) {
@@ -184,4 +192,59 @@ func TestCompatibilityBadInput(t *testing.T) {
 	}
 	_, err := (Pump{}).Compatibility(good)
 	checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", "Displacement")
+}
+
+// Saturated: two cylinders of a baling press ask 100 L/min each, at 50 and
+// 150 bar, of the fixed pump's 61.9875 L/min. The pump cannot give more
+// than it has, so the heat must close the energy balance on what it
+// delivers: pump output 150 bar × 61.9875 L/min = the loads' useful power
+// on their shares of that flow + the heat. With the flow shared in
+// proportion to the demands (each gets 61.9875/200 of its ask) that is
+// 15 496.9 − (50 + 150) bar × 30.99 L/min = 5165.6 W, where charging the
+// full 200 L/min asked would give 16 666.7 W, more than the pump delivers.
+func TestCompatibilitySaturatedHeat(t *testing.T) {
+	lpm := units.LitrePerMinute
+	c := Circuit{Center: valve.TandemCenter, Relief: 210 * units.Bar, CenterDrop: 5 * units.Bar, Together: true,
+		Demands: []Demand{{Name: "ram", Pressure: 50 * units.Bar, Flow: 100 * lpm}, {Name: "gate", Pressure: 150 * units.Bar, Flow: 100 * lpm}}}
+	fs, err := baler().Compatibility(c)
+	if err != nil {
+		t.Fatal(err)
+	}
+	finding(t, fs, "pump.saturated")
+	q := 61.9875 / 60000 // m³/s the pump delivers
+	share := q / 2       // each cylinder's share, 100/200 of it
+	want := 150e5*q - (50e5*share + 150e5*share)
+	near(t, "saturated heat by energy balance", power(t, finding(t, fs, "pump.sharing-heat")), units.Power(want), 1e-13)
+}
+
+// Demands whose sums or heat overflow, though each number is finite, are
+// an error, not a finding that quotes +Inf.
+func TestCompatibilityOverflow(t *testing.T) {
+	for topic, c := range map[string]Circuit{
+		"pump.series-stall": {Center: valve.TandemCenter, Relief: 2e7, Series: true, Together: true,
+			Demands: []Demand{{Pressure: 1e308, Flow: 1e-4}, {Pressure: 1e308, Flow: 1e-4}}},
+		"pump.saturated": {Center: valve.ClosedCenter, Relief: 2e7, Together: true,
+			Demands: []Demand{{Pressure: 1e5, Flow: 1e308}, {Pressure: 1e5, Flow: 1e308}}},
+	} {
+		fs, err := baler().Compatibility(c)
+		if checktest.RangeErrorIn(t, err, "pump.Pump.Compatibility", topic); fs != nil {
+			t.Errorf("%s: findings %v beside the error", topic, fs)
+		}
+	}
+}
+
+// An open center keeps a compensated pump at full stroke whether or not
+// the caller knows the center's drop: without it the finding still says
+// so (a Caution), and only the heat is left out.
+func TestCompatibilityOpenCenterCompensatedNoDrop(t *testing.T) {
+	fs, err := compensated().Compatibility(Circuit{Center: valve.OpenCenter, Relief: 220 * units.Bar})
+	if err != nil {
+		t.Fatal(err)
+	}
+	f := finding(t, fs, "pump.open-center-compensated")
+	if f.Severity != components.Caution {
+		t.Errorf("open center on a compensated pump, drop unknown: %v", f)
+	}
+	// It still quotes what the pump would cost on standby behind a closed center.
+	near(t, "standby on a closed center", power(t, f), 200e5*45e-6*1450/60*0.05/0.92, 1e-14)
 }

@@ -14,12 +14,12 @@ import (
 // U.S. Standard Atmosphere, 1976): sea-level pressure and temperature, the
 // temperature lapse rate, and the constants of the barometric formula.
 const (
-	seaLevelPa    = 101325    // p₀, Pa
-	seaLevelK     = 288.15    // T₀, K
-	lapseKPerM    = 0.0065    // L, K/m: the temperature falls by 6.5 K per km
-	gravityMPerS2 = 9.80665   // g₀, m/s²
-	airMolarKg    = 0.0289644 // M, kg/mol
-	gasConstant   = 8.31432   // R*, J/(mol·K), the value the standard atmospheres use
+	seaLevelPa    = float64(units.StandardAtmosphere) // p₀ = 101 325 Pa
+	seaLevelK     = 288.15                            // T₀, K
+	lapseKPerM    = 0.0065                            // L, K/m: the temperature falls by 6.5 K per km
+	gravityMPerS2 = float64(units.StandardGravity)    // g₀ = 9.80665 m/s², the standard's and units' one value
+	airMolarKg    = 0.0289644                         // M, kg/mol
+	gasConstant   = 8.31432                           // R*, J/(mol·K), the value the standard atmospheres use
 )
 
 // Altitudes the troposphere formula accepts. The standard atmosphere is

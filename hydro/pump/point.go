@@ -171,6 +171,15 @@ func (p Pump) point(fn string, pr units.Pressure, qg units.Flow, deadheaded bool
 	if err := validate.Result(fn, "shaft power", pt.Shaft); err != nil {
 		return Point{}, err
 	}
+	if err := validate.Result(fn, "flow", pt.Flow); err != nil {
+		return Point{}, err
+	}
+	if err := validate.Result(fn, "torque", pt.Torque); err != nil {
+		return Point{}, err
+	}
+	if err := validate.Result(fn, "hydraulic power", pt.Hydraulic); err != nil {
+		return Point{}, err
+	}
 	return pt, nil
 }
 

@@ -183,7 +183,8 @@ func MechanicalEfficiency(overall, volumetric float64) (float64, error) {
 
 // DisplacementFor returns the displacement that delivers flow q at speed n
 // with volumetric efficiency volumetric: D = Q/(n·η_v). q and n must be
-// finite and > 0, volumetric in (0, 1]; errors match units.ErrRange.
+// finite and > 0, volumetric in (0, 1], and the displacement finite and
+// > 0 (not overflowed or underflowed); errors match units.ErrRange.
 func DisplacementFor(q units.Flow, n units.RotationalSpeed, volumetric float64) (units.Displacement, error) {
 	const fn = "pump.DisplacementFor"
 	if err := validate.Positive(fn, "q", q); err != nil {
@@ -197,10 +198,10 @@ func DisplacementFor(q units.Flow, n units.RotationalSpeed, volumetric float64) 
 	}
 	d, err := q.PerSpeed(n)
 	if err != nil {
-		return 0, err
+		return 0, validate.Renamed(err, fn, validate.Param("displacement"))
 	}
 	d = units.Displacement(float64(d) / volumetric)
-	if err := validate.Result(fn, "displacement", d); err != nil {
+	if err := validate.Positive(fn, "displacement", d); err != nil { // overflowed, or underflowed to 0
 		return 0, err
 	}
 	return d, nil
@@ -212,7 +213,7 @@ func (p Pump) geometric() units.Flow { return p.Displacement.TimesSpeed(p.Speed)
 // leakage returns the internal leakage at outlet pressure pr.
 func (p Pump) leakage(pr units.Pressure) units.Flow {
 	l := float64(p.geometric()) * (1 - p.Volumetric)
-	if p.LeakagePressure > 0 {
+	if l != 0 && p.LeakagePressure > 0 { // a lossless pump leaks nothing, even where pr/LeakagePressure overflows
 		l *= float64(pr / p.LeakagePressure)
 	}
 	return units.Flow(l)

@@ -339,3 +339,32 @@ func TestDisplacementForOverflow(t *testing.T) {
 		t.Errorf("DisplacementFor overflowing = %v, %v; want 0 and ErrRange", d, err)
 	}
 }
+
+// A displacement that overflows or underflows to zero is an error of
+// DisplacementFor (naming its result), not of a helper, and never 0 beside
+// nil.
+func TestDisplacementForExtremes(t *testing.T) {
+	for _, c := range []struct {
+		q units.Flow
+		n units.RotationalSpeed
+	}{{math.MaxFloat64, 0.5}, {1e-300, math.MaxFloat64}} {
+		d, err := DisplacementFor(c.q, c.n, 0.5)
+		if checktest.RangeErrorIn(t, err, "pump.DisplacementFor", "displacement"); d != 0 {
+			t.Errorf("DisplacementFor(%v, %v) = %v beside the error", c.q, c.n, d)
+		}
+	}
+}
+
+// A lossless pump (η_v = 1) leaks nothing at any pressure, however small
+// the LeakagePressure it was measured at: 0 × (p/p_L) is 0 even when p/p_L
+// overflows.
+func TestPumpLossless(t *testing.T) {
+	p := baler()
+	p.Volumetric, p.LeakagePressure = 1, 5e-324
+	pt, err := p.At(100 * units.Bar)
+	if err != nil {
+		t.Fatal(err)
+	}
+	near(t, "lossless flow", pt.Flow, 45e-6*1450/60, 1e-15)
+	near(t, "hydraulic power", pt.Hydraulic, 100e5*45e-6*1450/60, 1e-15)
+}

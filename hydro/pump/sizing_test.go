@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -109,6 +110,20 @@ func TestSizeBadInput(t *testing.T) {
 		var re *units.RangeError
 		if !errors.As(err, &re) || re.Func != "pump.Size" || s.RatedFlow != 0 {
 			t.Errorf("%s: Size = %+v, %v; want the zero Sizing and a RangeError from pump.Size", name, s, err)
+		}
+	}
+}
+
+// A duty whose displacement overflows or underflows to zero fails in Size's
+// own name, naming the result.
+func TestSizeExtremes(t *testing.T) {
+	for _, n := range []Need{
+		{Flow: 1e300, Pressure: 1e7, Speed: 1e-300, Volumetric: 0.5},
+		{Flow: 1e-300, Pressure: 1e7, Speed: math.MaxFloat64, Volumetric: 0.5},
+	} {
+		s, err := Size(n)
+		if checktest.RangeErrorIn(t, err, "pump.Size", "Displacement"); s.RatedFlow != 0 {
+			t.Errorf("Size(%+v) = %+v beside the error", n, s)
 		}
 	}
 }

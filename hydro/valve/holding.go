@@ -20,12 +20,13 @@ const DefaultCounterbalanceRatio = 1.3
 // the cap side (dir Retract, valve on the cap port, pilot from the annulus
 // line) gives 1/φ; holding it on the annulus (dir Extend, valve on the rod
 // port) gives φ; a double-rod cylinder 1. Use 1 for a hydraulic motor. The
-// cylinder must pass its Validate; the error matches units.ErrRange.
+// cylinder must pass its Validate and its areas give a finite ratio; the
+// error matches units.ErrRange.
 func Coupling(c actuator.Cylinder, dir actuator.Direction) (float64, error) {
 	if err := c.Validate(); err != nil {
-		return 0, renamed(err, "valve.Coupling")
+		return 0, validate.Renamed(err, "valve.Coupling", nil)
 	}
-	return float64(c.Area(dir) / c.OutletArea(dir)), nil
+	return validate.Checked("valve.Coupling", "coupling", float64(c.Area(dir)/c.OutletArea(dir)))
 }
 
 // pilotRule is the form the pilot pressures are computed by.

@@ -61,7 +61,10 @@ type Load struct {
 //     at the port: Warning (Burst) — a burst between them drops the load;
 //   - a load-holding valve behind a center that blocks its actuator ports
 //     (closed, tandem): Caution — trapped pilot pressure can hold it open,
-//     so the load creeps; a float or open center vents the pilot.
+//     so the load creeps; a float or open center vents the pilot;
+//   - a load-holding valve behind a regenerative center, which joins the
+//     pump to both actuator ports: Warning — pump pressure pilots it open
+//     and the actuator moves with the valve centred.
 //
 // Errors match units.ErrRange for a Holder or a non-zero Center that is
 // not one of the constants.
@@ -109,11 +112,27 @@ func LoadHolding(l Load) (components.Findings, error) {
 		add(components.Warning, components.Burst, "valve.hose-burst",
 			"the %v sits down a line from the cylinder holding %v: a burst between them drops the load; mount it on the cylinder port or fit a hose-burst valve there", l.Holder.String(), name)
 	}
-	if l.Center != 0 && (l.Holder == HeldByPilotCheck || l.Holder == HeldByCounterbalance) && !tr.Vents() {
-		fs = append(fs, components.NewFinding(components.Caution, hz, "valve.pilot-trapped",
-			components.PracticeRule("load-holding valves want their pilot vented in the center"),
-			"with a %v center the actuator ports are blocked, so pilot pressure can stay trapped and hold the %v open: %v creeps; a float or open center vents it",
-			l.Center.String(), l.Holder.String(), name))
+	if l.Center != 0 && (l.Holder == HeldByPilotCheck || l.Holder == HeldByCounterbalance) {
+		fs = append(fs, pilotVenting(l, tr, hz, name)...)
 	}
 	return fs, nil
+}
+
+// pilotVenting says what the center does to a load-holding valve's pilot:
+// nothing when it vents the actuator ports, a trapped pilot when it
+// blocks them, a pressurised one when it joins them to the pump.
+func pilotVenting(l Load, tr CenterTraits, hz components.Hazard, name string) components.Findings {
+	switch {
+	case tr.Vents():
+		return nil
+	case tr.Actuator == Joined:
+		return components.Findings{components.NewFinding(components.Warning, hz, "valve.pilot-pressurised",
+			components.PhysicsRule("a regenerative center puts pump pressure on both actuator ports"),
+			"with a %v center the pump feeds both actuator ports, so pump pressure reaches the pilot of the %v and opens it: %v can move with the valve centred; a float or open center vents the pilot",
+			l.Center.String(), l.Holder.String(), name)}
+	}
+	return components.Findings{components.NewFinding(components.Caution, hz, "valve.pilot-trapped",
+		components.PracticeRule("load-holding valves want their pilot vented in the center"),
+		"with a %v center the actuator ports are blocked, so pilot pressure can stay trapped and hold the %v open: %v creeps; a float or open center vents it",
+		l.Center.String(), l.Holder.String(), name)}
 }

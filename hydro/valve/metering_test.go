@@ -118,6 +118,10 @@ func TestLoadHolding(t *testing.T) {
 			map[string]components.Severity{}},
 		{"a counterbalance behind a closed center", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: ClosedCenter},
 			map[string]components.Severity{"valve.pilot-trapped": components.Caution}},
+		// A regenerative center joins the pump to both actuator ports: the
+		// pilot is not trapped but pressurised, and the actuator moves.
+		{"a counterbalance behind a regenerative center", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: RegenerativeCenter},
+			map[string]components.Severity{"valve.pilot-pressurised": components.Warning}},
 		{"done right", Load{Suspended: true, Overrunning: true, Holder: HeldByCounterbalance, AtPort: true, Center: FloatCenter},
 			map[string]components.Severity{}},
 		{"a resisting load needs nothing", Load{}, map[string]components.Severity{}},
@@ -145,4 +149,14 @@ func TestLoadHolding(t *testing.T) {
 	checktest.RangeErrorIn(t, err, "valve.LoadHolding", "Holder")
 	_, err = LoadHolding(Load{Center: 9})
 	checktest.RangeErrorIn(t, err, "valve.LoadHolding", "Center")
+}
+
+// The intensification ratio of a near-zero supply overflows: CheckMetering
+// fails in its own name instead of returning +Inf.
+func TestCheckMeteringRatioOverflow(t *testing.T) {
+	mc, err := CheckMetering(MeteringNeed{Metering: MeterOut, Cylinder: twoToOne(), Stroke: actuator.Extend,
+		Supply: 5e-324, Resist: -1e3})
+	if checktest.RangeErrorIn(t, err, "valve.CheckMetering", "Ratio"); mc.Intensified != 0 || mc.Findings != nil {
+		t.Errorf("CheckMetering = %+v beside the error; want the zero value", mc)
+	}
 }

@@ -36,7 +36,7 @@ func OrificeFlow(cd float64, a units.Area, dp units.Pressure, rho units.Density)
 		return 0, err
 	}
 	q := units.Flow(cd * float64(a) * math.Sqrt(2*float64(dp)/float64(rho)))
-	return result(fn, "flow", q)
+	return validate.Checked(fn, "flow", q)
 }
 
 // OrificeDrop returns the pressure drop that drives flow q through an
@@ -59,7 +59,7 @@ func OrificeDrop(cd float64, a units.Area, q units.Flow, rho units.Density) (uni
 		return 0, err
 	}
 	v := float64(q) / (cd * float64(a))
-	return result(fn, "drop", units.Pressure(float64(rho)/2*v*v))
+	return validate.Checked(fn, "drop", units.Pressure(float64(rho)/2*v*v))
 }
 
 // OrificeArea returns the orifice area that passes flow q at pressure drop
@@ -81,7 +81,7 @@ func OrificeArea(cd float64, q units.Flow, dp units.Pressure, rho units.Density)
 	if err := validate.Positive(fn, "dp", dp); err != nil {
 		return 0, err
 	}
-	return result(fn, "area", units.Area(float64(q)/(cd*math.Sqrt(2*float64(dp)/float64(rho)))))
+	return validate.Checked(fn, "area", units.Area(float64(q)/(cd*math.Sqrt(2*float64(dp)/float64(rho)))))
 }
 
 func checkOrifice(fn string, cd float64, rho units.Density) error {
@@ -89,13 +89,4 @@ func checkOrifice(fn string, cd float64, rho units.Density) error {
 		return validate.Fail(fn, "cd", cd, "> 0 and ≤ 1")
 	}
 	return validate.Positive(fn, "rho", rho)
-}
-
-// result returns v, or zero and an error naming the result when v is not
-// finite.
-func result[T ~float64](fn, name string, v T) (T, error) {
-	if err := validate.Result(fn, name, v); err != nil {
-		return 0, err
-	}
-	return v, nil
 }

@@ -223,3 +223,12 @@ func TestOrificeAllocations(t *testing.T) {
 		t.Errorf("orifice, Kv and scaling calls allocate %v times per run; want 0", n)
 	}
 }
+
+// A coefficient that overflows is an error, not +Inf beside nil: 1e308 m³/s
+// at 1 Pa needs an area of 1e308 m², and Kv is that over Kv 1's 19.6 mm².
+func TestKvForOverflow(t *testing.T) {
+	k, err := KvFor(1e308, 1, 2)
+	if checktest.RangeErrorIn(t, err, "valve.KvFor", "coefficient"); k != 0 {
+		t.Errorf("KvFor overflowing = %v beside the error; want 0", k)
+	}
+}

@@ -56,7 +56,7 @@ func ScaleDrop(ref DropPoint, regime Regime, q units.Flow, rho units.Density, nu
 	r := float64(q / ref.Flow)
 	switch regime {
 	case Turbulent:
-		return result(fn, "drop", units.Pressure(float64(ref.Drop)*r*r*float64(rho/ref.Density)))
+		return validate.Checked(fn, "drop", units.Pressure(float64(ref.Drop)*r*r*float64(rho/ref.Density)))
 	case Laminar:
 		if err := validate.Positive(fn, "ref.Viscosity", ref.Viscosity); err != nil {
 			return 0, err
@@ -64,7 +64,7 @@ func ScaleDrop(ref DropPoint, regime Regime, q units.Flow, rho units.Density, nu
 		if err := validate.Positive(fn, "nu", nu); err != nil {
 			return 0, err
 		}
-		return result(fn, "drop", units.Pressure(float64(ref.Drop)*r*float64(rho/ref.Density)*float64(nu/ref.Viscosity)))
+		return validate.Checked(fn, "drop", units.Pressure(float64(ref.Drop)*r*float64(rho/ref.Density)*float64(nu/ref.Viscosity)))
 	}
 	return 0, &units.RangeError{Func: fn, Param: "regime", Value: "Regime(" + strconv.Itoa(int(regime)) + ")", Valid: "Turbulent or Laminar"}
 }

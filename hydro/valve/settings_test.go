@@ -217,3 +217,12 @@ func TestSettingsAllocations(t *testing.T) {
 		t.Errorf("settings without findings allocate %v times per run; want 0", n)
 	}
 }
+
+// Areas that pass the cylinder's own checks but overflow in the ratio are
+// an error, not NaN beside nil.
+func TestCouplingOverflow(t *testing.T) {
+	c, err := Coupling(actuator.Cylinder{Bore: 1e300, Rod: 1, Stroke: 1}, actuator.Retract)
+	if checktest.RangeErrorIn(t, err, "valve.Coupling", "coupling"); c != 0 {
+		t.Errorf("Coupling = %v beside the error; want 0", c)
+	}
+}
