@@ -520,6 +520,11 @@ func (z *sizer) bill(r *Report) []BillItem {
 		add("motor", "electric motor "+sys.FormatPower(r.Drive.Rating.Chosen)+", "+strconv.Itoa(poles)+"-pole")
 	}
 	add("relief valve", "set at "+sys.FormatPressure(r.Valves.Relief.Value))
+	for _, a := range r.Actuators {
+		if h := a.Holding; h != nil {
+			add("counterbalance valve", "at the "+a.Name+" port, set at "+sys.FormatPressure(h.Setting.Value)+", pilot "+strconv.FormatFloat(h.Ratio.Value, 'g', 3, 64)+":1")
+		}
+	}
 	for _, v := range r.Valves.Directional {
 		if v.Size != "" {
 			add("directional valve", v.Size+" for "+v.Actuator+", "+r.Valves.Center+" center")

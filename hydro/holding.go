@@ -117,7 +117,7 @@ func (z *sizer) holdingResult(a *act) (*Holding, components.Findings, error) {
 		r = &Holding{Valve: valve.HeldByCounterbalance.String(),
 			Load:    Value[units.Pressure]{h.load, components.PhysicsRule("the load's force on the held side over its area")},
 			Setting: Value[units.Pressure]{h.cb.Setting, h.cb.RatioRule},
-			Pilot:   Value[units.Pressure]{h.cb.Pilot, rule},
+			Pilot:   Value[units.Pressure]{h.lower.Pilot, rule},
 			Ratio:   Value[float64]{pilotRatio, components.OurRule("pilot ratio 3:1")},
 		}
 	}

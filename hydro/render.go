@@ -212,6 +212,10 @@ func (r Report) actuatorSection(sys units.System) section {
 			if a.AreaRatio.Value > 0 {
 				pairs = append(pairs, vf(a.Name+" area ratio", a.AreaRatio, func(f float64) string { return strconv.FormatFloat(f, 'f', 2, 64) }))
 			}
+			if h := a.Holding; h != nil {
+				pairs = append(pairs, [3]string{a.Name + " load holding", h.Valve + " set at " + q(sys, h.Setting.Value) + " for " + q(sys, h.Load.Value) +
+					" of load, pilot " + strconv.FormatFloat(h.Ratio.Value, 'g', 3, 64) + ":1 opening at " + q(sys, h.Pilot.Value), rule(h.Setting.Rule)})
+			}
 			if b := a.Buckling; b != nil {
 				pairs = append(pairs, [3]string{a.Name + " buckling", strconv.FormatFloat(b.Safety.Value, 'f', 2, 64) + " × the relief thrust " +
 					q(sys, b.Thrust.Value) + ", at least " + strconv.FormatFloat(b.Safety.Limit, 'g', 3, 64) + " (" + b.Method + ", free length " +

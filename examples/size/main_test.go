@@ -27,7 +27,7 @@ func TestDemo(t *testing.T) {
 		"Two-ram baling press, 250 kN — sized at 180 bar",
 		"1. Basis", "2. Actuators", "3. Duty cycle and pressure budget", "4. Pump and drive", "5. Valves", "6. Lines",
 		"7. Heat balance", "8. Fluid", "9. Cleanliness", "10. Bill of components", "11. Findings",
-		"press bore        160 mm", "cylinder 160 mm bore × 125 mm rod × 950 mm stroke",
+		"press bore", "160 mm (needs", "cylinder 160 mm bore × 125 mm rod × 950 mm stroke",
 		"WARNING (overrunning load)", "ISO 4413",
 	} {
 		if !strings.Contains(out, want) {
