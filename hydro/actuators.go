@@ -160,6 +160,9 @@ func (z *sizer) workMoves(a *act) error {
 		if err := z.cylinderMove(a, m); err != nil {
 			return err
 		}
+		if err := timeMove(a.cyl, m); err != nil {
+			return err
+		}
 	}
 	return z.fitHolder(a)
 }
@@ -173,6 +176,22 @@ func larger(c, d actuator.Cylinder) bool {
 func only(name string, v units.Length) components.Series[units.Length] {
 	s, _ := components.NewSeries(name, components.OurRule("the size chosen for the governing move"), []units.Length{v}, nil)
 	return s
+}
+
+// timeMove times a cylinder move that ramps up to its speed on the chosen
+// cylinder's motion profile (actuator.Cylinder.Move: ramps up and down at
+// the acceleration the ramp time gives), instead of distance over speed.
+func timeMove(c actuator.Cylinder, m *mv) error {
+	if m.hold() || m.speed <= 0 || m.spec.AccelTime <= 0 || m.spec.Time > 0 {
+		return nil
+	}
+	acc := units.Acceleration(float64(m.speed) / m.spec.AccelTime.Seconds())
+	mo, err := c.Move(m.dir, actuator.Profile{Speed: m.speed, Accel: acc, Distance: m.dist})
+	if err != nil {
+		return err
+	}
+	m.time = mo.Time
+	return nil
 }
 
 // cylinderMove works out move m with the chosen cylinder: the inlet port

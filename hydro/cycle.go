@@ -106,7 +106,6 @@ func (z *sizer) resolveCycle() error {
 		z.acts = append(z.acts, x)
 		byName[a.Name] = x
 	}
-	var total time.Duration
 	for i, p := range z.spec.Cycle.Phases {
 		ph := &phase{name: p.Name, spec: p}
 		if ph.name == "" {
@@ -118,16 +117,29 @@ func (z *sizer) resolveCycle() error {
 			x.timeIt()
 			ph.moves = append(ph.moves, x)
 			a.moves = append(a.moves, x)
-			ph.move = max(ph.move, x.time)
 		}
-		ph.time = ph.move + p.Dwell
-		total += ph.time
 		z.phases = append(z.phases, ph)
 	}
+	z.retime()
+	return nil
+}
+
+// retime sets each phase's time from its moves' and the idle time between
+// cycles.
+func (z *sizer) retime() {
+	var total time.Duration
+	for _, ph := range z.phases {
+		ph.move = 0
+		for _, m := range ph.moves {
+			ph.move = max(ph.move, m.time)
+		}
+		ph.time = ph.move + ph.spec.Dwell
+		total += ph.time
+	}
+	z.idle = 0
 	if cph := z.spec.Cycle.CyclesPerHour; cph > 0 {
 		z.idle = max(time.Duration(float64(time.Hour)/cph)-total, 0)
 	}
-	return nil
 }
 
 // timeIt works out a move's speed, travel and time from what the spec

@@ -129,6 +129,7 @@ func (z *sizer) pass(res *result, n int, prevP units.Pressure) (bool, error) {
 	if err := z.sizeActuators(); err != nil {
 		return false, err
 	}
+	z.retime() // the moves that ramp are timed on the chosen cylinders
 	z.flows()
 	if z.delivery == 0 {
 		z.delivery = z.peakDemand()
