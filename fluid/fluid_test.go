@@ -19,7 +19,7 @@ func TestDensity(t *testing.T) {
 		t.Errorf("ρ(15 °C) = %v, want %v", r15, f.Density15())
 	}
 	r60, _ := f.Density(celsius(60), 0)
-	if got := float64(f.Density15()/r60) - 1; !near(got, f.Expansion()*45, 1e-12) {
+	if got := float64(f.Density15()/r60) - 1; !checktest.Close(got, f.Expansion()*45, 1e-12) {
 		t.Errorf("expansion ratio %g, want %g", got, f.Expansion()*45)
 	}
 	r40, _ := f.Density(celsius(40), 0)
@@ -31,7 +31,7 @@ func TestDensity(t *testing.T) {
 		t.Errorf("ρ at 350 bar = %v vs %v", rp, r40)
 	}
 	mu, _ := f.DynamicViscosity(celsius(40), 0)
-	if !near(float64(mu), float64(f.V40())*float64(r40), 1e-12) { // ν from the curve: round-off
+	if !checktest.Close(float64(mu), float64(f.V40())*float64(r40), 1e-12) { // ν from the curve: round-off
 		t.Errorf("μ = %v, want ν·ρ", mu)
 	}
 }
@@ -46,12 +46,12 @@ func TestCragoe(t *testing.T) {
 		for _, tc := range []float64{0, 40, 100} {
 			c, err := CragoeSpecificHeat(sg, celsius(tc))
 			want := (1.6848 + 0.003391*tc) / math.Sqrt(sg) * 1e3
-			if err != nil || !near(float64(c), want, 1e-4) {
+			if err != nil || !checktest.Close(float64(c), want, 1e-4) {
 				t.Errorf("c(%g, %g °C) = %v, want %g", sg, tc, c, want)
 			}
 			k, _ := CragoeConductivity(sg, celsius(tc))
 			wantK := 0.11717 / sg * (1 - 0.00054*tc)
-			if !near(float64(k), wantK, 1e-4) {
+			if !checktest.Close(float64(k), wantK, 1e-4) {
 				t.Errorf("k(%g, %g °C) = %v, want %g", sg, tc, k, wantK)
 			}
 		}
@@ -61,7 +61,7 @@ func TestCragoe(t *testing.T) {
 	c80, _ := f.SpecificHeat(celsius(80))
 	k, _ := f.ThermalConductivity(celsius(40))
 	direct, _ := CragoeSpecificHeat(float64(f.Density15())/999.0, celsius(80))
-	if c < 1800 || c > 2000 || !near(float64(c80), float64(direct), 1e-12) || k < 0.12 || k > 0.14 {
+	if c < 1800 || c > 2000 || !checktest.Close(float64(c80), float64(direct), 1e-12) || k < 0.12 || k > 0.14 {
 		t.Errorf("HM 46: c %v, c80 %v (Cragoe %v), k %v", c, c80, direct, k)
 	}
 }

@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -24,7 +25,7 @@ func TestTypicalPresets(t *testing.T) {
 			}
 			v40, _ := f.Viscosity(celsius(40))
 			v100, _ := f.Viscosity(celsius(100))
-			if !near(float64(v40), float64(g.Mid()), 1e-12) || !near(float64(v100), float64(f.V100()), 1e-12) {
+			if !checktest.Close(float64(v40), float64(g.Mid()), 1e-12) || !checktest.Close(float64(v100), float64(f.V100()), 1e-12) {
 				t.Errorf("%s: ν40 %v ν100 %v", f.Name(), v40, v100)
 			}
 			if _, err := f.Viscosity(f.PourPoint() - 1); !errors.Is(err, units.ErrRange) {
@@ -58,13 +59,13 @@ func TestFromDataSheet(t *testing.T) {
 		t.Fatal(err)
 	}
 	v100, _ := f.Viscosity(celsius(100))
-	if !near(float64(v100), float64(d.V100), 1e-12) || f.Density15() != 862 || f.Bulk() != mineralBulk ||
+	if !checktest.Close(float64(v100), float64(d.V100), 1e-12) || f.Density15() != 862 || f.Bulk() != mineralBulk ||
 		f.Expansion() != families[HV].expansion || f.PourPoint() != d.PourPoint || f.Name() != d.Name || f.Class() != HV {
 		t.Errorf("fluid %+v", f)
 	}
 	// The curve passes through both data-sheet points, so Grade and
 	// Viscosity(40 °C) agree.
-	if v40, _ := f.Curve().At(t40); !near(float64(v40), float64(f.V40()), 1e-12) {
+	if v40, _ := f.Curve().At(t40); !checktest.Close(float64(v40), float64(f.V40()), 1e-12) {
 		t.Errorf("curve at 40 °C %v, V40 %v", v40, f.V40())
 	}
 	d.V100, d.VI = 0, 155

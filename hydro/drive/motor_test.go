@@ -31,8 +31,8 @@ func TestSelectMotor(t *testing.T) {
 	if m.Rating.Chosen != 15*units.Kilowatt || m.Rating.Required != 12*units.Kilowatt {
 		t.Errorf("rating %+v; want 15 kW for a 12 kW need", m.Rating)
 	}
-	near(t, "rated torque", m.RatedTorque, 15e3/(2*3.141592653589793*1455/60), 1e-14)
-	near(t, "peak torque", m.PeakTorque, 30e3/(2*3.141592653589793*1455/60), 1e-14)
+	checktest.Near(t, "rated torque", m.RatedTorque, 15e3/(2*3.141592653589793*1455/60), 1e-14)
+	checktest.Near(t, "peak torque", m.PeakTorque, 30e3/(2*3.141592653589793*1455/60), 1e-14)
 	if !m.Thermal.OK() || !m.Torque.OK() || m.Thermal.Rule.Kind != components.CommonPractice {
 		t.Errorf("checks: thermal %+v, torque %+v", m.Thermal, m.Torque)
 	}
