@@ -223,11 +223,11 @@ func (z *sizer) pumpResult(res *result) PumpResult {
 // and its inlet at a cold start (pump.CheckInlet) to the pump's result.
 func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error) {
 	r := z.pumpResult(res)
-	cd, err := z.drop("center", nonNil(valveElement("valve P→T", z.mainValve())), z.delivery)
+	cd, err := z.drop(z.centerEls, z.delivery)
 	if err != nil {
 		return r, nil, err
 	}
-	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd.Total}
+	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd}
 	for _, a := range z.acts {
 		var d pump.Demand
 		for _, m := range a.moves {
@@ -274,7 +274,7 @@ func (z *sizer) inlet(res *result) (pump.InletResult, components.Findings, error
 	}
 	var fs components.Findings
 	loss := units.Pressure(0)
-	if els := res.lines.suction.elements(); len(els) > 0 {
+	if els := res.lines.suction.els; len(els) > 0 {
 		st, err := line.ColdStart(line.Path{Name: "suction", Elements: els}, z.delivery, z.fl, cold, z.tOil)
 		if err != nil {
 			fs = fs.Merge(components.NewFinding(components.Caution, components.ColdStart, "hydro.cold-suction",
@@ -408,8 +408,7 @@ func (z *sizer) lineResults(ml mainLines) []LineResult {
 		if l.flow <= 0 {
 			continue
 		}
-		d, err := z.drop(l.name, l.elements(), l.flow)
-		drop := d.Total
+		drop, err := z.drop(l.els, l.flow)
 		if err != nil {
 			drop = 0
 		}

@@ -26,6 +26,7 @@ type act struct {
 	valve     int                   // index into valveSizes, −1 when none is large enough
 	lineA     *lineRun              // work line to the cap side (or motor port A)
 	lineB     *lineRun              // work line to the annulus side (or port B)
+	paths     branches              // the paths through the valve and work lines
 	holder    *holder               // the counterbalance valve fitted, if any
 }
 
