@@ -28,7 +28,7 @@ func TestHoseSizes(t *testing.T) {
 		got, pref := s.At(i)
 		// n/16 in at run time against the constant: 2 ulp (the inch is exact
 		// by definition, NIST SP 811; only the float product rounds).
-		if !near(float64(got), float64(w.id), 4.5e-16) || !pref {
+		if !checktest.Close(float64(got), float64(w.id), 4.5e-16) || !pref {
 			t.Errorf("size %d = %v (preferred %v); want %v", i, got, pref, w.id)
 		}
 		if id := w.dash.ID(); id != got {

@@ -21,7 +21,7 @@ func TestSynchronousSpeed(t *testing.T) {
 	} {
 		got, err := SynchronousSpeed(c.poles, units.Frequency(c.hz)*units.Hertz)
 		// One division and one unit scaling: 2 ulp.
-		if err != nil || !near(got.RPM(), c.rpm, 4.5e-16) {
+		if err != nil || !checktest.Close(got.RPM(), c.rpm, 4.5e-16) {
 			t.Errorf("SynchronousSpeed(%d, %v Hz) = %v rev/min, %v; want %v", c.poles, c.hz, got.RPM(), err, c.rpm)
 		}
 	}

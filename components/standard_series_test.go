@@ -5,6 +5,7 @@ import (
 	"slices"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -109,7 +110,7 @@ func TestNEMAMotorRatings(t *testing.T) {
 			15 * hp, 20 * hp, 25 * hp, 30 * hp, 40 * hp, 50 * hp, 60 * hp, 75 * hp, 100 * hp, 125 * hp,
 			150 * hp, 200 * hp, 250 * hp, 300 * hp, 350 * hp, 400 * hp, 450 * hp, 500 * hp}, nil)
 	// 10 hp = 7456.9987 W (hp = 550 ft·lbf/s, NIST SP 811), to 1e-9 relative.
-	if got := NEMAMotorRatings().Sizes()[8]; !near(float64(got), 7456.9987158227, 1e-12) {
+	if got := NEMAMotorRatings().Sizes()[8]; !checktest.Close(float64(got), 7456.9987158227, 1e-12) {
 		t.Errorf("10 hp = %v W", float64(got))
 	}
 }
@@ -131,7 +132,7 @@ func TestReservoirVolumes(t *testing.T) {
 			50 * gal, 60 * gal, 80 * gal, 100 * gal, 120 * gal, 150 * gal, 200 * gal, 250 * gal, 300 * gal,
 			400 * gal, 500 * gal}, nil)
 	// A 10 gal tank holds 37.85411784 L (US gallon = 231 in³, NIST SP 811).
-	if got := ReservoirVolumesUS().Sizes()[4].Litres(); !near(got, 37.85411784, 1e-14) {
+	if got := ReservoirVolumesUS().Sizes()[4].Litres(); !checktest.Close(got, 37.85411784, 1e-14) {
 		t.Errorf("10 gal = %v L", got)
 	}
 }
@@ -227,7 +228,7 @@ func TestStandardSeriesSelect(t *testing.T) {
 	if err != nil || c.Chosen != 15*kW || !c.OK() || c.Series != "IEC 60072-1 motor ratings" {
 		t.Fatalf("Select(12.3 kW) = %+v, %v; want 15 kW", c, err)
 	}
-	if m := c.Margin(); !near(m, 15/12.3-1, 1e-15) {
+	if m := c.Margin(); !checktest.Close(m, 15/12.3-1, 1e-15) {
 		t.Errorf("margin %v; want %v", m, 15/12.3-1)
 	}
 	c, err = IECMotorRatings().Select(400 * kW)
@@ -239,15 +240,4 @@ func TestStandardSeriesSelect(t *testing.T) {
 	if err != nil || c2.Chosen != 160*L {
 		t.Errorf("SelectPreferred(105 L) = %+v, %v; want 160 L (125 L is second choice)", c2, err)
 	}
-}
-
-func near(got, want, rel float64) bool {
-	d := got - want
-	if d < 0 {
-		d = -d
-	}
-	if want < 0 {
-		want = -want
-	}
-	return d <= rel*want
 }

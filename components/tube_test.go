@@ -4,6 +4,7 @@ import (
 	"slices"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -57,7 +58,7 @@ func TestTubeID(t *testing.T) {
 	const mm = units.Millimetre
 	tb := Tube{OD: 12 * mm, Wall: 1.5 * mm, Class: LightTube}
 	// 12 − 2·1.5 = 9 mm, to 1e-15 relative (two float operations).
-	if got := tb.ID().Millimetres(); !near(got, 9, 1e-15) {
+	if got := tb.ID().Millimetres(); !checktest.Close(got, 9, 1e-15) {
 		t.Errorf("ID = %v mm; want 9", got)
 	}
 	if s := tb.String(); s != "12 × 1.5 mm (L)" {

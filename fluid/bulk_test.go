@@ -4,6 +4,7 @@ import (
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -26,7 +27,7 @@ func TestBulkTangentIsDefinition(t *testing.T) {
 			r0, _ := f.Density(tt, p)
 			fd := float64(r0) * float64(2*h) / float64(r2-r1)
 			k, err := f.BulkModulus(IsothermalTangent, tt, p)
-			if err != nil || !near(float64(k), fd, 1e-6) {
+			if err != nil || !checktest.Close(float64(k), fd, 1e-6) {
 				t.Errorf("%g °C %g bar: K = %v, ρ·dp/dρ = %g", tc, pb, k, fd)
 			}
 		}
@@ -56,7 +57,7 @@ func TestBulkSecantIsDefinition(t *testing.T) {
 		ratio := math.Exp(-sum * p / n / 3) // V/V₀
 		want := p / (1 - ratio)
 		got, err := testBulk.Modulus(IsothermalSecant, tt, units.Pressure(p))
-		if err != nil || !near(float64(got), want, 1e-9) {
+		if err != nil || !checktest.Close(float64(got), want, 1e-9) {
 			t.Errorf("%g bar: secant %v, want %g", pb, got, want)
 		}
 	}
@@ -72,7 +73,7 @@ func TestBulkForms(t *testing.T) {
 	}
 	s0, _ := testBulk.Modulus(IsothermalSecant, tt, 0)
 	s1, _ := testBulk.Modulus(IsothermalSecant, tt, 1)
-	if s0 != k0 || !near(float64(s1), float64(k0), 1e-8) {
+	if s0 != k0 || !checktest.Close(float64(s1), float64(k0), 1e-8) {
 		t.Errorf("secant at 0 and 1 Pa: %v, %v; want → %v", s0, s1, k0)
 	}
 	for _, pb := range []float64{10, 100, 300} {
@@ -84,7 +85,7 @@ func TestBulkForms(t *testing.T) {
 		}
 		it, _ := testBulk.Modulus(IsentropicTangent, tt, p)
 		is, _ := testBulk.Modulus(IsentropicSecant, tt, p)
-		if !near(float64(it), 1.15*float64(kt), 1e-15) || !near(float64(is), 1.15*float64(ks), 1e-15) {
+		if !checktest.Close(float64(it), 1.15*float64(kt), 1e-15) || !checktest.Close(float64(is), 1.15*float64(ks), 1e-15) {
 			t.Errorf("%g bar: isentropic %v, %v", pb, it, is)
 		}
 	}
@@ -121,7 +122,7 @@ func TestEffectiveBulkAir(t *testing.T) {
 			h := p * 1e-6
 			exact := -vol(p) * 2 * h / (vol(p+h) - vol(p-h))
 			got, err := e.At(units.AbsolutePressure(p))
-			if err != nil || !near(float64(got), exact, 5e-3) {
+			if err != nil || !checktest.Close(float64(got), exact, 5e-3) {
 				t.Errorf("air %+v at %g bar: %v, exact %g", air, pb, got, exact)
 			}
 		}
@@ -134,7 +135,7 @@ func TestEffectiveBulkAir(t *testing.T) {
 	// Series springs: 1/Bₑ = 1/B_l + 1/B_c.
 	e.Container = 2500 * units.Megapascal
 	want := 1 / (1/bl + 1/2500e6)
-	if got, _ := e.At(units.BarAbsolute * 100); !near(float64(got), want, 1e-15) {
+	if got, _ := e.At(units.BarAbsolute * 100); !checktest.Close(float64(got), want, 1e-15) {
 		t.Errorf("container: %v, want %g", got, want)
 	}
 	// With 0.5 % air at 100 bar and a hose-like container, the result lies in
@@ -154,7 +155,7 @@ func TestTubeBulkModulus(t *testing.T) {
 	e := 206000 * units.Megapascal
 	got, err := TubeBulkModulus(100*units.Millimetre, 100.2*units.Millimetre, e, 0.3)
 	want := float64(e) * 0.1 / 100
-	if err != nil || !near(float64(got), want, 2e-3) {
+	if err != nil || !checktest.Close(float64(got), want, 2e-3) {
 		t.Errorf("thin tube: %v, want %g", got, want)
 	}
 	thick, _ := TubeBulkModulus(10*units.Millimetre, 20*units.Millimetre, e, 0.3)
@@ -270,15 +271,15 @@ func TestTubeBulkModulusRatio(t *testing.T) {
 		t.Fatal(err)
 	}
 	// (r_o² + r_i²)/(r_o² − r_i²) = 5/3 at r_o = 2r_i.
-	if want := float64(e) / (2 * (5.0/3 + 0.3)); !near(float64(ref), want, 1e-15) {
+	if want := float64(e) / (2 * (5.0/3 + 0.3)); !checktest.Close(float64(ref), want, 1e-15) {
 		t.Errorf("B_c = %v, want %g", ref, want)
 	}
 	tiny, err := TubeBulkModulus(1e-200, 2e-200, e, 0.3)
-	if err != nil || !near(float64(tiny), float64(ref), 1e-15) {
+	if err != nil || !checktest.Close(float64(tiny), float64(ref), 1e-15) {
 		t.Errorf("scaled to 1e-200 m: %v, %v; want %v", tiny, err, ref)
 	}
 	thick, err := TubeBulkModulus(0.01, 1e300, e, 0.3)
-	if want := float64(e) / (2 * 1.3); err != nil || !near(float64(thick), want, 1e-15) {
+	if want := float64(e) / (2 * 1.3); err != nil || !checktest.Close(float64(thick), want, 1e-15) {
 		t.Errorf("bore in an unbounded wall: %v, %v; want %g", thick, err, want)
 	}
 }

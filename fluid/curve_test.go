@@ -4,6 +4,7 @@ import (
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -28,7 +29,7 @@ func TestCurveD341Check(t *testing.T) {
 	// The fitted points themselves are reproduced to round-off.
 	for _, p := range []struct{ c, v float64 }{{40, 32}, {100, 5.4}} {
 		v, _ := c.At(celsius(p.c))
-		if !near(v.SquareMillimetresPerSecond(), p.v, 1e-12) {
+		if !checktest.Close(v.SquareMillimetresPerSecond(), p.v, 1e-12) {
 			t.Errorf("ν(%g °C) = %.15g, want %g", p.c, v.SquareMillimetresPerSecond(), p.v)
 		}
 	}
@@ -71,7 +72,7 @@ func TestCurveRoundTrip(t *testing.T) {
 			if err != nil {
 				t.Fatalf("At(%v): %v", tt, err)
 			}
-			if !near(float64(back), float64(v), 1e-11) {
+			if !checktest.Close(float64(back), float64(v), 1e-11) {
 				t.Errorf("ν %v → T %v → ν %v", v, tt, back)
 			}
 		}
@@ -86,7 +87,7 @@ func TestCurveRoundTrip(t *testing.T) {
 			if err != nil {
 				t.Fatalf("TemperatureFor(%v): %v", v, err)
 			}
-			if !near(float64(back), float64(tt), 1e-11) {
+			if !checktest.Close(float64(back), float64(tt), 1e-11) {
 				t.Errorf("T %v → ν %v → T %v", tt, v, back)
 			}
 		}
@@ -118,7 +119,7 @@ func TestNuFromZ(t *testing.T) {
 	for nu := 0.21; nu < 20; nu *= 1.05 {
 		z := zOf(nu)
 		got := nuFromZ(z)
-		if !near(got, nu, 1e-13) {
+		if !checktest.Close(got, nu, 1e-13) {
 			t.Errorf("nuFromZ(Z(%g)) = %.16g", nu, got)
 		}
 		w := z - 0.7
@@ -192,7 +193,7 @@ func TestCurveRefusesPourPointRegion(t *testing.T) {
 	c, _ := CurveThrough(celsius(40), mm2s(460), celsius(100), mm2s(31))
 	lo, _ := c.Range()
 	v, err := c.At(lo)
-	if err != nil || !near(float64(v), float64(MaxViscosity), 1e-10) {
+	if err != nil || !checktest.Close(float64(v), float64(MaxViscosity), 1e-10) {
 		t.Fatalf("At(cold end) = %v, %v; want %v", v, err, MaxViscosity)
 	}
 	_, err = c.At(lo - 0.01)
@@ -241,7 +242,7 @@ func TestExpFrom(t *testing.T) {
 	for _, x := range []float64{-1.6, -3.5, -9, -20} {
 		for _, d := range []float64{0, 1e-9, -1e-5, 1e-3, -1.5e-3, maxTaylorStep, -maxTaylorStep, 3e-3, -0.05, 2} {
 			got, want := expFrom(math.Exp(x-d), d, x), math.Exp(x)
-			if !near(got, want, 4e-16+2.3e-16*math.Abs(x)) {
+			if !checktest.Close(got, want, 4e-16+2.3e-16*math.Abs(x)) {
 				t.Errorf("expFrom(exp(%g − %g)) = %.17g, want %.17g", x, d, got, want)
 			}
 		}
@@ -258,7 +259,7 @@ func TestExpFrom(t *testing.T) {
 // round-trips At → TemperatureFor → At to 1e-13.
 func TestNuFromZDense(t *testing.T) {
 	for nu := 0.21; nu < 7.5; nu *= 1.0003 {
-		if got := nuFromZ(zOf(nu)); !near(got, nu, 1e-14) {
+		if got := nuFromZ(zOf(nu)); !checktest.Close(got, nu, 1e-14) {
 			t.Fatalf("nuFromZ(Z(%.17g)) = %.17g", nu, got)
 		}
 	}
@@ -279,7 +280,7 @@ func TestNuFromZDense(t *testing.T) {
 			t.Fatal(err)
 		}
 		v2, _ := c.At(back)
-		if !near(float64(v2), float64(v), 1e-13) || !near(float64(back), float64(tt), 1e-13) {
+		if !checktest.Close(float64(v2), float64(v), 1e-13) || !checktest.Close(float64(back), float64(tt), 1e-13) {
 			t.Errorf("T %v → ν %v → T %v → ν %v", tt, v, back, v2)
 		}
 	}
@@ -308,7 +309,7 @@ func TestCurveAtConcurrentFirstUse(t *testing.T) {
 		go func() { done <- nuFromZ(zOf(3)) }()
 	}
 	for range 8 {
-		if got := <-done; !near(got, want, 1e-14) {
+		if got := <-done; !checktest.Close(got, want, 1e-14) {
 			t.Errorf("nuFromZ(Z(3)) = %.17g, want %.17g", got, want)
 		}
 	}
@@ -327,10 +328,10 @@ func TestCurveRangeEnds(t *testing.T) {
 		t.Fatal(err)
 	}
 	cold, hot := c.Range()
-	if v, err := c.At(cold); err != nil || !near(float64(v), float64(MaxViscosity), 1e-12) {
+	if v, err := c.At(cold); err != nil || !checktest.Close(float64(v), float64(MaxViscosity), 1e-12) {
 		t.Errorf("At(cold) = %v, %v; want %v", v, err, MaxViscosity)
 	}
-	if v, err := c.At(hot); err != nil || !near(float64(v), float64(MinViscosity), 1e-12) {
+	if v, err := c.At(hot); err != nil || !checktest.Close(float64(v), float64(MinViscosity), 1e-12) {
 		t.Errorf("At(hot) = %v, %v; want %v", v, err, MinViscosity)
 	}
 	_, err = c.At(units.Temperature(math.Nextafter(float64(cold), 0)))

@@ -104,7 +104,7 @@ func ExampleGradeOf() {
 	fmt.Println(err)
 	// Output:
 	// VG 46 <nil>
-	// fluid.GradeOf: 38 mm²/s at 40 °C lies between VG 32 (max 35.2 mm²/s) and VG 46 (min 41.4 mm²/s): no matching ISO 3448 viscosity grade
+	// fluid.GradeOf: v40 = 38 mm²/s at 40 °C lies between VG 32 (max 35.2 mm²/s) and VG 46 (min 41.4 mm²/s): no matching ISO 3448 viscosity grade
 }
 
 func ExampleParseGrade() {

@@ -143,20 +143,36 @@ func checkPropertyInputs(fn string, t units.Temperature, p units.Pressure) error
 }
 
 // Grade returns the ISO 3448 grade of the fluid's 40 °C viscosity, or an
-// error matching ErrNoGrade when it lies between grades.
-func (f Fluid) Grade() (Grade, error) { return GradeOf(f.v40) }
+// error matching ErrNoGrade, naming V40, when it lies between grades.
+func (f Fluid) Grade() (Grade, error) { return gradeOf("fluid.Fluid.Grade", "V40", f.v40) }
 
-// VI returns the viscosity index (ASTM D2270, unrounded) of V40 and V100.
-func (f Fluid) VI() (float64, error) { return ViscosityIndex(f.v40, f.v100) }
+// VI returns the viscosity index (ASTM D2270, unrounded) of V40 and V100;
+// its errors are those of ViscosityIndex, naming the fields V40 and V100.
+func (f Fluid) VI() (float64, error) {
+	vi, err := ViscosityIndex(f.v40, f.v100)
+	if err != nil {
+		return 0, validate.Renamed(err, "fluid.Fluid.VI", validate.Fields("", map[string]string{"v40": "V40", "v100": "V100"}))
+	}
+	return vi, nil
+}
 
 // Viscosity returns the kinematic viscosity at temperature t from the D341
 // curve. Below the pour point (when known) it fails: the oil no longer flows
 // as the curve says.
 func (f Fluid) Viscosity(t units.Temperature) (units.KinematicViscosity, error) {
+	return f.viscosity("fluid.Fluid.Viscosity", t)
+}
+
+// viscosity is Viscosity for function fn.
+func (f Fluid) viscosity(fn string, t units.Temperature) (units.KinematicViscosity, error) {
 	if f.pourPoint > 0 && t < f.pourPoint {
-		return 0, validate.Fail("fluid.Fluid.Viscosity", "t", t, "≥ pour point "+f.pourPoint.String())
+		return 0, validate.Fail(fn, "t", t, "≥ pour point "+f.pourPoint.String())
 	}
-	return f.curve.At(t)
+	nu, err := f.curve.At(t)
+	if err != nil {
+		return 0, validate.Renamed(err, fn, nil)
+	}
+	return nu, nil
 }
 
 // Density returns the density at temperature t and gauge pressure p:
@@ -206,16 +222,17 @@ func (f Fluid) density(t units.Temperature, p units.Pressure) units.Density {
 // with pressure, about 15–30 % per 100 bar for mineral oil from memory, is
 // not modelled).
 func (f Fluid) DynamicViscosity(t units.Temperature, p units.Pressure) (units.DynamicViscosity, error) {
-	nu, err := f.Viscosity(t)
+	const fn = "fluid.Fluid.DynamicViscosity"
+	nu, err := f.viscosity(fn, t)
 	if err != nil {
 		return 0, err
 	}
 	rho, err := f.Density(t, p)
 	if err != nil {
-		return 0, err
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	mu := units.DynamicViscosity(float64(nu) * float64(rho))
-	if err := validate.Result("fluid.Fluid.DynamicViscosity", "μ", mu); err != nil {
+	if err := validate.Result(fn, "μ", mu); err != nil {
 		return 0, err
 	}
 	return mu, nil
@@ -225,6 +242,9 @@ func (f Fluid) DynamicViscosity(t units.Temperature, p units.Pressure) (units.Dy
 // Thermal (linear in temperature).
 func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, error) {
 	const fn = "fluid.Fluid.SpecificHeat"
+	if err := validate.Positive(fn, "Thermal.C40", f.thermal.C40); err != nil { // the zero Fluid
+		return 0, err
+	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}
@@ -236,6 +256,9 @@ func (f Fluid) SpecificHeat(t units.Temperature) (units.SpecificHeatCapacity, er
 // Thermal (linear in temperature).
 func (f Fluid) ThermalConductivity(t units.Temperature) (units.ThermalConductivity, error) {
 	const fn = "fluid.Fluid.ThermalConductivity"
+	if err := validate.Positive(fn, "Thermal.K40", f.thermal.K40); err != nil { // the zero Fluid
+		return 0, err
+	}
 	if err := checkPropertyInputs(fn, t, 0); err != nil {
 		return 0, err
 	}

@@ -130,8 +130,12 @@ func (g *Grade) UnmarshalText(text []byte) error {
 // names the neighbouring grades. The limits belong to their grade (to
 // round-off). Bad input matches units.ErrRange.
 func GradeOf(v40 units.KinematicViscosity) (Grade, error) {
-	const fn = "fluid.GradeOf"
-	if err := validate.Positive(fn, "v40", v40); err != nil {
+	return gradeOf("fluid.GradeOf", "v40", v40)
+}
+
+// gradeOf is GradeOf for function fn, naming the viscosity param.
+func gradeOf(fn, param string, v40 units.KinematicViscosity) (Grade, error) {
+	if err := validate.Positive(fn, param, v40); err != nil {
 		return 0, err
 	}
 	v := v40.SquareMillimetresPerSecond()
@@ -146,7 +150,7 @@ func GradeOf(v40 units.KinematicViscosity) (Grade, error) {
 			below = r
 		}
 	}
-	return 0, &GradeError{V40: v40, below: below}
+	return 0, &GradeError{V40: v40, below: below, fn: fn, param: param}
 }
 
 // limitSlack widens each grade's limits by a relative 10⁻¹², far below the
@@ -159,13 +163,24 @@ const limitSlack = 1e-12
 // unwraps to ErrNoGrade and to a *units.RangeError naming v40, so it
 // matches units.ErrRange.
 type GradeError struct {
-	V40   units.KinematicViscosity
-	below *gradeRow
+	V40       units.KinematicViscosity
+	below     *gradeRow
+	fn, param string // the function and parameter named; "" for GradeOf's
+}
+
+// names returns the function and the parameter the error names: GradeOf's
+// v40 unless a method of Fluid failed.
+func (e *GradeError) names() (fn, param string) {
+	if e.fn == "" {
+		return "fluid.GradeOf", "v40"
+	}
+	return e.fn, e.param
 }
 
 // Error implements the error interface.
 func (e *GradeError) Error() string {
-	s := "fluid.GradeOf: " + e.V40.String() + " at 40 °C lies "
+	fn, param := e.names()
+	s := fn + ": " + param + " = " + e.V40.String() + " at 40 °C lies "
 	switch {
 	case e.below == nil:
 		s += "below VG 2 (min 1.98 mm²/s)"
@@ -181,7 +196,8 @@ func (e *GradeError) Error() string {
 
 // Unwrap returns ErrNoGrade and the range error for v40.
 func (e *GradeError) Unwrap() []error {
-	return []error{ErrNoGrade, validate.Fail("fluid.GradeOf", "v40", e.V40, "within the limits of an ISO 3448 grade")}
+	fn, param := e.names()
+	return []error{ErrNoGrade, validate.Fail(fn, param, e.V40, "within the limits of an ISO 3448 grade")}
 }
 
 func (g Grade) next() Grade {

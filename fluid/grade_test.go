@@ -7,6 +7,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -34,7 +35,7 @@ func TestGradesISO3448(t *testing.T) {
 			t.Errorf("%v: %v / %v / %v, want %g / %g / %g", g, g.Min(), g.Mid(), g.Max(), w.min, w.mid, w.max)
 		}
 		// ±10 % of the midpoint (ISO 3448), to the printed rounding.
-		if !near(float64(g.Min()), 0.9*float64(g.Mid()), 1e-12) || !near(float64(g.Max()), 1.1*float64(g.Mid()), 1e-12) {
+		if !checktest.Close(float64(g.Min()), 0.9*float64(g.Mid()), 1e-12) || !checktest.Close(float64(g.Max()), 1.1*float64(g.Mid()), 1e-12) {
 			t.Errorf("%v: limits not ±10 %% of midpoint", g)
 		}
 	}

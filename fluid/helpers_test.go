@@ -10,11 +10,6 @@ import (
 
 func celsius(c float64) units.Temperature { return units.TemperatureFromCelsius(c) }
 
-// near reports whether got is within rel (relative) of want.
-func near(got, want, rel float64) bool {
-	return math.Abs(got-want) <= rel*math.Abs(want)
-}
-
 // wantRangeError checks that err is a range error for param, with the
 // shared checks of internal/checktest (matches units.ErrRange, errors.As
 // finds a *units.RangeError, a qualified function, the value and the valid

@@ -1,6 +1,8 @@
 package fluid
 
 import (
+	"math"
+	"strconv"
 	"strings"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
@@ -149,14 +151,15 @@ func (e *PresetError) rangeError() error {
 }
 
 // DataSheet holds the figures a supplier prints for a hydraulic fluid.
-// Give V100, or leave it 0 and give VI (then V100 = V100ForVI(V40, VI)).
+// Give V100, or leave it 0 and give VI (then V100 = V100ForVI(V40, VI)); a
+// VI given beside V100 must agree with it (ASTM D2270, within ±1).
 // PourPoint may be 0 when not known. Expansion, Bulk and Thermal, which a
 // data sheet rarely gives, take the typical values of Class when left zero.
 type DataSheet struct {
 	Name      string
 	Class     Class // for the properties a data sheet rarely gives (bulk modulus, heat)
 	V40, V100 units.KinematicViscosity
-	VI        float64 // used only when V100 is 0
+	VI        float64 // with V100 0, sets V100; beside V100, must agree with it to ±1
 	Density15 units.Density
 	PourPoint units.Temperature
 	Expansion float64      // volumetric thermal expansion, 1/K; 0 for the class's typical value
@@ -185,6 +188,8 @@ func FromDataSheet(d DataSheet) (Fluid, error) {
 			return Fluid{}, err
 		}
 	} else if err := checkV100(fn, d.V40, v100); err != nil {
+		return Fluid{}, err
+	} else if err := checkVI(fn, d); err != nil {
 		return Fluid{}, err
 	}
 	f, err := build(d, v100)
@@ -222,6 +227,24 @@ func checkSheet(fn string, d DataSheet) error {
 		}
 	}
 	return validate.InRange(fn, "V40", d.V40, MinViscosity, MaxViscosity)
+}
+
+// checkVI checks that a VI given beside V100 agrees with the viscosity index
+// of V40 and V100 (ASTM D2270) to within one unit (data sheets print it
+// rounded); a VI of 0 means not given.
+func checkVI(fn string, d DataSheet) error {
+	if d.VI == 0 {
+		return nil
+	}
+	vi, err := ViscosityIndex(d.V40, d.V100)
+	if err != nil || !(math.Abs(vi-d.VI) <= 1) { // a NaN VI fails too
+		want := "0 (not given) or the viscosity index of V40 and V100"
+		if err == nil {
+			want += ", " + strconv.FormatFloat(RoundVI(vi), 'f', 0, 64) + " ± 1"
+		}
+		return validate.Fail(fn, "VI", d.VI, want)
+	}
+	return nil
 }
 
 // checkV100 checks a data sheet's 100 °C viscosity against D341's limits

@@ -6,6 +6,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -24,7 +25,7 @@ func TestTypicalPresets(t *testing.T) {
 			}
 			v40, _ := f.Viscosity(celsius(40))
 			v100, _ := f.Viscosity(celsius(100))
-			if !near(float64(v40), float64(g.Mid()), 1e-12) || !near(float64(v100), float64(f.V100()), 1e-12) {
+			if !checktest.Close(float64(v40), float64(g.Mid()), 1e-12) || !checktest.Close(float64(v100), float64(f.V100()), 1e-12) {
 				t.Errorf("%s: ν40 %v ν100 %v", f.Name(), v40, v100)
 			}
 			if _, err := f.Viscosity(f.PourPoint() - 1); !errors.Is(err, units.ErrRange) {
@@ -58,13 +59,13 @@ func TestFromDataSheet(t *testing.T) {
 		t.Fatal(err)
 	}
 	v100, _ := f.Viscosity(celsius(100))
-	if !near(float64(v100), float64(d.V100), 1e-12) || f.Density15() != 862 || f.Bulk() != mineralBulk ||
+	if !checktest.Close(float64(v100), float64(d.V100), 1e-12) || f.Density15() != 862 || f.Bulk() != mineralBulk ||
 		f.Expansion() != families[HV].expansion || f.PourPoint() != d.PourPoint || f.Name() != d.Name || f.Class() != HV {
 		t.Errorf("fluid %+v", f)
 	}
 	// The curve passes through both data-sheet points, so Grade and
 	// Viscosity(40 °C) agree.
-	if v40, _ := f.Curve().At(t40); !near(float64(v40), float64(f.V40()), 1e-12) {
+	if v40, _ := f.Curve().At(t40); !checktest.Close(float64(v40), float64(f.V40()), 1e-12) {
 		t.Errorf("curve at 40 °C %v, V40 %v", v40, f.V40())
 	}
 	d.V100, d.VI = 0, 155
@@ -85,6 +86,15 @@ func TestFromDataSheet(t *testing.T) {
 // Every bad data sheet gives the zero Fluid and an error from
 // fluid.FromDataSheet that names the DataSheet field, never a parameter of
 // the functions FromDataSheet calls (CurveThrough's v1, v2 or t2).
+// A VI printed beside V100 that agrees with them (ASTM D2270 example: U
+// 22.83, Y 5.05 → VI 156) is accepted.
+func TestFromDataSheetAgreeingVI(t *testing.T) {
+	d := DataSheet{Class: HM, V40: mm2s(22.83), V100: mm2s(5.05), VI: 156, Density15: 870}
+	if _, err := FromDataSheet(d); err != nil {
+		t.Errorf("FromDataSheet with VI 156 beside V40 22.83 and V100 5.05: %v", err)
+	}
+}
+
 func TestFromDataSheetBadInput(t *testing.T) {
 	ok := DataSheet{Class: HM, V40: mm2s(32), V100: mm2s(6), Density15: 870}
 	with := func(change func(*DataSheet)) DataSheet { d := ok; change(&d); return d }
@@ -115,6 +125,10 @@ func TestFromDataSheetBadInput(t *testing.T) {
 		{"V100", with(func(d *DataSheet) { d.V100 = mm2s(-1) })},
 		{"V100", with(func(d *DataSheet) { d.V40, d.V100 = mm2s(46), mm2s(46*(1-1e-12)) })},
 		{"vi", with(func(d *DataSheet) { d.V100, d.VI = 0, math.NaN() })},
+		// A VI beside V100 must agree with them: ASTM D2270 example, U 22.83,
+		// Y 5.05 → VI 156; a sheet that says 150 contradicts itself.
+		{"VI", with(func(d *DataSheet) { d.V40, d.V100, d.VI = mm2s(22.83), mm2s(5.05), 150 })},
+		{"VI", with(func(d *DataSheet) { d.VI = math.NaN() })},
 	} {
 		f, err := FromDataSheet(c.d)
 		wantRangeError(t, err, c.param)

@@ -3,6 +3,8 @@ package fluid
 import (
 	"math"
 	"testing"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
 // ASTM D2161 checks: 700 SUS → 151.0891 mm²/s [S], to the
@@ -57,7 +59,7 @@ func TestSayboltRoundTrip(t *testing.T) {
 		if nu > 500 && nu < 500.05 {
 			tol = 2e-4
 		}
-		if !near(v.SquareMillimetresPerSecond(), nu, tol) {
+		if !checktest.Close(v.SquareMillimetresPerSecond(), nu, tol) {
 			t.Errorf("ν %g → %g SUS → %v", nu, s, v)
 		}
 	}

@@ -150,13 +150,14 @@ func V100ForVI(v40 units.KinematicViscosity, vi float64) (units.KinematicViscosi
 // any temperature. Errors name v40 or vi (a VI within a few units of the
 // top of its span gives ν100 so close to v40 that the curve is refused).
 func CurveFromVI(v40 units.KinematicViscosity, vi float64) (Curve, error) {
+	const fn = "fluid.CurveFromVI"
 	v100, err := V100ForVI(v40, vi)
 	if err != nil {
-		return Curve{}, err
+		return Curve{}, validate.Renamed(err, fn, nil)
 	}
 	c, err := CurveThrough(t40, v40, t100, v100)
 	if err != nil { // within a few VI of the top of the span: ν100 ≈ ν40
-		return Curve{}, validate.Fail("fluid.CurveFromVI", "vi", vi,
+		return Curve{}, validate.Fail(fn, "vi", vi,
 			"a VI whose 100 °C viscosity ("+v100.String()+") lies far enough below v40 = "+v40.String()+
 				" that the D341 curve spans 0.21–2·10⁷ mm²/s at finite temperatures")
 	}

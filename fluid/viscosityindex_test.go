@@ -9,6 +9,7 @@ import (
 	"strings"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -80,7 +81,7 @@ func TestD2270TableMatchesCSV(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		if !near(l.SquareMillimetresPerSecond(), row[1], 1e-15) || !near(h.SquareMillimetresPerSecond(), row[2], 1e-15) {
+		if !checktest.Close(l.SquareMillimetresPerSecond(), row[1], 1e-15) || !checktest.Close(h.SquareMillimetresPerSecond(), row[2], 1e-15) {
 			t.Errorf("Y %g: L, H = %v, %v; want %g, %g", row[0], l, h, row[1], row[2])
 		}
 	}
@@ -95,7 +96,7 @@ func TestReferenceViscositiesInterpolate(t *testing.T) {
 	l0, h0, _ := ReferenceViscosities(mm2s(8.8))
 	l1, h1, _ := ReferenceViscosities(mm2s(8.9))
 	l, h, _ := ReferenceViscosities(mm2s(8.85))
-	if !near(float64(l), float64(l0+l1)/2, 1e-9) || !near(float64(h), float64(h0+h1)/2, 1e-9) {
+	if !checktest.Close(float64(l), float64(l0+l1)/2, 1e-9) || !checktest.Close(float64(h), float64(h0+h1)/2, 1e-9) {
 		t.Errorf("L, H(8.85) = %v, %v", l, h)
 	}
 }
@@ -104,11 +105,11 @@ func TestReferenceViscositiesInterpolate(t *testing.T) {
 // last row (70 mm²/s: L 4905, H 1558) to within 0.05 %, so VI has no jump.
 func TestReferenceViscositiesAbove70(t *testing.T) {
 	l, h := 0.8353*70*70+14.67*70-216, 0.1684*70*70+11.85*70-97
-	if !near(l, 4905, 5e-4) || !near(h, 1558, 5e-4) {
+	if !checktest.Close(l, 4905, 5e-4) || !checktest.Close(h, 1558, 5e-4) {
 		t.Errorf("quadratics at 70: L %g, H %g", l, h)
 	}
 	l2, h2, _ := ReferenceViscosities(mm2s(70.000001))
-	if !near(float64(l2), 4905e-6, 5e-4) || !near(float64(h2), 1558e-6, 5e-4) {
+	if !checktest.Close(float64(l2), 4905e-6, 5e-4) || !checktest.Close(float64(h2), 1558e-6, 5e-4) {
 		t.Errorf("just above 70: L %v, H %v", l2, h2)
 	}
 }
@@ -155,7 +156,7 @@ func TestV100ForVI(t *testing.T) {
 	}
 	vi, _ := ViscosityIndex(mm2s(73.30), mm2s(8.86))
 	y, err := V100ForVI(mm2s(73.30), vi)
-	if err != nil || !near(y.SquareMillimetresPerSecond(), 8.86, 1e-12) {
+	if err != nil || !checktest.Close(y.SquareMillimetresPerSecond(), 8.86, 1e-12) {
 		t.Errorf("V100ForVI(73.30, %g) = %v, %v; want 8.86", vi, y, err)
 	}
 	c, err := CurveFromVI(mm2s(46), 150)
@@ -271,7 +272,7 @@ func TestReferenceViscositiesAt70(t *testing.T) {
 		t.Errorf("L, H(70) = %v, %v, %v; want 4905, 1558", l, h, err)
 	}
 	l, h, err = ReferenceViscosities(up(mm2s(70)))
-	if err != nil || !near(l.SquareMillimetresPerSecond(), 4903.87, 1e-9) || !near(h.SquareMillimetresPerSecond(), 1557.66, 1e-9) {
+	if err != nil || !checktest.Close(l.SquareMillimetresPerSecond(), 4903.87, 1e-9) || !checktest.Close(h.SquareMillimetresPerSecond(), 1557.66, 1e-9) {
 		t.Errorf("L, H(70⁺) = %v, %v, %v; want 4903.87, 1557.66", l, h, err)
 	}
 }
@@ -301,7 +302,7 @@ func TestViscosityIndexBranchesMeet(t *testing.T) {
 		if y == 70 {
 			tol = 2e-4
 		}
-		if v100, err := V100ForVI(h, 100); err != nil || !near(v100.SquareMillimetresPerSecond(), y, tol) {
+		if v100, err := V100ForVI(h, 100); err != nil || !checktest.Close(v100.SquareMillimetresPerSecond(), y, tol) {
 			t.Errorf("V100ForVI(H(%g), 100) = %v, %v; want %g", y, v100, err, y)
 		}
 	}

@@ -5,6 +5,7 @@ import (
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -54,7 +55,7 @@ func TestCurveSpan(t *testing.T) {
 		v units.KinematicViscosity
 	}{{s.Cold, w.Max}, {s.OptimumFrom, w.OptimumHigh}, {s.OptimumTo, w.OptimumLow}, {s.Hot, w.Min}} {
 		v, _ := c.At(p.t)
-		if !near(float64(v), float64(p.v), 1e-11) {
+		if !checktest.Close(float64(v), float64(p.v), 1e-11) {
 			t.Errorf("ν(%v) = %v, want %v", p.t, v, p.v)
 		}
 	}

@@ -1,6 +1,9 @@
 package hydro
 
-import "github.com/hydrosize/hydrosize/units"
+import (
+	"github.com/hydrosize/hydrosize/hydro/valve"
+	"github.com/hydrosize/hydrosize/units"
+)
 
 // Defaults of the design factors a [Spec] leaves out. Each is reported with
 // its rule beside the result it shaped.
@@ -12,7 +15,8 @@ const (
 	DefaultPressure = 160 * units.Bar
 
 	// DefaultReliefMargin is how far above the highest working pressure the
-	// relief valve is set when Design.ReliefMargin is not given: 10 %
-	// (common practice), so the valve stays shut in normal work.
-	DefaultReliefMargin = 0.10
+	// relief valve is set when Design.ReliefMargin is not given: the valve
+	// family's default, 10 % (common practice), so the valve stays shut in
+	// normal work.
+	DefaultReliefMargin = valve.DefaultReliefMargin
 )

@@ -17,14 +17,22 @@ import (
 // the identical value), durations as seconds ("2.5 s"), and fields left at
 // their zero value left out.
 func (s Spec) MarshalJSON() ([]byte, error) {
+	return encodeJSON(reflect.ValueOf(s))
+}
+
+// encodeJSON writes struct v as JSON, field by field.
+func encodeJSON(v reflect.Value) ([]byte, error) {
 	var b bytes.Buffer
-	if err := encodeValue(&b, reflect.ValueOf(s), ""); err != nil {
+	if err := encodeStruct(&b, v, ""); err != nil {
 		return nil, err
 	}
 	return b.Bytes(), nil
 }
 
-var marshalerTy = reflect.TypeFor[encoding.TextMarshaler]()
+var (
+	marshalerTy = reflect.TypeFor[encoding.TextMarshaler]()
+	jsonTy      = reflect.TypeFor[json.Marshaler]()
+)
 
 // encodeValue writes v as JSON; path names it in errors.
 func encodeValue(b *bytes.Buffer, v reflect.Value, path string) error {
@@ -32,6 +40,13 @@ func encodeValue(b *bytes.Buffer, v reflect.Value, path string) error {
 	switch {
 	case t == durationType:
 		writeDuration(b, time.Duration(v.Int()))
+		return nil
+	case t.Implements(jsonTy):
+		j, err := v.Interface().(json.Marshaler).MarshalJSON()
+		if err != nil {
+			return &FieldError{Path: path, Err: err}
+		}
+		b.Write(j)
 		return nil
 	case t.Implements(marshalerTy):
 		text, err := v.Interface().(encoding.TextMarshaler).MarshalText()

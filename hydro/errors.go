@@ -14,8 +14,8 @@ import (
 // matches a units sentinel with errors.Is: [units.ErrRange] for a value
 // out of range, missing or contradicting another (then errors.As finds a
 // *units.RangeError whose Param is the path), [units.ErrSyntax],
-// [units.ErrUnknownUnit] or [units.ErrDimension] for text that does not
-// read as what the field holds (a *units.ParseError). Paths use the JSON
+// [units.ErrUnknownUnit], [units.ErrDimension] or [units.ErrAmbiguous] for
+// text that does not read as what the field holds (a *units.ParseError). Paths use the JSON
 // field names also for a spec built in Go.
 type FieldError struct {
 	Path string // JSON path of the field

@@ -3,6 +3,7 @@ package hydro_test
 import (
 	"errors"
 	"fmt"
+	"os"
 
 	"github.com/hydrosize/hydrosize/hydro"
 	"github.com/hydrosize/hydrosize/units"
@@ -43,4 +44,49 @@ func ExampleSpec_Validate() {
 	// Output:
 	// hydro: the spec has 1 problem:
 	//   cycle.phases[0].moves[0].speed: missing: want a speed > 0, such as "0.1 m/s", or a time, such as "4 s"
+}
+
+// Size sizes a whole machine; every number comes with its rule.
+func ExampleSize() {
+	data, _ := os.ReadFile("../examples/size/baler.json")
+	spec, err := hydro.ParseSpec(data)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	r, err := hydro.Size(spec)
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	press := r.Actuators[0]
+	fmt.Println("press:", press.Bore.Chosen, "×", press.Rod.Chosen, "by", press.Bore.Rule)
+	fmt.Println("pump:", r.Pump.Displacement.Chosen, r.Pump.Control)
+	fmt.Println("motor:", r.Drive.Rating.Chosen)
+	fmt.Println("converged:", r.Solve.Converged)
+	worst, _ := r.Findings.Worst()
+	fmt.Println("worst finding:", worst)
+	// Output:
+	// press: 160 mm × 125 mm by standard: ISO 3320:2013, clause 5
+	// pump: 100 cm³/rev load-sensing
+	// motor: 5.5 kW
+	// converged: true
+	// worst finding: warning
+}
+
+// Sweep shows what the working pressure changes.
+func ExampleSweep() {
+	data, _ := os.ReadFile("../examples/size/baler.json")
+	spec, _ := hydro.ParseSpec(data)
+	c, err := hydro.Sweep(spec, []units.Pressure{125 * units.Bar, 200 * units.Bar})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, row := range c.Rows {
+		fmt.Println(row.Pressure, "press", row.Actuators[0].Bore, "pump", row.Pump, "motor", row.Motor)
+	}
+	// Output:
+	// 125 bar press 180 mm pump 140 cm³/rev motor 5.5 kW
+	// 200 bar press 140 mm pump 112 cm³/rev motor 5.5 kW
 }

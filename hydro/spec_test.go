@@ -17,7 +17,7 @@ import (
 // demoJSON is the baling press of the examples, a machine of our own.
 func demoJSON(t testing.TB) []byte {
 	t.Helper()
-	b, err := os.ReadFile("testdata/baler.json")
+	b, err := os.ReadFile("../examples/size/baler.json")
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -204,7 +204,7 @@ func checkProblems(t *testing.T, err error, paths []string) {
 }
 
 func matchesSentinel(err error) bool {
-	for _, s := range []error{units.ErrSyntax, units.ErrUnknownUnit, units.ErrDimension, units.ErrRange, units.ErrReference} {
+	for _, s := range []error{units.ErrSyntax, units.ErrUnknownUnit, units.ErrDimension, units.ErrRange, units.ErrReference, units.ErrAmbiguous} {
 		if errors.Is(err, s) {
 			return true
 		}
@@ -321,8 +321,8 @@ func TestValidateProblems(t *testing.T) {
 		}, []string{"cleanliness.sample.flow"}},
 		// Circuit.
 		{"center unknown", func(s *Spec) { s.Circuit.Center = "middle" }, []string{"circuit.center"}},
-		{"pump unknown", func(s *Spec) { s.Circuit.Pump = "screw" }, []string{"circuit.pump"}},
-		{"control on a gear pump", func(s *Spec) { s.Circuit.Control = "load-sensing" }, []string{"circuit.control"}},
+		{"pump unknown", func(s *Spec) { s.Circuit.Pump, s.Circuit.Control = "screw", "" }, []string{"circuit.pump"}},
+		{"control on a gear pump", func(s *Spec) { s.Circuit.Pump = "gear" }, []string{"circuit.control"}},
 		{"control unknown", func(s *Spec) { s.Circuit.Pump = "variable piston"; s.Circuit.Control = "manual" }, []string{"circuit.control"}},
 		{"conductor unknown", func(s *Spec) { s.Circuit.Conductor = "pipe" }, []string{"circuit.conductor"}},
 		{"negative bends", func(s *Spec) { s.Circuit.Return.Bends = -1 }, []string{"circuit.return.bends"}},
@@ -479,6 +479,15 @@ func FuzzParseSpec(f *testing.F) {
 				t.Fatalf("spec beside an error is not zero:\n%s", d)
 			}
 			return
+		}
+		// A valid spec sizes, or fails with a path; never a panic.
+		if r, err := Size(s); err != nil {
+			var fe *FieldError
+			if !errors.As(err, &fe) || !matchesSentinel(err) {
+				t.Fatalf("Size: %v (%T)", err, err)
+			}
+		} else if _, err := json.Marshal(r); err != nil {
+			t.Fatalf("report does not marshal: %v", err)
 		}
 		out, err := json.Marshal(s)
 		if err != nil {

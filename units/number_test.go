@@ -3,6 +3,8 @@ package units
 import (
 	"encoding/json"
 	"errors"
+	"math"
+	"strconv"
 	"strings"
 	"sync"
 	"testing"
@@ -175,4 +177,36 @@ func TestJSONBareNumberRefused(t *testing.T) {
 	if err := json.Unmarshal([]byte(`{"P": 5}`), &box); !errors.As(err, &pe) || pe.Func != "units.Pressure.UnmarshalJSON" {
 		t.Errorf("json 5: %#v; want a ParseError from units.Pressure.UnmarshalJSON", err)
 	}
+}
+
+// FuzzParserConventions fuzzes the number conventions a Parser names (a
+// decimal comma, a thousands mark): every error matches a sentinel and
+// quotes the input, every success is finite, and its SI value and dimension
+// read back through the package's own Parse.
+func FuzzParserConventions(f *testing.F) {
+	for _, s := range []string{"2,5 bar", "3,000 psi", "3,000.5 psi", "1.500,5 kPa", "12,500,000 Pa", "2 ft 6,5 in",
+		"1,2,3 bar", ",5 bar", "5, bar", "1.2.3 bar", "1,5e3 Pa", "1 1/2,5 in", "0,8 bar vac", "1.5 N.m", "2,5"} {
+		f.Add(s)
+	}
+	parsers := []Parser{{Decimal: ','}, {Group: ','}, {Decimal: ',', Group: '.'}, {Decimal: '.', Group: ','}}
+	f.Fuzz(func(t *testing.T, s string) {
+		for _, p := range parsers {
+			q, err := p.Parse(s)
+			if err != nil {
+				checkParseError(t, "Parser.Parse", s, q.Value(), err)
+				continue
+			}
+			v := q.Value()
+			if math.IsNaN(v) || math.IsInf(v, 0) {
+				t.Fatalf("%+v.Parse(%q) = %g with no error", p, s, v)
+			}
+			si := strconv.FormatFloat(v, 'g', -1, 64) + " (" + q.Dimension().String() + ")"
+			if back, err := Parse(si); err != nil || back.Value() != v || back.Dimension() != q.Dimension() {
+				t.Fatalf("%+v.Parse(%q) = %v; %q reads back as %v, %v", p, s, q, si, back, err)
+			}
+			if l, err := p.ParseLength(s); err == nil && (math.IsNaN(float64(l)) || math.IsInf(float64(l), 0)) {
+				t.Fatalf("%+v.ParseLength(%q) = %v with no error", p, s, l)
+			}
+		}
+	})
 }

@@ -8,10 +8,6 @@ import (
 	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
-func near(got, want, rel float64) bool {
-	return math.Abs(got-want) <= rel*math.Abs(want)
-}
-
 // Esposito, Fluid Power with Applications, 7th ed., Example 6-1 (inputs);
 // results by the book's method, printed to four digits: 20 gpm into a 2 in
 // bore with a 1 in rod, 1000 lb load both ways → extend 318.3 psi, 2.042 ft/s,
@@ -42,7 +38,7 @@ func TestCylinderWorkedExample(t *testing.T) {
 			t.Fatal(err)
 		}
 		power := p.TimesFlow(q)
-		if mech := load.TimesVelocity(v); !near(float64(mech), float64(power), 1e-14) {
+		if mech := load.TimesVelocity(v); !checktest.Close(float64(mech), float64(power), 1e-14) {
 			t.Errorf("%s: F·v = %v, p·Q = %v; an ideal cylinder turns all of p·Q into F·v", c.name, mech, power)
 		}
 		if math.Abs(p.PSI()-c.psi) > c.tolP || math.Abs(v.FeetPerSecond()-c.fps) > c.tolV || math.Abs(power.Horsepower()-c.hp) > c.tolH {
@@ -53,10 +49,10 @@ func TestCylinderWorkedExample(t *testing.T) {
 
 // One horsepower is 550 ft·lbf/s by definition (NIST SP 811, Appendix B).
 func TestForceTimesVelocity(t *testing.T) {
-	if hp := (550 * PoundForce).TimesVelocity(1 * FootPerSecond).Horsepower(); !near(hp, 1, 1e-15) {
+	if hp := (550 * PoundForce).TimesVelocity(1 * FootPerSecond).Horsepower(); !checktest.Close(hp, 1, 1e-15) {
 		t.Errorf("550 lbf at 1 ft/s = %.17g hp, want 1", hp)
 	}
-	if kw := (10 * Kilonewton).TimesVelocity(0.1 * MetrePerSecond).Kilowatts(); !near(kw, 1, 1e-15) {
+	if kw := (10 * Kilonewton).TimesVelocity(0.1 * MetrePerSecond).Kilowatts(); !checktest.Close(kw, 1, 1e-15) {
 		t.Errorf("10 kN at 0.1 m/s = %.17g kW, want 1", kw)
 	}
 }
@@ -65,17 +61,17 @@ func TestForceTimesVelocity(t *testing.T) {
 // hp = psi·gpm/1714.29 (1714 in print) and kW = bar·(L/min)/600 exactly.
 func TestTradePowerConstants(t *testing.T) {
 	hp := (1 * PSI).TimesFlow(1 * USGallonPerMinute).Horsepower()
-	if !near(1/hp, 1714.2857, 1e-7) { // 1714.285714… = 12000/7 from the definitions
+	if !checktest.Close(1/hp, 1714.2857, 1e-7) { // 1714.285714… = 12000/7 from the definitions
 		t.Errorf("psi·gpm per hp = %.7f, want 1714.2857", 1/hp)
 	}
 	kw := (1 * Bar).TimesFlow(1 * LitrePerMinute).Kilowatts()
-	if !near(1/kw, 600, 1e-15) {
+	if !checktest.Close(1/kw, 600, 1e-15) {
 		t.Errorf("bar·L/min per kW = %.15g, want 600", 1/kw)
 	}
 	// Torque [lbf·in] = 63 025·hp/rpm, the trade constant, derived from the
 	// NIST SP 811 definitions of hp (550 ft·lbf/s), foot and inch.
 	torque, err := (1 * Horsepower).PerSpeed(1 * RevolutionPerMinute)
-	if err != nil || !near(torque.PoundForceInches(), 63025, 1e-5) {
+	if err != nil || !checktest.Close(torque.PoundForceInches(), 63025, 1e-5) {
 		t.Errorf("hp/rpm = %.2f lbf·in, want 63025 (%v)", torque.PoundForceInches(), err)
 	}
 	// Velocity [ft/s] = 0.3208·gpm/in², the trade constant, derived from the
@@ -92,45 +88,45 @@ func TestTradePowerConstants(t *testing.T) {
 func TestRotaryRelations(t *testing.T) {
 	d := 100 * CubicCentimetrePerRevolution
 	n := 1500 * RevolutionPerMinute
-	if q := d.TimesSpeed(n); !near(q.LitresPerMinute(), 150, 1e-14) {
+	if q := d.TimesSpeed(n); !checktest.Close(q.LitresPerMinute(), 150, 1e-14) {
 		t.Errorf("flow = %v, want 150 L/min", q)
 	}
 	tq := d.TimesPressure(100 * Bar)
-	if !near(tq.NewtonMetres(), 1000/(2*math.Pi), 1e-14) {
+	if !checktest.Close(tq.NewtonMetres(), 1000/(2*math.Pi), 1e-14) {
 		t.Errorf("torque = %v", tq)
 	}
-	if p := tq.TimesSpeed(n); !near(p.Kilowatts(), 25, 1e-14) {
+	if p := tq.TimesSpeed(n); !checktest.Close(p.Kilowatts(), 25, 1e-14) {
 		t.Errorf("power = %v, want 25 kW", p)
 	}
 	back, err := d.TimesSpeed(n).PerSpeed(n)
-	if err != nil || !near(float64(back), float64(d), 1e-15) {
+	if err != nil || !checktest.Close(float64(back), float64(d), 1e-15) {
 		t.Errorf("PerSpeed round trip = %v, %v", back, err)
 	}
 }
 
 func TestProductsAndQuotients(t *testing.T) {
-	if v := CircleArea(100 * Millimetre).TimesLength(1 * Metre); !near(v.Litres(), 7.853981633974483, 1e-15) {
+	if v := CircleArea(100 * Millimetre).TimesLength(1 * Metre); !checktest.Close(v.Litres(), 7.853981633974483, 1e-15) {
 		t.Errorf("volume = %v", v)
 	}
-	if v := (30 * LitrePerMinute).TimesDuration(2 * time.Minute); !near(v.Litres(), 60, 1e-15) {
+	if v := (30 * LitrePerMinute).TimesDuration(2 * time.Minute); !checktest.Close(v.Litres(), 60, 1e-15) {
 		t.Errorf("volume = %v", v)
 	}
 	q, err := (60 * Litre).PerDuration(2 * time.Minute)
-	if err != nil || !near(q.LitresPerMinute(), 30, 1e-15) {
+	if err != nil || !checktest.Close(q.LitresPerMinute(), 30, 1e-15) {
 		t.Errorf("flow = %v, %v", q, err)
 	}
-	if e := (2 * Kilowatt).TimesDuration(30 * time.Minute); !near(e.KilowattHours(), 1, 1e-15) {
+	if e := (2 * Kilowatt).TimesDuration(30 * time.Minute); !checktest.Close(e.KilowattHours(), 1, 1e-15) {
 		t.Errorf("energy = %v", e)
 	}
 	// 46 mm²/s at 870 kg/m³ is 40.02 mPa·s.
-	if mu := (46 * Centistokes).TimesDensity(870 * KilogramPerCubicMetre); !near(mu.MillipascalSeconds(), 40.02, 1e-12) {
+	if mu := (46 * Centistokes).TimesDensity(870 * KilogramPerCubicMetre); !checktest.Close(mu.MillipascalSeconds(), 40.02, 1e-12) {
 		t.Errorf("dynamic viscosity = %v", mu)
 	}
 	// One kgf is one kilogram under standard gravity (NIST SP 811).
 	if w := (1 * Kilogram).TimesAcceleration(StandardGravity); w != KilogramForce {
 		t.Errorf("weight of 1 kg = %v N, want %v", float64(w), float64(KilogramForce))
 	}
-	if p := (3 * Bar).TimesArea(2 * SquareCentimetre); !near(p.Newtons(), 60, 1e-15) {
+	if p := (3 * Bar).TimesArea(2 * SquareCentimetre); !checktest.Close(p.Newtons(), 60, 1e-15) {
 		t.Errorf("force = %v", p)
 	}
 }
@@ -188,7 +184,7 @@ func TestTemperatureScales(t *testing.T) {
 		{-40, -40, 233.15},
 		{-273.15, -459.67, 0},
 	} {
-		if got := TemperatureFromCelsius(c.c); !near(float64(got), c.k, 1e-15) && c.k != 0 {
+		if got := TemperatureFromCelsius(c.c); !checktest.Close(float64(got), c.k, 1e-15) && c.k != 0 {
 			t.Errorf("%v °C = %v K, want %v", c.c, float64(got), c.k)
 		}
 		if got := TemperatureFromFahrenheit(c.f); math.Abs(float64(got)-c.k) > 1e-12 {

@@ -148,51 +148,65 @@ func pad(s string, width int) string {
 	return s
 }
 
-// show formats q in both systems, trying the quantity types in turn. Torque
-// and energy share a dimension (N·m = J); the unit as written tells them
-// apart: the energy spellings end in J, h (kWh) or BTU/Btu.
+// show formats q in both systems as the first quantity type whose
+// dimension and reference it has. Torque and energy share a dimension (N·m
+// = J); the unit as written tells them apart: the energy spellings end in J,
+// h (kWh) or BTU/Btu. A plain SI pressure spelling (Pa, MPa) reads as either
+// reference and is shown as gauge. A dimension no type has is an error
+// matching units.ErrDimension.
 func show(q units.Quantity, text string) (metric, us, kind string, err error) {
 	m, u := units.Metric(), units.USCustomary()
-	if p, err := q.Pressure(); err == nil {
-		return m.FormatPressure(p), u.FormatPressure(p), "pressure (gauge)", nil
+	var energy []func() (shown, bool)
+	if strings.ContainsAny(lastLetter(text), "JhUu") {
+		energy = append(energy, as(q.Energy, m.FormatEnergy, u.FormatEnergy, "energy"))
 	}
-	if p, err := q.AbsolutePressure(); err == nil {
-		return m.FormatAbsolutePressure(p), u.FormatAbsolutePressure(p), "pressure (absolute)", nil
+	tries := append(energy,
+		as(q.Pressure, m.FormatPressure, u.FormatPressure, "pressure (gauge)"),
+		as(q.AbsolutePressure, m.FormatAbsolutePressure, u.FormatAbsolutePressure, "pressure (absolute)"),
+		as(q.Flow, m.FormatFlow, u.FormatFlow, "flow"),
+		as(q.Displacement, m.FormatDisplacement, u.FormatDisplacement, "displacement"),
+		as(q.RotationalSpeed, m.FormatRotationalSpeed, u.FormatRotationalSpeed, "rotational speed"),
+		as(q.Torque, m.FormatTorque, u.FormatTorque, "torque"),
+		as(q.Force, m.FormatForce, u.FormatForce, "force"),
+		as(q.Power, m.FormatPower, u.FormatPower, "power"),
+		as(q.Length, m.FormatLength, u.FormatLength, "length"),
+		as(q.Area, m.FormatArea, u.FormatArea, "area"),
+		as(q.Volume, m.FormatVolume, u.FormatVolume, "volume"),
+		as(q.Mass, m.FormatMass, u.FormatMass, "mass"),
+		as(q.Velocity, m.FormatVelocity, u.FormatVelocity, "velocity"),
+		as(q.Acceleration, m.FormatAcceleration, u.FormatAcceleration, "acceleration"),
+		as(q.Temperature, m.FormatTemperature, u.FormatTemperature, "temperature"),
+		as(q.TemperatureDifference, m.FormatTemperatureDifference, u.FormatTemperatureDifference, "temperature difference"),
+		as(q.KinematicViscosity, m.FormatKinematicViscosity, u.FormatKinematicViscosity, "kinematic viscosity"),
+		as(q.DynamicViscosity, m.FormatDynamicViscosity, u.FormatDynamicViscosity, "dynamic viscosity"),
+		as(q.Density, m.FormatDensity, u.FormatDensity, "density"),
+		as(q.SpecificHeatCapacity, m.FormatSpecificHeatCapacity, u.FormatSpecificHeatCapacity, "specific heat capacity"),
+		as(q.HeatTransferCoefficient, m.FormatHeatTransferCoefficient, u.FormatHeatTransferCoefficient, "heat transfer coefficient"),
+		as(q.ThermalConductivity, m.FormatThermalConductivity, u.FormatThermalConductivity, "thermal conductivity"),
+		as(q.Stiffness, m.FormatStiffness, u.FormatStiffness, "stiffness"),
+		as(q.Frequency, m.FormatFrequency, u.FormatFrequency, "frequency"),
+	)
+	for _, try := range tries {
+		if s, ok := try(); ok {
+			return s.metric, s.us, s.kind, nil
+		}
 	}
-	if f, err := q.Flow(); err == nil {
-		return m.FormatFlow(f), u.FormatFlow(f), "flow", nil
+	return "", "", "", fmt.Errorf("%w: no quantity type has dimension %v", units.ErrDimension, q.Dimension())
+}
+
+// shown is a quantity written in both systems, with its kind.
+type shown struct{ metric, us, kind string }
+
+// as returns a try that converts a quantity with conv and, when it fits,
+// writes it with the metric and the US customary formatter.
+func as[T any](conv func() (T, error), metric, us func(T) string, kind string) func() (shown, bool) {
+	return func() (shown, bool) {
+		v, err := conv()
+		if err != nil {
+			return shown{}, false
+		}
+		return shown{metric(v), us(v), kind}, true
 	}
-	if d, err := q.Displacement(); err == nil {
-		return m.FormatDisplacement(d), u.FormatDisplacement(d), "displacement", nil
-	}
-	if n, err := q.RotationalSpeed(); err == nil {
-		return m.FormatRotationalSpeed(n), u.FormatRotationalSpeed(n), "rotational speed", nil
-	}
-	if e, err := q.Energy(); err == nil && strings.ContainsAny(lastLetter(text), "JhUu") {
-		return m.FormatEnergy(e), u.FormatEnergy(e), "energy", nil
-	}
-	if t, err := q.Torque(); err == nil {
-		return m.FormatTorque(t), u.FormatTorque(t), "torque", nil
-	}
-	if l, err := q.Length(); err == nil {
-		return m.FormatLength(l), u.FormatLength(l), "length", nil
-	}
-	if t, err := q.Temperature(); err == nil {
-		return m.FormatTemperature(t), u.FormatTemperature(t), "temperature", nil
-	}
-	if v, err := q.KinematicViscosity(); err == nil {
-		return m.FormatKinematicViscosity(v), u.FormatKinematicViscosity(v), "kinematic viscosity", nil
-	}
-	if p, err := q.Power(); err == nil {
-		return m.FormatPower(p), u.FormatPower(p), "power", nil
-	}
-	if f, err := q.Force(); err == nil {
-		return m.FormatForce(f), u.FormatForce(f), "force", nil
-	}
-	if v, err := q.Volume(); err == nil {
-		return m.FormatVolume(v), u.FormatVolume(v), "volume", nil
-	}
-	return "", "", "", fmt.Errorf("no conversion shown for dimension %v", q.Dimension())
 }
 
 // lastLetter returns the last character of s, spaces left out.

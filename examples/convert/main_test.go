@@ -81,3 +81,40 @@ func TestRunReportsEveryBadArgument(t *testing.T) {
 		}
 	}
 }
+
+// TestRunShowsEveryQuantityType: convert shows a quantity of every type the
+// units package has, not only the ones of the demo. The values are worked by
+// hand from the NIST SP 811 definitions (ft = 0.3048 m, in = 0.0254 m, lbm =
+// 0.45359237 kg, lbf = 4.4482216 N, BTU = 1055.05585 J, °F = 1.8·°C + 32),
+// rounded to the four digits the trade systems print.
+func TestRunShowsEveryQuantityType(t *testing.T) {
+	for _, c := range []struct{ in, metric, us string }{
+		{"4.5 ft/s", "1.372 m/s", "4.5 ft/s, velocity"},      // 4.5 × 0.3048
+		{"12 in²", "77.42 cm²", "12 in², area"},              // 12 × 6.4516 cm²
+		{"20 L", "20 L", "5.283 gal, volume"},                // 20 / 3.785411784
+		{"20 kg", "20 kg", "44.09 lbm, mass"},                // 20 / 0.45359237
+		{"870 kg/m³", "870 kg/m³", "54.31 lbm/ft³, density"}, // 870 / 16.018463
+		{"50 Hz", "50 Hz", "50 Hz, frequency"},
+		{"30 cP", "30 mPa·s", "30 cP, dynamic viscosity"},                                 // 1 cP = 1 mPa·s
+		{"2 ΔK", "2 K", "3.6 °F, temperature difference"},                                 // 1.8 × 2
+		{"9.80665 m/s²", "9.807 m/s²", "32.17 ft/s², acceleration"},                       // 9.80665 / 0.3048
+		{"5 kN/mm", "5 kN/mm", "28551 lbf/in, stiffness"},                                 // 5e6 N/m × 0.0254 / 4.4482216
+		{"2 kJ/(kg·K)", "2 kJ/(kg·K)", "0.4777 BTU/(lbm·°F), specific heat capacity"},     // 2000 / 4186.8
+		{"0.15 W/(m·K)", "0.15 W/(m·K)", "0.08667 BTU/(h·ft·°F), thermal conductivity"},   // 0.15 / 1.730735
+		{"20 W/(m²·K)", "20 W/(m²·K)", "3.522 BTU/(h·ft²·°F), heat transfer coefficient"}, // 20 / 5.678263
+	} {
+		var b bytes.Buffer
+		if err := run(&b, []string{c.in}); err != nil {
+			t.Errorf("%q: %v", c.in, err)
+			continue
+		}
+		if want := pad(c.metric, 16) + " " + c.us; !strings.Contains(b.String(), want) {
+			t.Errorf("%q: output lacks %q:\n%s", c.in, want, b.String())
+		}
+	}
+	// A dimension no quantity type has is reported as a dimension error.
+	var b bytes.Buffer
+	if err := run(&b, []string{"5 bar/s"}); !errors.Is(err, units.ErrDimension) || !strings.Contains(err.Error(), `"5 bar/s"`) {
+		t.Errorf("5 bar/s: err = %v, want a units.ErrDimension naming the argument", err)
+	}
+}

@@ -63,7 +63,7 @@ func (c Cycle) validate(fn string) error {
 		return err
 	}
 	if c.Precharge >= c.Min {
-		return validate.Fail(fn, "Precharge", c.Precharge, "below Min ("+c.Min.String()+"): a precharge at or above the minimum working pressure delivers nothing above it")
+		return validate.Fail(fn, "Precharge", c.Precharge, "below Min ("+c.Min.String()+"): at or above it the accumulator is empty by the time the pressure falls to Min")
 	}
 	if err := validate.Above(fn, "Max", c.Max, c.Min); err != nil {
 		return err
@@ -74,22 +74,35 @@ func (c Cycle) validate(fn string) error {
 	return validate.InRange(fn, "Discharge", c.Discharge, minIndex, maxIndex)
 }
 
+// lnVolumes returns ln(V₂/V₀) and ln(V₁/V₀): V₂ = V₀·(p₀/p₂)^(1/n_c),
+// V₁ = V₂·(p₂/p₁)^(1/n_d), V₁ held at V₀ at most. In logarithms no ratio
+// overflows.
+func (c Cycle) lnVolumes() (l2, l1 float64) {
+	l2 = math.Log(float64(c.Precharge/c.Max)) / c.Charge
+	l1 = min(0, l2+math.Log(float64(c.Max/c.Min))/c.Discharge)
+	return l2, l1
+}
+
 // yield is the oil volume delivered per unit of nominal gas volume,
-// ΔV/V₀ = (p₀/p₂)^(1/n_c)·((p₂/p₁)^(1/n_d) − 1), written so that it stays
-// accurate when p₁ is close to p₂.
+// ΔV/V₀ = V₁/V₀ − V₂/V₀ = (V₂/V₀)·(exp(ln(V₁/V₂)) − 1), written so that it
+// stays accurate when p₁ is close to p₂.
 func (c Cycle) yield() float64 {
-	v2 := math.Pow(float64(c.Precharge/c.Max), 1/c.Charge)
-	return v2 * math.Expm1(math.Log(float64(c.Max/c.Min))/c.Discharge)
+	l2, l1 := c.lnVolumes()
+	return math.Exp(l2) * math.Expm1(l1-l2)
 }
 
 // Volumes returns the gas volumes of an accumulator of nominal gas volume
 // v0 at the highest and the lowest working pressure:
 //
 //	V₂ = V₀·(p₀/p₂)^(1/n_c)   (charged from p₀ to p₂)
-//	V₁ = V₂·(p₂/p₁)^(1/n_d)   (discharged from p₂ to p₁)
+//	V₁ = V₂·(p₂/p₁)^(1/n_d)   (discharged from p₂ to p₁), at most V₀
 //
-// v0 must be finite and > 0, and the cycle valid (0 < p₀ < p₁ < p₂,
-// indices in [1, 2]).
+// The gas cannot expand past the shell: when a charge index above the
+// discharge index would put V₁ above V₀, the bladder closes on its poppet
+// (the piston reaches its stop) at V₀ while the pressure is still above
+// p₁, and atMin is V₀. v0 must be finite and > 0, and the cycle valid
+// (0 < p₀ < p₁ < p₂, indices in [1, 2]); a V₂ that underflows to 0 is an
+// error naming atMax.
 func (c Cycle) Volumes(v0 units.Volume) (atMax, atMin units.Volume, err error) {
 	const fn = "accumulator.Cycle.Volumes"
 	if err := c.validate(fn); err != nil {
@@ -98,14 +111,18 @@ func (c Cycle) Volumes(v0 units.Volume) (atMax, atMin units.Volume, err error) {
 	if err := validate.Positive(fn, "v0", v0); err != nil {
 		return 0, 0, err
 	}
-	atMax = v0 * units.Volume(math.Pow(float64(c.Precharge/c.Max), 1/c.Charge))
-	atMin = atMax * units.Volume(math.Pow(float64(c.Max/c.Min), 1/c.Discharge))
-	return atMax, atMin, nil
+	l2, l1 := c.lnVolumes()
+	atMax = v0 * units.Volume(math.Exp(l2))
+	if err := validate.PositiveResult(fn, "atMax", atMax); err != nil {
+		return 0, 0, err
+	}
+	return atMax, v0 * units.Volume(math.Exp(l1)), nil
 }
 
 // Delivered returns the oil volume an accumulator of nominal gas volume v0
-// delivers from p₂ down to p₁: ΔV = V₁ − V₂ (see Volumes). v0 must be
-// finite and > 0 and the cycle valid.
+// delivers from p₂ down to p₁: ΔV = V₁ − V₂, with V₁ at most V₀ (see
+// Volumes). v0 must be finite and > 0 and the cycle valid; a ΔV that
+// underflows to 0 is an error.
 func (c Cycle) Delivered(v0 units.Volume) (units.Volume, error) {
 	const fn = "accumulator.Cycle.Delivered"
 	if err := c.validate(fn); err != nil {
@@ -115,12 +132,16 @@ func (c Cycle) Delivered(v0 units.Volume) (units.Volume, error) {
 		return 0, err
 	}
 	dv := v0 * units.Volume(c.yield())
-	return validate.Checked(fn, "ΔV", dv)
+	if err := validate.PositiveResult(fn, "ΔV", dv); err != nil {
+		return 0, err
+	}
+	return dv, nil
 }
 
 // Size returns the nominal gas volume that delivers oil volume dv from p₂
 // down to p₁: V₀ = ΔV / ((p₀/p₂)^(1/n_c)·((p₂/p₁)^(1/n_d) − 1)); for one
-// index n, V₀ = ΔV / ((p₀/p₁)^(1/n) − (p₀/p₂)^(1/n)). dv must be finite
+// index n, V₀ = ΔV / ((p₀/p₁)^(1/n) − (p₀/p₂)^(1/n)); with V₁ held at V₀
+// (see Volumes), V₀ = ΔV / (1 − (p₀/p₂)^(1/n_c)). dv must be finite
 // and > 0 and the cycle valid; a precharge at or above Min fails, since
 // the accumulator would deliver nothing above Min.
 func (c Cycle) Size(dv units.Volume) (units.Volume, error) {

@@ -50,6 +50,43 @@ func TestGasLawHandValues(t *testing.T) {
 	}
 }
 
+// TestGasStaysInTheShell: charged fast (n 1.4) from 90 to 300 bar abs and
+// discharged slowly (n 1) to 100 bar abs, the gas would go from
+// V₂ = V₀·0.3^(1/1.4) = 0.423170·V₀ to V₂·(300/100) = 1.27·V₀, more than
+// the shell holds. The
+// gas stops at V₀ (the bladder on its poppet) above p₁, so the delivery is
+// V₀ − V₂ = 0.576830·V₀ (0.3^(1/1.4) by hand, Python 3.11 math as a
+// calculator).
+func TestGasStaysInTheShell(t *testing.T) {
+	c := Cycle{Precharge: 90 * bara, Min: 100 * bara, Max: 300 * bara, Charge: Adiabatic, Discharge: Isothermal}
+	v2, v1, err := c.Volumes(10 * units.Litre)
+	if err != nil || math.Abs(v2.Litres()-4.23170) > 5e-5 || v1 != 10*units.Litre {
+		t.Errorf("Volumes(10 L) = %v, %v, %v; want 4.23170 L and the whole 10 L", v2, v1, err)
+	}
+	dv, err := c.Delivered(10 * units.Litre)
+	if err != nil || math.Abs(dv.Litres()-5.76830) > 5e-5 {
+		t.Errorf("Delivered(10 L) = %v, %v; want 5.76830 L", dv, err)
+	}
+	if v0, err := c.Size(dv); err != nil || math.Abs(v0.Litres()-10) > 1e-12 {
+		t.Errorf("Size(Delivered(10 L)) = %v, %v", v0, err)
+	}
+}
+
+func TestGasLawExtremes(t *testing.T) {
+	// p₀/p₂ underflows to 0 and p₂/p₁ overflows: an error, never 0·Inf.
+	c := Polytropic(5e-324, 2e-3, math.MaxFloat64, Isothermal)
+	v2, v1, err := c.Volumes(1)
+	if v2 != 0 || v1 != 0 {
+		t.Errorf("Volumes = %v, %v beside %v", v2, v1, err)
+	}
+	t.Run("volumes", func(t *testing.T) { checktest.RangeError(t, err, "atMax") })
+	dv, err := c.Delivered(1)
+	if dv != 0 {
+		t.Errorf("Delivered = %v beside %v", dv, err)
+	}
+	t.Run("delivered", func(t *testing.T) { checktest.RangeError(t, err, "ΔV") })
+}
+
 func TestGasLawBadInput(t *testing.T) {
 	ok := Polytropic(90*bara, 100*bara, 200*bara, 1)
 	for _, c := range []struct {
@@ -74,4 +111,18 @@ func TestGasLawBadInput(t *testing.T) {
 	t.Run("dv", func(t *testing.T) { _, err := ok.Size(0); checktest.RangeError(t, err, "dv") })
 	t.Run("v0", func(t *testing.T) { _, err := ok.Delivered(-1); checktest.RangeError(t, err, "v0") })
 	t.Run("volumes", func(t *testing.T) { _, _, err := ok.Volumes(0); checktest.RangeError(t, err, "v0") })
+}
+
+// BenchmarkCycleSize sizes a mixed cycle (isothermal charge, adiabatic
+// discharge) for a range of volumes.
+func BenchmarkCycleSize(b *testing.B) {
+	c := Cycle{Precharge: 90 * bara, Min: 100 * bara, Max: 200 * bara, Charge: Isothermal, Discharge: Adiabatic}
+	dvs := [...]units.Volume{0.5e-3, 1e-3, 2.5e-3, 5e-3, 12e-3}
+	b.ReportAllocs()
+	var sink units.Volume
+	for i := 0; b.Loop(); i++ {
+		v, _ := c.Size(dvs[i%len(dvs)])
+		sink += v
+	}
+	_ = sink
 }

@@ -32,8 +32,12 @@ func PrechargeAt(p units.AbsolutePressure, from, to units.Temperature) (units.Ab
 	if err := validate.Positive(fn, "to", to); err != nil {
 		return 0, err
 	}
-	r := p * units.AbsolutePressure(to/from)
-	return validate.Checked(fn, "p", r)
+	return validate.Checked(fn, "p", atTemperature(p, from, to))
+}
+
+// atTemperature is Gay-Lussac's law, p·T₂/T₁, unchecked.
+func atTemperature(p units.AbsolutePressure, from, to units.Temperature) units.AbsolutePressure {
+	return p * units.AbsolutePressure(to/from)
 }
 
 // Kind is the construction of an accumulator, which limits how far its gas
@@ -145,8 +149,11 @@ func (c Charging) Recommend() (Precharge, error) {
 		return Precharge{}, err
 	}
 	p, err := c.check(fn, fill)
+	if err != nil {
+		return Precharge{}, err
+	}
 	p.Rule = components.PracticeRule("precharge about 0.9 × the minimum working pressure at the working gas temperature")
-	return p, err
+	return p, nil
 }
 
 // Check returns how a precharge fill, set at the fill temperature, fares:
@@ -157,7 +164,8 @@ func (c Charging) Recommend() (Precharge, error) {
 // 8:1 for a diaphragm, common practice). A failed check carries a caution.
 // A fill at or above Min is a failed check, not an error: it is a design
 // question. The Charging must be valid as for Recommend, and fill finite
-// and > 0.
+// and > 0; a charge or ratio that overflows is an error naming precharge
+// or Ratio.
 func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 	const fn = "accumulator.Charging.Check"
 	if err := c.validate(fn); err != nil {
@@ -167,12 +175,15 @@ func (c Charging) Check(fill units.AbsolutePressure) (Precharge, error) {
 		return Precharge{}, err
 	}
 	p, err := c.check(fn, fill)
+	if err != nil {
+		return Precharge{}, err
+	}
 	p.Rule = components.CallerRule("fill")
-	return p, err
+	return p, nil
 }
 
 func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, error) {
-	at := func(t units.Temperature) units.AbsolutePressure { return fill * units.AbsolutePressure(t/c.Fill) }
+	at := func(t units.Temperature) units.AbsolutePressure { return atTemperature(fill, c.Fill, t) }
 	p := Precharge{Fill: fill, Working: at(c.Working)}
 	for _, t := range []units.Temperature{c.Coldest, c.Fill, c.Working, c.Hottest} {
 		if !slices.ContainsFunc(p.Points, func(q PrechargePoint) bool { return q.Temperature == t }) {
@@ -195,7 +206,11 @@ func (c Charging) check(fn string, fill units.AbsolutePressure) (Precharge, erro
 			c.Hottest, hot, c.Min))
 	}
 	if lim := c.Kind.maxRatio(); lim > 0 {
-		p.Ratio = components.Within(float64(c.Max/cold), lim,
+		ratio, err := validate.Checked(fn, "Ratio", float64(c.Max/cold))
+		if err != nil {
+			return Precharge{}, err
+		}
+		p.Ratio = components.Within(ratio, lim,
 			components.PracticeRule(c.Kind.String()+" accumulator: maximum pressure at most "+strconv.FormatFloat(lim, 'g', -1, 64)+" × the precharge"))
 		if !p.Ratio.OK() {
 			p.Findings = p.Findings.Merge(components.NewFinding(components.Caution, components.NoHazard, "accumulator.precharge-cold", p.Ratio.Rule,

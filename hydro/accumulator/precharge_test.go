@@ -2,6 +2,7 @@ package accumulator
 
 import (
 	"math"
+	"reflect"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -79,7 +80,22 @@ func TestPrechargeBadInput(t *testing.T) {
 		{"check fill", second(ok.Check(0)), "fill"},
 		{"at p", second(PrechargeAt(0, 300, 300)), "p"},
 		{"at to", second(PrechargeAt(1e6, 300, 0)), "to"},
+		// Max over the coldest charge overflows: an error, not an +Inf check.
+		{"ratio", bad(func(c *Charging) { c.Min, c.Max = 1e-300, 1e300 }), "Ratio"},
 	} {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
+	}
+}
+
+// A check that fails after the inputs pass (Max over the coldest charge
+// overflows) returns the zero Precharge beside its error, with no rule set.
+func TestPrechargeZeroBesideError(t *testing.T) {
+	c := Charging{Kind: Bladder, Min: 1e-300, Max: 1e300,
+		Fill: celsius(20), Working: celsius(50), Coldest: celsius(-10), Hottest: celsius(70)}
+	if p, err := c.Recommend(); err == nil || !reflect.DeepEqual(p, Precharge{}) {
+		t.Errorf("Recommend = %+v, %v; want the zero Precharge and an error", p, err)
+	}
+	if p, err := c.Check(1e-301); err == nil || !reflect.DeepEqual(p, Precharge{}) {
+		t.Errorf("Check = %+v, %v; want the zero Precharge and an error", p, err)
 	}
 }

@@ -42,9 +42,9 @@ func (c Cycle) Select(dv units.Volume, sizes components.Series[units.Volume]) (S
 	}
 	s := Sizing{Need: dv, Volume: ch}
 	if !ch.OK() {
-		n := int(math.Ceil(float64(v0 / sizes.Largest())))
+		n := math.Ceil(float64(v0 / sizes.Largest())) // a float64: it may not fit an int
 		s.Findings = components.Findings{components.NewFinding(components.Notice, components.NoHazard, "accumulator.no-size", ch.Rule,
-			"no size of %v reaches %v: use %v accumulators of %v in parallel, or a wider pressure range", sizes.Name(), v0, strconv.Itoa(n), sizes.Largest())}
+			"no size of %v reaches %v: use %v accumulators of %v in parallel, or a wider pressure range", sizes.Name(), v0, n, sizes.Largest())}
 		w, err := StoredEnergy(v0, c.Precharge, c.Max, c.Charge)
 		if err != nil {
 			return Sizing{}, err
@@ -141,8 +141,9 @@ type SupplementSizing struct {
 // must deliver at least the mean demand, or no accumulator keeps up.
 // When the pump meets the peak, no accumulator is needed: the sizing is
 // empty and a notice says so. Each phase needs a finite duration > 0 and a
-// demand ≥ 0; the pump, when given, at least the mean; the cycle and sizes
-// as Cycle.Select needs them.
+// demand ≥ 0, the cycle at most 292 years in all and a finite mean demand;
+// the pump, when given, at least the mean; the cycle and sizes as
+// Cycle.Select needs them.
 func (s Supplement) Size() (SupplementSizing, error) {
 	const fn = "accumulator.Supplement.Size"
 	if len(s.Phases) == 0 {
@@ -156,6 +157,9 @@ func (s Supplement) Size() (SupplementSizing, error) {
 		if p.Duration <= 0 {
 			return SupplementSizing{}, validate.Fail(fn, name+".Duration", p.Duration.Seconds(), "> 0 s")
 		}
+		if p.Duration > math.MaxInt64-total {
+			return SupplementSizing{}, validate.Fail(fn, name+".Duration", p.Duration.Seconds(), "short enough for a cycle of 292 years at most")
+		}
 		if err := validate.NonNegative(fn, name+".Flow", p.Flow); err != nil {
 			return SupplementSizing{}, err
 		}
@@ -163,7 +167,11 @@ func (s Supplement) Size() (SupplementSizing, error) {
 		volume += p.Flow.TimesDuration(p.Duration)
 		out.Peak = max(out.Peak, p.Flow)
 	}
-	out.Mean, _ = volume.PerDuration(total)
+	mean, err := volume.PerDuration(total)
+	if err != nil { // the volume demanded overflowed
+		return SupplementSizing{}, validate.Result(fn, "Mean", units.Flow(math.Inf(1)))
+	}
+	out.Mean = mean
 	out.Pump = s.Pump
 	if out.Pump == 0 {
 		out.Pump = out.Mean

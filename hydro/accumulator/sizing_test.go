@@ -2,6 +2,7 @@ package accumulator
 
 import (
 	"math"
+	"strings"
 	"testing"
 	"time"
 
@@ -41,6 +42,12 @@ func TestSelect(t *testing.T) {
 	s, _ = cy.Select(100*units.Litre, demoSizes(t))
 	if s.Volume.OK() || len(s.Findings.Topic("accumulator.no-size")) != 1 || s.Findings[0].Severity != components.Danger {
 		t.Errorf("too large: %v, %v", s.Volume, s.Findings)
+	}
+	// So far beyond the range that the count of accumulators in parallel
+	// does not fit an int: the notice still gives it, as a number.
+	s, err = cy.Select(1e300, demoSizes(t))
+	if f := s.Findings.Topic("accumulator.no-size"); err != nil || len(f) != 1 || strings.Contains(f[0].Text(units.Metric()), "-9") {
+		t.Errorf("far too large: %v, %v", s.Findings, err)
 	}
 	t.Run("empty sizes", func(t *testing.T) {
 		_, err := cy.Select(1e-3, components.Series[units.Volume]{})
@@ -120,6 +127,12 @@ func TestSupplement(t *testing.T) {
 		{"duration", Supplement{Phases: []Phase{cycle[0], {Duration: 0}}, Cycle: s.Cycle, Sizes: s.Sizes}, "Phases[1].Duration"},
 		{"flow", Supplement{Phases: []Phase{{Duration: time.Second, Flow: -1}}, Cycle: s.Cycle, Sizes: s.Sizes}, "Phases[0].Flow"},
 		{"pump below mean", Supplement{Phases: cycle, Pump: 10 * units.LitrePerMinute, Cycle: s.Cycle, Sizes: s.Sizes}, "Pump"},
+		// A cycle longer than a time.Duration holds, and one whose demand
+		// overflows: errors, not a wrapped negative total or +Inf.
+		{"cycle too long", Supplement{Phases: []Phase{{"a", math.MaxInt64/2 + 1, 1e-3}, {"b", math.MaxInt64/2 + 1, 0}},
+			Cycle: s.Cycle, Sizes: s.Sizes}, "Phases[1].Duration"},
+		{"demand overflows", Supplement{Phases: []Phase{{"a", time.Second, 1e308}, {"b", 10 * time.Second, 1e308}},
+			Cycle: s.Cycle, Sizes: s.Sizes}, "Mean"},
 	} {
 		t.Run(c.name, func(t *testing.T) { _, err := c.s.Size(); checktest.RangeError(t, err, c.param) })
 	}

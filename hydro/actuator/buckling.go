@@ -321,7 +321,7 @@ func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, err
 	}
 	ch, err := rods.Select(least)
 	if err != nil {
-		return RodChoice{}, rename(err, fn)
+		return RodChoice{}, validate.Renamed(err, fn, nil)
 	}
 	r := RodChoice{Rod: ch}
 	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {

@@ -56,11 +56,11 @@ func TestEulerClosedForm(t *testing.T) {
 	for _, k := range []float64{0.5, 0.7, 1, 2} {
 		want := units.Force(math.Pi * math.Pi * 210e9 * i / math.Pow(k*3, 2))
 		p, m, err := CriticalLoad(d, units.Length(k)*l, e, sy)
-		if err != nil || m != Euler || !near(p, want, 1e-13) {
+		if err != nil || m != Euler || !checktest.Close(p, want, 1e-13) {
 			t.Errorf("K %v: CriticalLoad = %v %v, %v; want %v Euler", k, p, m, err, want)
 		}
 	}
-	if p, _, _ := CriticalLoad(d, 2*units.Metre, e, sy); !near(p, 65.1132*units.Kilonewton, 1e-5) {
+	if p, _, _ := CriticalLoad(d, 2*units.Metre, e, sy); !checktest.Close(p, 65.1132*units.Kilonewton, 1e-5) {
 		t.Errorf("pinned–pinned 2 m: %v; want 65.11 kN", p)
 	}
 }
@@ -85,7 +85,7 @@ func TestJohnsonHandbook(t *testing.T) {
 		x := sy * float64(w.l) / (2 * math.Pi * gyr)
 		want := units.Force(float64(units.CircleArea(w.d)) * (sy - x*x/(c*e)))
 		p, m, err := CriticalLoad(w.d, units.Length(w.k)*w.l, units.Pressure(e), units.Pressure(sy))
-		if err != nil || m != Johnson || !near(p, want, 1e-12) {
+		if err != nil || m != Johnson || !checktest.Close(p, want, 1e-12) {
 			t.Errorf("d %v, l %v, K %v: %v %v, %v; want %v Johnson", w.d, w.l, w.k, p, m, err, want)
 		}
 	}
@@ -100,12 +100,12 @@ func TestJohnsonEulerContinuity(t *testing.T) {
 	half := units.CircleArea(d).TimesLength(1) // A·1 m: a volume only to carry A
 	py := units.Force(float64(half) * float64(sy))
 	at, m, _ := CriticalLoad(d, lkC, e, sy)
-	if !near(at, py/2, 1e-12) || m != Euler {
+	if !checktest.Close(at, py/2, 1e-12) || m != Euler {
 		t.Errorf("at λ_c: %v %v; want σ_y·A/2 = %v (Euler from λ_c on)", at, m, py/2)
 	}
 	below, mb, _ := CriticalLoad(d, lkC*(1-1e-7), e, sy)
 	above, ma, _ := CriticalLoad(d, lkC*(1+1e-7), e, sy)
-	if mb != Johnson || ma != Euler || !near(below, at, 1e-6) || !near(above, at, 1e-6) {
+	if mb != Johnson || ma != Euler || !checktest.Close(below, at, 1e-6) || !checktest.Close(above, at, 1e-6) {
 		t.Errorf("around λ_c: %v %v, %v %v; want both near %v", below, mb, above, ma, at)
 	}
 	// Tangency: the slopes dP/dlk either side agree.
@@ -125,7 +125,7 @@ func TestBucklingFallsWithLengthSquared(t *testing.T) {
 	for l := 2.0; l < 20; l *= 1.37 {
 		p1, m1, _ := CriticalLoad(d, units.Length(l), e, sy)
 		p2, m2, _ := CriticalLoad(d, units.Length(2*l), e, sy)
-		if m1 != Euler || m2 != Euler || !near(p2, p1/4, 1e-13) {
+		if m1 != Euler || m2 != Euler || !checktest.Close(p2, p1/4, 1e-13) {
 			t.Errorf("l %v m: %v, 2l: %v; want a quarter", l, p1, p2)
 		}
 	}
@@ -161,12 +161,12 @@ func TestColumnCheck(t *testing.T) {
 		t.Fatal(err)
 	}
 	wantP := units.Force(math.Pow(math.Pi, 3) * 210e9 * math.Pow(0.056, 4) / (64 * 1.65 * 1.65))
-	if r.Method != Euler || !near(r.Critical, wantP, 1e-12) || !near(r.Slenderness, 117.857, 1e-5) ||
-		!near(r.Thrust, 196.35*units.Kilonewton, 1e-4) || r.K != 1 || !near(r.Length, 1650*mm, 1e-15) {
+	if r.Method != Euler || !checktest.Close(r.Critical, wantP, 1e-12) || !checktest.Close(r.Slenderness, 117.857, 1e-5) ||
+		!checktest.Close(r.Thrust, 196.35*units.Kilonewton, 1e-4) || r.K != 1 || !checktest.Close(r.Length, 1650*mm, 1e-15) {
 		t.Errorf("check = %+v; want Euler %v", r, wantP)
 	}
 	if r.Safety.OK() || r.Safety.Limit != 3.5 || r.Safety.Rule.Kind != components.CommonPractice ||
-		!near(r.Safety.Value, float64(wantP/r.Thrust), 1e-12) {
+		!checktest.Close(r.Safety.Value, float64(wantP/r.Thrust), 1e-12) {
 		t.Errorf("safety = %+v; want a failed check against 3.5 (common practice)", r.Safety)
 	}
 	if len(r.Findings.AtLeast(components.Warning).Topic("actuator.buckling").Hazard(components.Structural)) != 1 {
@@ -215,7 +215,7 @@ func TestMinimumRod(t *testing.T) {
 		exact := c
 		exact.Cylinder.Rod = r.Rod.Required
 		x := exact.check()
-		if x.Method != w.method || !near(x.Safety.Value, 3.5, 1e-9) {
+		if x.Method != w.method || !checktest.Close(x.Safety.Value, 3.5, 1e-9) {
 			t.Errorf("%s: the least rod %v gives %v by %v; want 3.5 by %v", w.name, r.Rod.Required, x.Safety.Value, x.Method, w.method)
 		}
 		if smaller, err := components.ISO3320Rods().Below(r.Rod.Chosen); err == nil {
@@ -273,7 +273,7 @@ func TestSizeBucklingNoRod(t *testing.T) {
 	if len(r.Findings.Topic("actuator.buckling-no-rod").AtLeast(components.Warning).Hazard(components.Structural)) != 1 {
 		t.Errorf("findings %v; want the buckling warning of the largest bore", r.Findings)
 	}
-	if !near(r.Rod.Required, 525*mm, 2e-3) {
+	if !checktest.Close(r.Rod.Required, 525*mm, 2e-3) {
 		t.Errorf("rod required %v; want about 525 mm, the buckling need at the 500 mm bore", r.Rod.Required)
 	}
 }

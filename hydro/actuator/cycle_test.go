@@ -24,7 +24,7 @@ func TestProfileTime(t *testing.T) {
 		t.Errorf("trapezoid: %+v, %v", m, err)
 	}
 	m, err = Profile{Speed: 0.2, Accel: 1, Distance: 0.01}.Time()
-	if err != nil || !m.Triangular || !near(m.PeakSpeed, 0.1, 1e-14) || !within(m.Time, 200*time.Millisecond, time.Microsecond) {
+	if err != nil || !m.Triangular || !checktest.Close(m.PeakSpeed, 0.1, 1e-14) || !within(m.Time, 200*time.Millisecond, time.Microsecond) {
 		t.Errorf("triangle: %+v, %v", m, err)
 	}
 	// At the boundary (ramps exactly fill the travel) the two cases meet.
@@ -46,8 +46,8 @@ func TestMovePeakFlow(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.PeakFlow, (0.25*units.MetrePerSecond).TimesArea(c.AnnulusArea()), 1e-14) ||
-		!near(r.PeakReturn, (0.25*units.MetrePerSecond).TimesArea(c.CapArea()), 1e-14) {
+	if !checktest.Close(r.PeakFlow, (0.25*units.MetrePerSecond).TimesArea(c.AnnulusArea()), 1e-14) ||
+		!checktest.Close(r.PeakReturn, (0.25*units.MetrePerSecond).TimesArea(c.CapArea()), 1e-14) {
 		t.Errorf("peak flows %v, %v", r.PeakFlow, r.PeakReturn)
 	}
 	// 0.9 m at 0.25 m/s with 0.0125 m ramps each way: 0.1 + 3.5 + 0.1 = 3.7 s.
@@ -70,7 +70,7 @@ func TestMovePeakFlow(t *testing.T) {
 // TestRampCheck: a ramp shorter than the oil spring's MinRamp fails.
 func TestRampCheck(t *testing.T) {
 	r := Resonance{MinRamp: 150 * time.Millisecond, RampRule: components.PracticeRule("test")}
-	if c := r.Ramp(100 * time.Millisecond); c.OK() || !near(c.Ratio(), 2.0/3, 1e-12) {
+	if c := r.Ramp(100 * time.Millisecond); c.OK() || !checktest.Close(c.Ratio(), 2.0/3, 1e-12) {
 		t.Errorf("100 ms against 150 ms: %+v", c)
 	}
 	if c := r.Ramp(200 * time.Millisecond); !c.OK() {
@@ -87,13 +87,13 @@ func TestCushioning(t *testing.T) {
 	c := Cylinder{Bore: 100 * mm, Rod: 56 * mm, Stroke: 1, Rating: 250 * units.Bar}
 	cu := Cushion{Length: 30 * mm, Mass: 1000, Speed: 0.3}
 	r, err := c.Cushioning(Extend, cu)
-	if err != nil || !near(r.Decel, 1.5, 1e-14) || !near(r.Force, 1500, 1e-14) || !near(r.Pressure, 2.7823*units.Bar, 1e-4) ||
+	if err != nil || !checktest.Close(r.Decel, 1.5, 1e-14) || !checktest.Close(r.Force, 1500, 1e-14) || !checktest.Close(r.Pressure, 2.7823*units.Bar, 1e-4) ||
 		!r.Rating.OK() || len(r.Findings) != 0 {
 		t.Errorf("undriven: %+v, %v", r, err)
 	}
 	cu.Drive = 200 * units.Bar
 	r, err = c.Cushioning(Extend, cu)
-	if err != nil || !near(r.Pressure, 294.16*units.Bar, 1e-4) || r.Rating.OK() || !near(r.Energy, 4757.4, 1e-4) {
+	if err != nil || !checktest.Close(r.Pressure, 294.16*units.Bar, 1e-4) || r.Rating.OK() || !checktest.Close(r.Energy, 4757.4, 1e-4) {
 		t.Errorf("driven: %+v, %v", r, err)
 	}
 	if len(r.Findings.Hazard(components.Overpressure).AtLeast(components.Warning)) != 1 {
@@ -102,7 +102,7 @@ func TestCushioning(t *testing.T) {
 	// A smaller cushion chamber raises the pressure in proportion.
 	cu.Area = c.AnnulusArea() / 2
 	r2, _ := c.Cushioning(Extend, cu)
-	if !near(r2.Pressure, 2*r.Pressure, 1e-12) {
+	if !checktest.Close(r2.Pressure, 2*r.Pressure, 1e-12) {
 		t.Errorf("half the area: %v; want %v", r2.Pressure, 2*r.Pressure)
 	}
 	// Friction that stops the mass on its own needs no cushion pressure.

@@ -12,11 +12,6 @@ import (
 
 const mm = units.Millimetre
 
-// near reports whether got is within rel (relative) of want.
-func near[T ~float64](got, want T, rel float64) bool {
-	return math.Abs(float64(got-want)) <= rel*math.Abs(float64(want))
-}
-
 // textbookCylinder is the cylinder of Esposito, Fluid Power with
 // Applications, 7th ed., Example 6-1 (inputs; from memory): 2 in bore,
 // 1 in rod. The stroke is not part of the example.
@@ -56,7 +51,7 @@ func TestTextbookExtendRetract(t *testing.T) {
 			t.Errorf("%v: power = %.4f hp; want %v", w.dir, hp, w.hp)
 		}
 		f, err := c.Force(w.dir, p, 0)
-		if err != nil || !near(f, load, 1e-14) {
+		if err != nil || !checktest.Close(f, load, 1e-14) {
 			t.Errorf("%v: Force(PressureFor(load)) = %v, %v; want %v back", w.dir, f, err, load)
 		}
 	}
@@ -78,14 +73,14 @@ func TestAreas(t *testing.T) {
 		{"OutletArea(Extend)", c.OutletArea(Extend), 4005.530633e-6},
 		{"OutletArea(Retract)", c.OutletArea(Retract), 7853.981634e-6},
 	} {
-		if !near(w.got, w.want, 1e-9) {
+		if !checktest.Close(w.got, w.want, 1e-9) {
 			t.Errorf("%s = %.9g m²; want %.9g", w.name, float64(w.got), float64(w.want))
 		}
 	}
 	if phi, err := c.AreaRatio(); err != nil || math.Abs(phi-1/(1-0.49)) > 1e-12 {
 		t.Errorf("AreaRatio = %v, %v; want 1/(1 − 0.7²) = 1.96078", phi, err)
 	}
-	if v := c.Volume(Extend); !near(v, 3.926990817*units.Litre, 1e-9) {
+	if v := c.Volume(Extend); !checktest.Close(v, 3.926990817*units.Litre, 1e-9) {
 		t.Errorf("Volume(Extend) = %v; want 3.927 L", v)
 	}
 	d := c
@@ -110,11 +105,11 @@ func TestBackPressure(t *testing.T) {
 		want units.Force
 	}{{Extend, (95 * units.Bar).TimesArea(a1)}, {Retract, (40 * units.Bar).TimesArea(a1)}} {
 		f, err := c.Force(w.dir, 100*units.Bar, 10*units.Bar)
-		if err != nil || !near(f, w.want, 1e-12) {
+		if err != nil || !checktest.Close(f, w.want, 1e-12) {
 			t.Errorf("%v: Force = %v, %v; want %v", w.dir, f, err, w.want)
 		}
 		p, err := c.PressureFor(w.dir, w.want, 10*units.Bar)
-		if err != nil || !near(p, 100*units.Bar, 1e-12) {
+		if err != nil || !checktest.Close(p, 100*units.Bar, 1e-12) {
 			t.Errorf("%v: PressureFor = %v, %v; want 100 bar", w.dir, p, err)
 		}
 	}
@@ -135,7 +130,7 @@ func TestReturnFlow(t *testing.T) {
 		want units.Flow
 	}{{Retract, 80 * units.LitrePerMinute}, {Extend, 20 * units.LitrePerMinute}} {
 		r, err := c.ReturnFlow(w.dir, q)
-		if err != nil || !near(r, w.want, 1e-12) {
+		if err != nil || !checktest.Close(r, w.want, 1e-12) {
 			t.Errorf("%v: ReturnFlow = %v, %v; want %v", w.dir, r, err, w.want)
 		}
 	}
@@ -150,11 +145,11 @@ func TestSpeedFlowTime(t *testing.T) {
 	// 63 mm bore at 0.1 m/s: Q = 0.1·π/4·0.063² m³/s = 18.70 L/min [X].
 	c := Cylinder{Bore: 63 * mm, Rod: 36 * mm, Stroke: 400 * mm}
 	q, err := c.FlowFor(Extend, 0.1*units.MetrePerSecond)
-	if err != nil || !near(q, 0.1*math.Pi/4*0.063*0.063*units.CubicMetrePerSecond, 1e-14) {
+	if err != nil || !checktest.Close(q, 0.1*math.Pi/4*0.063*0.063*units.CubicMetrePerSecond, 1e-14) {
 		t.Errorf("FlowFor = %v, %v", q, err)
 	}
 	v, err := c.Speed(Extend, q)
-	if err != nil || !near(v, 0.1, 1e-14) {
+	if err != nil || !checktest.Close(v, 0.1, 1e-14) {
 		t.Errorf("Speed(FlowFor(0.1 m/s)) = %v, %v", v, err)
 	}
 	// 0.4 m at 0.1 m/s: 4 s.
@@ -164,7 +159,7 @@ func TestSpeedFlowTime(t *testing.T) {
 	}
 	// Retract speed over extend speed at one flow is φ [X].
 	vr, _ := c.Speed(Retract, q)
-	if phi, _ := c.AreaRatio(); !near(float64(vr/v), phi, 1e-14) {
+	if phi, _ := c.AreaRatio(); !checktest.Close(float64(vr/v), phi, 1e-14) {
 		t.Errorf("retract/extend speed = %v; want φ = %v", vr/v, phi)
 	}
 }
@@ -182,10 +177,10 @@ func TestRegenerative(t *testing.T) {
 	}
 	vr, _ := c.Speed(Retract, q)
 	fe, _ := c.Force(Extend, p, 0)
-	if !near(r.Speed, vr, 1e-12) || !near(r.Force, fe/2, 1e-12) {
+	if !checktest.Close(r.Speed, vr, 1e-12) || !checktest.Close(r.Force, fe/2, 1e-12) {
 		t.Errorf("regenerative speed %v, force %v; want the retract speed %v and half the extend force %v", r.Speed, r.Force, vr, fe/2)
 	}
-	if !near(r.CapFlow, 2*q, 1e-12) || !near(r.RodFlow, q, 1e-12) || !near(r.CapFlow-r.RodFlow, q, 1e-12) {
+	if !checktest.Close(r.CapFlow, 2*q, 1e-12) || !checktest.Close(r.RodFlow, q, 1e-12) || !checktest.Close(r.CapFlow-r.RodFlow, q, 1e-12) {
 		t.Errorf("flows cap %v rod %v; want 2Q and Q", r.CapFlow, r.RodFlow)
 	}
 	d := c
@@ -217,19 +212,19 @@ func TestIntensification(t *testing.T) {
 		{"stalled", (300 * units.Bar).TimesArea(a1), 0},
 	} {
 		got, err := IntensifiedPressure(p, a1, c.AnnulusArea(), w.resist)
-		if err != nil || !near(got, w.want, 1e-12) {
+		if err != nil || !checktest.Close(got, w.want, 1e-12) {
 			t.Errorf("%s: IntensifiedPressure = %v, %v; want %v", w.name, got, err, w.want)
 		}
 	}
 	r, err := c.Intensification(Extend, p, 0)
-	if err != nil || !near(r.Pressure, 400*units.Bar, 1e-12) || !near(r.Ratio, 2, 1e-12) {
+	if err != nil || !checktest.Close(r.Pressure, 400*units.Bar, 1e-12) || !checktest.Close(r.Ratio, 2, 1e-12) {
 		t.Fatalf("Intensification = %+v, %v", r, err)
 	}
 	if r.Rating.OK() || len(r.Findings.AtLeast(components.Danger).Hazard(components.Overpressure)) != 1 {
 		t.Errorf("400 bar against a 250 bar rating: check %+v, findings %v; want a failed check and a danger finding", r.Rating, r.Findings)
 	}
 	r, err = c.Intensification(Retract, p, 0) // the cap side sees p/φ = 100 bar
-	if err != nil || !near(r.Pressure, 100*units.Bar, 1e-12) || !r.Rating.OK() || len(r.Findings) != 0 {
+	if err != nil || !checktest.Close(r.Pressure, 100*units.Bar, 1e-12) || !r.Rating.OK() || len(r.Findings) != 0 {
 		t.Errorf("retract Intensification = %+v, %v; want 100 bar, within the rating, no finding", r, err)
 	}
 	c.Rating = 0

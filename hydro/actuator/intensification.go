@@ -76,7 +76,7 @@ func (c Cylinder) Intensification(dir Direction, p units.Pressure, resist units.
 	}
 	po, err := IntensifiedPressure(p, c.Area(dir), c.OutletArea(dir), resist)
 	if err != nil {
-		return Intensification{}, rename(err, fn)
+		return Intensification{}, validate.Renamed(err, fn, nil)
 	}
 	ratio, err := validate.Checked(fn, "Ratio", float64(po/p))
 	if err != nil {

@@ -33,7 +33,7 @@ func TestMotorTradeFormulas(t *testing.T) {
 		math.Abs(p.Horsepower()-2000*20*0.95*0.9/1714.29) > 1e-3 || math.Abs(p.Horsepower()-19.95) > 0.005 {
 		t.Errorf("Power = %v hp, %v; want 19.95", p.Horsepower(), err)
 	}
-	if shaft := tq.TimesSpeed(n); !near(shaft, p, 1e-12) {
+	if shaft := tq.TimesSpeed(n); !checktest.Close(shaft, p, 1e-12) {
 		t.Errorf("T·2πn = %v; want the power %v", shaft, p)
 	}
 }
@@ -44,25 +44,25 @@ func TestMotorRoundTrips(t *testing.T) {
 	for _, dp := range []units.Pressure{5 * units.Bar, 120 * units.Bar, 350 * units.Bar} {
 		tq, _ := m.Torque(dp)
 		back, err := m.PressureFor(tq)
-		if err != nil || !near(back, dp, 1e-14) {
+		if err != nil || !checktest.Close(back, dp, 1e-14) {
 			t.Errorf("PressureFor(Torque(%v)) = %v, %v", dp, back, err)
 		}
 	}
 	for _, n := range []units.RotationalSpeed{10 * units.RevolutionPerMinute, 3000 * units.RevolutionPerMinute} {
 		q, _ := m.FlowFor(n)
 		back, err := m.Speed(q)
-		if err != nil || !near(back, n, 1e-14) {
+		if err != nil || !checktest.Close(back, n, 1e-14) {
 			t.Errorf("Speed(FlowFor(%v)) = %v, %v", n, back, err)
 		}
 	}
 	// Starting torque is lower: 0.9 × η_m by default, the caller's when given.
 	run, _ := m.Torque(100 * units.Bar)
 	st, _ := m.StartingTorque(100 * units.Bar)
-	if !near(st, run*0.9, 1e-14) {
+	if !checktest.Close(st, run*0.9, 1e-14) {
 		t.Errorf("StartingTorque = %v; want 0.9 × %v", st, run)
 	}
 	m.Starting = 0.7
-	if st, _ := m.StartingTorque(100 * units.Bar); !near(st, run*0.7/0.88, 1e-14) {
+	if st, _ := m.StartingTorque(100 * units.Bar); !checktest.Close(st, run*0.7/0.88, 1e-14) {
 		t.Errorf("StartingTorque with η_start 0.7 = %v", st)
 	}
 }
@@ -89,15 +89,15 @@ func TestMotorDutySize(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Running, 201.60*cc, 1e-4) || !near(r.Starting, 261.33*cc, 1e-4) || r.Displacement.Chosen != 315*cc ||
+	if !checktest.Close(r.Running, 201.60*cc, 1e-4) || !checktest.Close(r.Starting, 261.33*cc, 1e-4) || r.Displacement.Chosen != 315*cc ||
 		r.Displacement.Required != r.Starting || r.Motor.Displacement != 315*cc {
 		t.Errorf("displacements: run %v, start %v, choice %+v", r.Running, r.Starting, r.Displacement)
 	}
-	if !near(r.Pressure.Value, 141.03*units.Bar, 1e-4) || !r.Pressure.OK() || !near(r.Flow, 13.696*units.LitrePerMinute, 1e-4) {
+	if !checktest.Close(r.Pressure.Value, 141.03*units.Bar, 1e-4) || !r.Pressure.OK() || !checktest.Close(r.Flow, 13.696*units.LitrePerMinute, 1e-4) {
 		t.Errorf("pressure %+v, flow %v", r.Pressure, r.Flow)
 	}
 	// The chosen motor gives the breakaway torque at the pressure it needs.
-	if st, _ := r.Motor.StartingTorque(r.Pressure.Value); !near(st, 560, 1e-12) {
+	if st, _ := r.Motor.StartingTorque(r.Pressure.Value); !checktest.Close(st, 560, 1e-12) {
 		t.Errorf("chosen motor starts with %v at %v; want 560 N·m", st, r.Pressure.Value)
 	}
 	if r.StartRule.Kind != components.CommonPractice || len(r.Findings) != 0 {

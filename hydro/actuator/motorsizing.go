@@ -69,7 +69,7 @@ func (d MotorDuty) Size() (MotorSize, error) {
 	}
 	var err error
 	if r.Displacement, err = d.Displacements.Select(max(r.Running, r.Starting)); err != nil {
-		return MotorSize{}, rename(err, fn)
+		return MotorSize{}, validate.Renamed(err, fn, nil)
 	}
 	if r.Displacement.OK() {
 		m.Displacement = r.Displacement.Chosen

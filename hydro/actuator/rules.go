@@ -18,18 +18,6 @@ func ruleISO4413() components.Rule {
 	return components.StandardRule("ISO 4413:2010, safety requirements for hydraulic systems and their components")
 }
 
-// rename returns err with its function renamed to fn when it is a range
-// error from a helper, so the caller sees the function it called.
-func rename(err error, fn string) error {
-	var re *units.RangeError
-	if errors.As(err, &re) {
-		c := *re
-		c.Func = fn
-		return &c
-	}
-	return err
-}
-
 // prefixed returns err with prefix put before the parameter it names
 // ("Column." + "Relief"), built only when there is an error. A parameter
 // that is not a field (a lower-case parameter) is left as it is.

@@ -338,7 +338,7 @@ func (d Duty) Size() (CylinderSize, error) {
 		}
 		p, err := d.needs(f.cyl, total, r.SealEfficiency)
 		if err != nil {
-			return CylinderSize{}, rename(err, fn)
+			return CylinderSize{}, validate.Renamed(err, fn, nil)
 		}
 		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling, why = b, f.rod, f.cyl, f.bk, nil
 		r.Pressure = components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))

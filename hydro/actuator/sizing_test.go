@@ -54,13 +54,13 @@ func TestSizePush(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Bore.Required, 94.0316*mm, 1e-5) || r.Bore.Chosen != 100*mm || !r.Bore.OK() {
+	if !checktest.Close(r.Bore.Required, 94.0316*mm, 1e-5) || r.Bore.Chosen != 100*mm || !r.Bore.OK() {
 		t.Errorf("Bore = %+v; want 94.03 mm → 100 mm", r.Bore)
 	}
-	if !near(r.Rod.Required, 44.7214*mm, 1e-5) || r.Rod.Chosen != 45*mm {
+	if !checktest.Close(r.Rod.Required, 44.7214*mm, 1e-5) || r.Rod.Chosen != 45*mm {
 		t.Errorf("Rod = %+v; want 44.72 mm → 45 mm", r.Rod)
 	}
-	if !near(r.Pressure.Value, 141.471*units.Bar, 1e-5) || r.Pressure.Limit != 160*units.Bar || !r.Pressure.OK() {
+	if !checktest.Close(r.Pressure.Value, 141.471*units.Bar, 1e-5) || r.Pressure.Limit != 160*units.Bar || !r.Pressure.OK() {
 		t.Errorf("Pressure = %+v; want 141.47 bar within 160 bar", r.Pressure)
 	}
 	if r.Cylinder != (Cylinder{Bore: 100 * mm, Rod: 45 * mm, Stroke: 500 * mm}) {
@@ -87,10 +87,10 @@ func TestSizePullStepsUp(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Bore.Required, 86.5427*mm, 1e-5) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 80*mm {
+	if !checktest.Close(r.Bore.Required, 86.5427*mm, 1e-5) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 80*mm {
 		t.Errorf("Bore %+v, Rod %+v; want 86.54 mm → 110 mm with an 80 mm rod", r.Bore, r.Rod)
 	}
-	if !near(r.Pressure.Value, 135.8908*units.Bar, 1e-5) || !r.Pressure.OK() {
+	if !checktest.Close(r.Pressure.Value, 135.8908*units.Bar, 1e-5) || !r.Pressure.OK() {
 		t.Errorf("Pressure = %+v; want 135.89 bar", r.Pressure)
 	}
 	if len(r.Findings.Topic("actuator.second-choice-bore")) != 1 {
@@ -100,7 +100,7 @@ func TestSizePullStepsUp(t *testing.T) {
 	// the cap side returns 0.1·9503.3 mm² = 57.02 L/min.
 	d.Speed = 0.1
 	r, _ = d.Size()
-	if !near(r.Flow, 26.861*units.LitrePerMinute, 1e-4) || !near(r.ReturnFlow, 57.020*units.LitrePerMinute, 1e-4) {
+	if !checktest.Close(r.Flow, 26.861*units.LitrePerMinute, 1e-4) || !checktest.Close(r.ReturnFlow, 57.020*units.LitrePerMinute, 1e-4) {
 		t.Errorf("flows %v, %v; want 26.86 and 57.02 L/min", r.Flow, r.ReturnFlow)
 	}
 }
@@ -119,15 +119,15 @@ func TestSizeSealFrictionAndBackPressure(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Bore.Required, 106.6218*mm, 1e-6) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 50*mm {
+	if !checktest.Close(r.Bore.Required, 106.6218*mm, 1e-6) || r.Bore.Chosen != 110*mm || r.Rod.Chosen != 50*mm {
 		t.Errorf("bore %+v, rod %+v; want 106.62 mm → 110 mm with a 50 mm rod", r.Bore, r.Rod)
 	}
-	if !near(r.Pressure.Value, 152.17994*units.Bar, 1e-6) {
+	if !checktest.Close(r.Pressure.Value, 152.17994*units.Bar, 1e-6) {
 		t.Errorf("pressure %v; want 152.18 bar", r.Pressure.Value)
 	}
 	c := r.Cylinder
 	net := float64(r.Pressure.Value.TimesArea(c.CapArea()))*r.SealEfficiency - float64(d.BackPressure.TimesArea(c.AnnulusArea()))
-	if !near(net, float64(d.Force), 1e-12) {
+	if !checktest.Close(net, float64(d.Force), 1e-12) {
 		t.Errorf("at the pressure it needs the chosen cylinder gives η·p·A₁ − p_b·A₂ = %v N; want %v", net, d.Force)
 	}
 }
@@ -221,7 +221,7 @@ func TestSizeBeyondSeries(t *testing.T) {
 	}
 	// The failed pressure check quotes the 500 mm bore with a 1.25 rod:
 	// 20 MN/0.9/(π/4·0.5²) = 1131.8 bar.
-	if !near(r.Pressure.Value, 1131.77*units.Bar, 1e-4) {
+	if !checktest.Close(r.Pressure.Value, 1131.77*units.Bar, 1e-4) {
 		t.Errorf("largest bore needs %v; want 1131.8 bar", r.Pressure.Value)
 	}
 }
@@ -237,7 +237,7 @@ func TestSizeNoBoreNoRod(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	if !near(r.Bore.Required, 499.0*mm, 1e-3) || r.Bore.Chosen != 0 || r.Cylinder != (Cylinder{}) {
+	if !checktest.Close(r.Bore.Required, 499.0*mm, 1e-3) || r.Bore.Chosen != 0 || r.Cylinder != (Cylinder{}) {
 		t.Errorf("bore %+v, cylinder %+v; want 499 mm required and none chosen", r.Bore, r.Cylinder)
 	}
 	if r.Rod.Chosen != 0 || r.Rod.OK() {
@@ -262,7 +262,7 @@ func TestSizeCallerSeries(t *testing.T) {
 	if err != nil || r.Bore.Chosen != 2*in || r.Rod.Chosen != 1*in || r.Bore.Series != "test inch bores" {
 		t.Errorf("inch sizing: %+v %+v, %v", r.Bore, r.Rod, err)
 	}
-	if !near(r.Bore.Required, 1.8305*in, 1e-4) || r.SealRule.Kind != components.CallerValue {
+	if !checktest.Close(r.Bore.Required, 1.8305*in, 1e-4) || r.SealRule.Kind != components.CallerValue {
 		t.Errorf("required %v in, rule %v", r.Bore.Required.Inches(), r.SealRule)
 	}
 }

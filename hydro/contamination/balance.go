@@ -85,12 +85,18 @@ func RequiredBeta(perMinute float64, q units.Flow, perML float64) (float64, erro
 // n: RequiredBeta with the upper bound of n's count range (ISO 4406:2021,
 // Table 1), the most particles per mL that still read n. The ingress and the
 // beta ratio must be for the size the number counts (≥4, ≥6 or ≥14 µm(c)).
-// n must be 0…28 (units.ErrRange); other errors are those of RequiredBeta.
+// n must be 0…28 (units.ErrRange); other errors are those of RequiredBeta,
+// named for BetaForTarget.
 func BetaForTarget(perMinute float64, q units.Flow, n int) (float64, error) {
+	const fn = "contamination.BetaForTarget"
 	if n < 0 || n > MaxScale {
-		return 0, validate.Fail("contamination.BetaForTarget", "n", float64(n), "a scale number from 0 to 28")
+		return 0, validate.Fail(fn, "n", float64(n), "a scale number from 0 to 28")
 	}
-	return RequiredBeta(perMinute, q, upper[n])
+	b, err := RequiredBeta(perMinute, q, upper[n])
+	if err != nil {
+		return 0, validate.Renamed(err, fn, nil)
+	}
+	return b, nil
 }
 
 // TimeConstant returns τ = V / (Q·(1 − 1/β)), V in m³ and Q in m³/s giving

@@ -7,6 +7,7 @@ import (
 	"testing"
 	"time"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 	"gonum.org/v1/gonum/unit"
 )
@@ -102,30 +103,32 @@ func TestBalanceBadInput(t *testing.T) {
 	nan, inf := math.NaN(), math.Inf(1)
 	q := 100 * units.LitrePerMinute
 	cases := []struct {
-		name, param string
-		f           func() (float64, error)
-		unreachable bool
+		name, fn, param string
+		f               func() (float64, error)
+		unreachable     bool
 	}{
-		{"ingress < 0", "perMinute", func() (float64, error) { return SteadyState(-1, q, 200) }, false},
-		{"flow 0", "q", func() (float64, error) { return SteadyState(1, 0, 200) }, false},
-		{"flow NaN", "q", func() (float64, error) { return SteadyState(1, units.Flow(nan), 200) }, false},
-		{"beta 1", "beta", func() (float64, error) { return SteadyState(1, q, 1) }, true},
-		{"beta 0", "beta", func() (float64, error) { return SteadyState(1, q, 0) }, false},
+		// Each error names the function called (BetaForTarget, not the
+		// RequiredBeta it calls) and its parameter.
+		{"ingress < 0", "contamination.SteadyState", "perMinute", func() (float64, error) { return SteadyState(-1, q, 200) }, false},
+		{"flow 0", "contamination.SteadyState", "q", func() (float64, error) { return SteadyState(1, 0, 200) }, false},
+		{"flow NaN", "contamination.SteadyState", "q", func() (float64, error) { return SteadyState(1, units.Flow(nan), 200) }, false},
+		{"beta 1", "contamination.SteadyState", "beta", func() (float64, error) { return SteadyState(1, q, 1) }, true},
+		{"beta 0", "contamination.SteadyState", "beta", func() (float64, error) { return SteadyState(1, q, 0) }, false},
 		// 10³⁰⁸ per minute into 10⁻³⁰⁰ m³/s: +Inf was returned beside the
 		// error.
-		{"steady overflow", "concentration", func() (float64, error) { return SteadyState(1e308, units.Flow(1e-300), 2) }, false},
+		{"steady overflow", "contamination.SteadyState", "concentration", func() (float64, error) { return SteadyState(1e308, units.Flow(1e-300), 2) }, false},
 		// A non-zero ingress whose concentration underflows to 0.
-		{"steady underflow", "concentration", func() (float64, error) { return SteadyState(5e-324, units.Flow(1e10), 2) }, false},
-		{"target 0", "perML", func() (float64, error) { return RequiredBeta(1, q, 0) }, false},
-		{"target NaN", "perML", func() (float64, error) { return RequiredBeta(1, q, nan) }, false},
-		{"ingress Inf", "perMinute", func() (float64, error) { return RequiredBeta(inf, q, 10) }, false},
-		{"unreachable", "q", func() (float64, error) { return RequiredBeta(1e9, q, 10) }, true},
-		{"scale 29", "n", func() (float64, error) { return BetaForTarget(1, q, 29) }, false},
-		{"target unreachable", "q", func() (float64, error) { return BetaForTarget(3e6, q, 10) }, true},
+		{"steady underflow", "contamination.SteadyState", "concentration", func() (float64, error) { return SteadyState(5e-324, units.Flow(1e10), 2) }, false},
+		{"target 0", "contamination.RequiredBeta", "perML", func() (float64, error) { return RequiredBeta(1, q, 0) }, false},
+		{"target NaN", "contamination.RequiredBeta", "perML", func() (float64, error) { return RequiredBeta(1, q, nan) }, false},
+		{"ingress Inf", "contamination.RequiredBeta", "perMinute", func() (float64, error) { return RequiredBeta(inf, q, 10) }, false},
+		{"unreachable", "contamination.RequiredBeta", "q", func() (float64, error) { return RequiredBeta(1e9, q, 10) }, true},
+		{"scale 29", "contamination.BetaForTarget", "n", func() (float64, error) { return BetaForTarget(1, q, 29) }, false},
+		{"target unreachable", "contamination.BetaForTarget", "q", func() (float64, error) { return BetaForTarget(3e6, q, 10) }, true},
 	}
 	for _, c := range cases {
 		v, err := c.f()
-		wantRangeError(t, err, c.param)
+		checktest.RangeErrorIn(t, err, c.fn, c.param)
 		if v != 0 {
 			t.Errorf("%s: %g with an error, want 0", c.name, v)
 		}

@@ -122,14 +122,15 @@ func PerML(count float64, sample units.Volume) (float64, error) {
 
 // Per100mL returns the cumulative count per 100 mL for count particles
 // counted in a sample of the given volume: 100 × count ÷ volume in mL. The
-// errors are those of PerML.
+// errors are those of PerML, named for Per100mL.
 func Per100mL(count float64, sample units.Volume) (float64, error) {
+	const fn = "contamination.Per100mL"
 	v, err := PerML(count, sample)
 	if err != nil {
-		return 0, err
+		return 0, validate.Renamed(err, fn, nil)
 	}
 	v *= 100
-	if err := validate.Result("contamination.Per100mL", "count per 100 mL", v); err != nil {
+	if err := validate.Result(fn, "count per 100 mL", v); err != nil {
 		return 0, err
 	}
 	return v, nil

@@ -5,6 +5,7 @@ import (
 	"math"
 	"testing"
 
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -158,28 +159,32 @@ func TestScaleBadInput(t *testing.T) {
 			t.Errorf("ScaleRange(%d): err = %v, want units.ErrRange", n, err)
 		}
 	}
-	// Bad counts and volumes.
+	// Bad counts and volumes: each error names the function called and the
+	// argument (Per100mL names itself, not the PerML it calls).
 	bad := []struct {
 		count float64
 		vol   units.Volume
+		param string
 	}{
-		{-1, units.Millilitre},
-		{math.NaN(), units.Millilitre},
-		{math.Inf(1), units.Millilitre},
-		{1, 0},
-		{1, -units.Millilitre},
-		{1, units.Volume(math.NaN())},
-		{1, units.Volume(math.Inf(1))},
-		{1e300, 1e-300 * units.Millilitre}, // overflows
+		{-1, units.Millilitre, "count"},
+		{math.NaN(), units.Millilitre, "count"},
+		{math.Inf(1), units.Millilitre, "count"},
+		{1, 0, "sample"},
+		{1, -units.Millilitre, "sample"},
+		{1, units.Volume(math.NaN()), "sample"},
+		{1, units.Volume(math.Inf(1)), "sample"},
 	}
 	for _, b := range bad {
-		if _, err := PerML(b.count, b.vol); !errors.Is(err, units.ErrRange) {
-			t.Errorf("PerML(%g, %g): err = %v, want units.ErrRange", b.count, float64(b.vol), err)
-		}
-		if _, err := Per100mL(b.count, b.vol); !errors.Is(err, units.ErrRange) {
-			t.Errorf("Per100mL(%g, %g): err = %v, want units.ErrRange", b.count, float64(b.vol), err)
-		}
+		_, err := PerML(b.count, b.vol)
+		checktest.RangeErrorIn(t, err, "contamination.PerML", b.param)
+		_, err = Per100mL(b.count, b.vol)
+		checktest.RangeErrorIn(t, err, "contamination.Per100mL", b.param)
 	}
+	// Overflow names the result.
+	_, err := PerML(1e300, 1e-300*units.Millilitre)
+	checktest.RangeErrorIn(t, err, "contamination.PerML", "count per mL")
+	_, err = Per100mL(1e300, 1e-300*units.Millilitre)
+	checktest.RangeErrorIn(t, err, "contamination.Per100mL", "count per mL")
 }
 
 func TestScaleNumberAllocs(t *testing.T) {

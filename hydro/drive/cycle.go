@@ -71,7 +71,7 @@ func (ph Phase) shaft(fn string) (power, heat units.Power, err error) {
 	power = ph.Power
 	if byFlow {
 		if power, err = ShaftPower(ph.Pressure, ph.Flow, ph.Efficiency); err != nil {
-			return 0, 0, fields(rename(err, fn))
+			return 0, 0, fields(validate.Renamed(err, fn, nil))
 		}
 	}
 	if ph.Use != Working {

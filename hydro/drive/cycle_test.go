@@ -27,10 +27,10 @@ func TestCycleWorked(t *testing.T) {
 	if d.Period != 20*time.Second || d.Peak != 30e3 || d.PeakPhase != 0 {
 		t.Errorf("period %v, peak %v (phase %d)", d.Period, d.Peak, d.PeakPhase)
 	}
-	near(t, "average", d.Average, 8e3, 1e-15)
-	near(t, "RMS", d.RMS, units.Power(math.Sqrt(132)*1e3), 1e-15)
-	near(t, "energy", d.Energy, 160e3, 1e-15)
-	near(t, "heat", d.Heat, 24e3, 1e-14)
+	checktest.Near(t, "average", d.Average, 8e3, 1e-15)
+	checktest.Near(t, "RMS", d.RMS, units.Power(math.Sqrt(132)*1e3), 1e-15)
+	checktest.Near(t, "energy", d.Energy, 160e3, 1e-15)
+	checktest.Near(t, "heat", d.Heat, 24e3, 1e-14)
 	if d.Wasted != 0 || len(d.Findings) != 0 || d.RMSRule.Kind != components.CommonPractice {
 		t.Errorf("wasted %v, findings %v, rule %v", d.Wasted, d.Findings, d.RMSRule)
 	}
@@ -51,9 +51,9 @@ func TestCycleWastedHeat(t *testing.T) {
 		t.Fatal(err)
 	}
 	press, hold := 180e5*60/60000/0.87, 210e5*62/60000/0.87
-	near(t, "peak", d.Peak, units.Power(hold), 1e-14)
-	near(t, "wasted", d.Wasted, units.Energy(hold*20), 1e-14)
-	near(t, "heat", d.Heat, units.Energy(hold*20+press*6*0.13), 1e-13)
+	checktest.Near(t, "peak", d.Peak, units.Power(hold), 1e-14)
+	checktest.Near(t, "wasted", d.Wasted, units.Energy(hold*20), 1e-14)
+	checktest.Near(t, "heat", d.Heat, units.Energy(hold*20+press*6*0.13), 1e-13)
 	fs := d.Findings.Topic("drive.wasted-heat")
 	if len(fs) != 1 || fs[0].Severity != components.Caution || fs[0].Hazard != components.HotSurface {
 		t.Fatalf("findings %v; want one hot-surface caution", d.Findings)

@@ -11,14 +11,6 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// near fails unless got is within rel (relative) of want.
-func near[T ~float64](t *testing.T, what string, got, want T, rel float64) {
-	t.Helper()
-	if math.IsNaN(float64(got)) || math.Abs(float64(got-want)) > rel*math.Abs(float64(want)) {
-		t.Errorf("%s = %.12g; want %.12g (±%g relative)", what, float64(got), float64(want), rel)
-	}
-}
-
 // The trade's constants come out of the unit definitions (NIST SP 811,
 // Appendix B: bar = 10⁵ Pa, L = 10⁻³ m³, in = 0.0254 m, gal = 231 in³,
 // lbf = 0.45359237 kg × 9.80665 m/s², hp = 550 ft·lbf/s), evaluated here
@@ -51,7 +43,7 @@ func TestTradeConstants(t *testing.T) {
 		t.Errorf("the hp constant is %.6g; the trade prints 1714 (1714.29)", c)
 	}
 	// GNU units 2.22 agrees: units -t 'psi*gal/min' hp → 0.00058333333333333327.
-	near(t, "1 psi·gpm in hp (GNU units)", hp.Horsepower(), 0.00058333333333333327, 1e-15)
+	checktest.Near(t, "1 psi·gpm in hp (GNU units)", hp.Horsepower(), 0.00058333333333333327, 1e-15)
 }
 
 func ulp(x float64) float64 { return math.Nextafter(x, math.Inf(1)) - x }
@@ -77,7 +69,7 @@ func TestShaftPowerProperties(t *testing.T) {
 		prev = p
 	}
 	ideal, _ := ShaftPower(150*units.Bar, 40*lpm, 1)
-	near(t, "ideal shaft power", ideal, (150 * units.Bar).TimesFlow(40*lpm), 0)
+	checktest.Near(t, "ideal shaft power", ideal, (150 * units.Bar).TimesFlow(40*lpm), 0)
 	for _, eta := range []float64{0.999, 0.9, 0.5, 0.01} {
 		if p, _ := ShaftPower(150*units.Bar, 40*lpm, eta); p <= ideal {
 			t.Errorf("η %v: %v not above the ideal %v", eta, p, ideal)
@@ -149,8 +141,8 @@ func TestMotorSpeeds(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		near(t, "synchronous", s.Synchronous.RPM(), c.sync, 1e-15)
-		near(t, "full load", s.FullLoad.RPM(), c.loaded, 1e-14)
+		checktest.Near(t, "synchronous", s.Synchronous.RPM(), c.sync, 1e-15)
+		checktest.Near(t, "full load", s.FullLoad.RPM(), c.loaded, 1e-14)
 		if s.SlipRule.Kind != components.CommonPractice || s.Slip != TypicalSlip {
 			t.Errorf("slip %v (%v); want the typical slip, common practice", s.Slip, s.SlipRule)
 		}
@@ -160,7 +152,7 @@ func TestMotorSpeeds(t *testing.T) {
 	if err != nil || s.SlipRule.Kind != components.CallerValue {
 		t.Fatalf("MotorSpeeds with a slip: %+v, %v", s, err)
 	}
-	near(t, "nameplate speed", s.FullLoad.RPM(), 1465, 1e-14)
+	checktest.Near(t, "nameplate speed", s.FullLoad.RPM(), 1465, 1e-14)
 
 	_, err = MotorSpeeds(3, 50*units.Hertz, nil)
 	checktest.RangeErrorIn(t, err, "drive.MotorSpeeds", "poles")

@@ -31,7 +31,7 @@ func TestEnginePowerAt(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		near(t, "power at "+c.n.String(), got, c.want, 1e-14)
+		checktest.Near(t, "power at "+c.n.String(), got, c.want, 1e-14)
 	}
 	_, err := e.PowerAt(1400 * rpm)
 	checktest.RangeErrorIn(t, err, "drive.Engine.PowerAt", "n")
@@ -47,10 +47,10 @@ func TestEngineLoad(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "pump speed", l.PumpSpeed.RPM(), 2160, 1e-14)
-	near(t, "required at the engine", l.Required, 35e3/0.97, 1e-14)
-	near(t, "available", l.Available, 37.2e3, 1e-14)
-	near(t, "pump torque", l.PumpTorque, 35e3/(2*3.141592653589793*2160/60), 1e-14)
+	checktest.Near(t, "pump speed", l.PumpSpeed.RPM(), 2160, 1e-14)
+	checktest.Near(t, "required at the engine", l.Required, 35e3/0.97, 1e-14)
+	checktest.Near(t, "available", l.Available, 37.2e3, 1e-14)
+	checktest.Near(t, "pump torque", l.PumpTorque, 35e3/(2*3.141592653589793*2160/60), 1e-14)
 	if !l.Power.OK() || len(l.Findings) != 0 || l.Power.Rule.Kind != components.CallerValue {
 		t.Errorf("at 1800 rpm: %+v, %v", l.Power, l.Findings)
 	}

@@ -64,7 +64,7 @@ func SelectMotor(need MotorNeed) (Motor, error) {
 	required := max(d.RMS, units.Power(float64(d.Peak)/need.Breakdown))
 	c, err := ratings.Select(required)
 	if err != nil {
-		return Motor{}, asParam(err, fn, "Duty")
+		return Motor{}, validate.Renamed(err, fn, validate.Param("Duty"))
 	}
 	m := Motor{Rating: c}
 	if m.RatedTorque, err = torque(fn, "RatedTorque", c.Chosen, need.Speed); err != nil {
@@ -107,21 +107,35 @@ func checkDuty(fn string, d Duty) error {
 	return nil
 }
 
-// basis says what sizing on the peak or on the average would have chosen.
+// basis says what sizing on the peak or on the average would have chosen,
+// naming only a basis that chooses differently from c.
 func basis(d Duty, ratings components.Series[units.Power], c components.Choice[units.Power]) components.Findings {
 	peak, _ := ratings.Select(d.Peak)
 	avg, _ := ratings.Select(max(d.Average, ratings.Smallest()))
-	if peak.Chosen == c.Chosen && avg.Chosen == c.Chosen {
-		return nil
+	onPeak, onAvg := peak.Chosen != c.Chosen, avg.Chosen != c.Chosen
+	note := func(format string, args ...any) components.Findings {
+		return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule, format, args...)}
 	}
-	return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "drive.sizing-basis", d.RMSRule,
-		"this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
-		d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)}
+	switch {
+	case onPeak && !peak.OK():
+		return note("this cycle peaks at %v and heats the motor like a steady %v: no rating of %v reaches the peak, but %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, ratings.Name(), c.Chosen)
+	case onPeak && onAvg:
+		return note("this cycle peaks at %v, averages %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized), on the average %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Peak, d.Average, d.RMS, peak.Chosen, avg.Chosen, c.Chosen)
+	case onPeak:
+		return note("this cycle peaks at %v and heats the motor like a steady %v: sized on the peak it would take %v (oversized); %v carries both the heating and the peak torque",
+			d.Peak, d.RMS, peak.Chosen, c.Chosen)
+	case onAvg:
+		return note("this cycle averages %v but heats the motor like a steady %v: sized on the average it would take %v (it would overheat); %v carries both the heating and the peak torque",
+			d.Average, d.RMS, avg.Chosen, c.Chosen)
+	}
+	return nil
 }
 
 // torque returns P/(2π·n) (units.Power.PerSpeed), or an error naming the
 // result name of fn when the quotient overflows.
 func torque(fn, name string, p units.Power, n units.RotationalSpeed) (units.Torque, error) {
 	t, err := p.PerSpeed(n)
-	return t, asParam(err, fn, name)
+	return t, validate.Renamed(err, fn, validate.Param(name))
 }

@@ -2,6 +2,7 @@ package drive
 
 import (
 	"math"
+	"slices"
 	"strings"
 	"testing"
 	"time"
@@ -30,8 +31,8 @@ func TestSelectMotor(t *testing.T) {
 	if m.Rating.Chosen != 15*units.Kilowatt || m.Rating.Required != 12*units.Kilowatt {
 		t.Errorf("rating %+v; want 15 kW for a 12 kW need", m.Rating)
 	}
-	near(t, "rated torque", m.RatedTorque, 15e3/(2*3.141592653589793*1455/60), 1e-14)
-	near(t, "peak torque", m.PeakTorque, 30e3/(2*3.141592653589793*1455/60), 1e-14)
+	checktest.Near(t, "rated torque", m.RatedTorque, 15e3/(2*3.141592653589793*1455/60), 1e-14)
+	checktest.Near(t, "peak torque", m.PeakTorque, 30e3/(2*3.141592653589793*1455/60), 1e-14)
 	if !m.Thermal.OK() || !m.Torque.OK() || m.Thermal.Rule.Kind != components.CommonPractice {
 		t.Errorf("checks: thermal %+v, torque %+v", m.Thermal, m.Torque)
 	}
@@ -101,6 +102,50 @@ func TestSelectMotorHandBuiltDuty(t *testing.T) {
 		checktest.RangeErrorIn(t, err, "drive.SelectMotor", strings.TrimSpace(param))
 		if m.Rating.Required != 0 || m.Findings != nil {
 			t.Errorf("%s: %+v beside the error; want the zero Motor", param, m)
+		}
+	}
+}
+
+// The sizing-basis notice names only the basis that would choose
+// differently: it never calls the chosen motor oversized or overheating.
+//
+//   - 50 s at 6 kW and 1 s at 8 kW: RMS √((36·50 + 64)/51) = 6.05 kW and
+//     average 6.04 kW both take 7.5 kW; the 8 kW peak alone would take 11 kW.
+//   - 6 s at 2.2 kW and 4 s idle: RMS 2.2·√0.6 = 1.70 kW and the peak both
+//     take 2.2 kW; the 1.32 kW average alone would take 1.5 kW.
+//   - 100 s at 10 kW and 1 s at 400 kW, breakdown 2.5: the torque needs
+//     400/2.5 = 160 kW, and no IEC rating reaches the 400 kW peak itself.
+func TestSelectMotorBasisNamesOnlyTheDifference(t *testing.T) {
+	kW := units.Kilowatt
+	n := 1455 * units.RevolutionPerMinute
+	for _, c := range []struct {
+		name         string
+		phases       []Phase
+		chosen, want units.Power
+		say, never   string
+	}{
+		{"peak only", []Phase{{Duration: 50 * time.Second, Power: 6 * kW, Efficiency: 0.9}, {Duration: time.Second, Power: 8 * kW, Efficiency: 0.9}},
+			7.5 * kW, 11 * kW, "oversized", "overheat"},
+		{"average only", []Phase{{Duration: 6 * time.Second, Power: 2.2 * kW, Efficiency: 0.9}, {Duration: 4 * time.Second}},
+			2.2 * kW, 1.5 * kW, "overheat", "oversized"},
+		{"peak beyond the series", []Phase{{Duration: 100 * time.Second, Power: 10 * kW, Efficiency: 0.9}, {Duration: time.Second, Power: 400 * kW, Efficiency: 0.9}},
+			160 * kW, 160 * kW, "no rating", "oversized"},
+	} {
+		d, err := Cycle(c.phases)
+		if err != nil {
+			t.Fatal(err)
+		}
+		m, err := SelectMotor(MotorNeed{Duty: d, Speed: n, Breakdown: 2.5})
+		if err != nil || m.Rating.Chosen != c.chosen {
+			t.Fatalf("%s: %+v, %v; want %v", c.name, m.Rating, err, c.chosen)
+		}
+		f := m.Findings.Topic("drive.sizing-basis")
+		if len(f) != 1 {
+			t.Fatalf("%s: findings %v; want the sizing-basis notice", c.name, m.Findings)
+		}
+		text := f[0].Text(units.Metric())
+		if !strings.Contains(text, c.say) || strings.Contains(text, c.never) || !slices.Contains(f[0].Args(), any(c.want)) {
+			t.Errorf("%s: %q; want it to say %q of %v and never %q", c.name, text, c.say, c.want, c.never)
 		}
 	}
 }

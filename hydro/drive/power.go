@@ -52,12 +52,12 @@ func efficiency(fn, param string, eta float64) error {
 // NextIEC allocates nothing.
 func NextIEC(p units.Power) (components.Choice[units.Power], error) {
 	c, err := components.IECMotorRatings().Select(p)
-	return c, asParam(err, "drive.NextIEC", "p")
+	return c, validate.Renamed(err, "drive.NextIEC", validate.Param("p"))
 }
 
 // NextNEMA returns the smallest NEMA MG 1 horsepower rating at or above p
 // (components.NEMAMotorRatings, ½–500 hp), as [NextIEC] does.
 func NextNEMA(p units.Power) (components.Choice[units.Power], error) {
 	c, err := components.NEMAMotorRatings().Select(p)
-	return c, asParam(err, "drive.NextNEMA", "p")
+	return c, validate.Renamed(err, "drive.NextNEMA", validate.Param("p"))
 }

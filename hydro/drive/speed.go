@@ -1,8 +1,6 @@
 package drive
 
 import (
-	"errors"
-
 	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
@@ -33,7 +31,7 @@ func MotorSpeeds(poles int, mains units.Frequency, slip *float64) (Speeds, error
 	const fn = "drive.MotorSpeeds"
 	ns, err := components.SynchronousSpeed(poles, mains)
 	if err != nil {
-		return Speeds{}, rename(err, fn)
+		return Speeds{}, validate.Renamed(err, fn, nil)
 	}
 	s := Speeds{Synchronous: ns, Slip: TypicalSlip,
 		SlipRule: components.PracticeRule("induction motor full-load slip 2–5 %, 3 % taken")}
@@ -45,28 +43,4 @@ func MotorSpeeds(poles int, mains units.Frequency, slip *float64) (Speeds, error
 	}
 	s.FullLoad = units.RotationalSpeed(float64(ns) * (1 - s.Slip))
 	return s, nil
-}
-
-// rename returns err with its function renamed to fn when it is a range
-// error from a helper, so the caller sees the function it called.
-func rename(err error, fn string) error { return asParam(err, fn, "") }
-
-// asParam returns err with its function renamed to fn and, unless param is
-// empty, its parameter to param, when it is a range error from a helper:
-// the caller sees the function it called and the argument or field it
-// passed. A nil err stays nil.
-func asParam(err error, fn, param string) error {
-	if err == nil {
-		return nil // before re is declared: errors.As makes it escape, and the success path allocates nothing
-	}
-	var re *units.RangeError
-	if errors.As(err, &re) {
-		c := *re
-		c.Func = fn
-		if param != "" {
-			c.Param = param
-		}
-		return &c
-	}
-	return err
 }

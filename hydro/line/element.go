@@ -83,8 +83,8 @@ func flowIn(fn string, q units.Flow, bore units.Length, o Oil) (ElementDrop, err
 	if err != nil {
 		return ElementDrop{}, err
 	}
-	re := float64(v) * float64(bore) / float64(o.Viscosity)
-	if err := validate.Result(fn, "Re", re); err != nil {
+	re, err := Reynolds(v, bore, o.Viscosity)
+	if err != nil {
 		return ElementDrop{}, err
 	}
 	if !(re > 0) {

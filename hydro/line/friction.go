@@ -101,7 +101,9 @@ func Reynolds(v units.Velocity, d units.Length, nu units.KinematicViscosity) (fl
 // iteration from F = X₂ − 0.2. Three logarithms, no loop to converge; the
 // result agrees with a bisection to adjacent floats within a few units in
 // the last place (measured worst 2.2e-15 relative over 2000 < Re ≤ 10¹⁰,
-// 0 ≤ ε/D ≤ 0.1). It does not allocate.
+// 0 ≤ ε/D ≤ 0.1; 2.7e-15 against a 30-digit solution with mpmath 1.3.0 on
+// 4000 random points there), and within 2e-14 up to the largest float.
+// It does not allocate.
 //
 // re must be finite and > 0 and relativeRoughness in [0, 0.1]; otherwise,
 // or when 64/Re overflows (a subnormal re), the error matches
@@ -136,7 +138,7 @@ func colebrook(re, rr float64) float64 {
 	for range 2 {
 		s := x1 + f
 		e := (math.Log(s) + f - x2) / (1 + s)
-		f -= (1 + s + 0.5*e) * e * s / (1 + s + e*(1+e/3))
+		f -= (1 + s + 0.5*e) * e * (s / (1 + s + e*(1+e/3))) // s/(…) first: s² overflows near Re 1e308
 	}
 	f = 1.151292546497022842 / f // ln(10)/2 / F = 1/√f
 	return f * f

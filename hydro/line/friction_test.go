@@ -13,7 +13,7 @@ import (
 // independent of the Newton iteration and its start.
 func colebrookBisect(re, rr float64) float64 {
 	g := func(x float64) float64 { return x + 2*math.Log10(rr/3.7+2.51*x/re) }
-	lo, hi := 0.1, 100.0 // g(lo) < 0 < g(hi) for 2000 < Re ≤ 1e10, 0 ≤ ε/D ≤ 0.1
+	lo, hi := 0.1, 1e4 // g(lo) < 0 < g(hi) for 2000 < Re ≤ MaxFloat64, 0 ≤ ε/D ≤ 0.1
 	for {
 		mid := lo + (hi-lo)/2
 		if mid <= lo || mid >= hi {
@@ -73,6 +73,17 @@ func TestFrictionFactorFullPrecision(t *testing.T) {
 		}
 	}
 	t.Logf("worst relative error against bisection: %.2g", worst)
+	// Far beyond any line, up to the largest float: still the Colebrook
+	// value, never NaN (s² in the iteration once overflowed).
+	for _, re := range []float64{1e15, 1e100, 1e300, math.MaxFloat64} {
+		for _, rr := range []float64{0, 1e-6, 0.0324, 0.1} {
+			got, err := FrictionFactor(re, rr)
+			ref := colebrookBisect(re, rr)
+			if err != nil || !(math.Abs(got-ref) <= 1e-12*ref) {
+				t.Errorf("FrictionFactor(%g, %g) = %.17g, %v; bisection %.17g", re, rr, got, err, ref)
+			}
+		}
+	}
 }
 
 // TestTransitionTakenTurbulent checks the documented choice: in the band

@@ -211,3 +211,21 @@ func TestPathBadInput(t *testing.T) {
 		wantRangeErrorIn(t, c.name, err, "line.Path.Drop", c.param)
 	}
 }
+
+// BenchmarkPathDrop takes the budget of a four-element return path.
+func BenchmarkPathDrop(b *testing.B) {
+	mm := units.Millimetre
+	p := Path{Name: "return", Elements: []Element{
+		Pipe{Name: "tube", Length: 6, Bore: 19 * mm, Roughness: DrawnTubing},
+		Fitting{Name: "elbows", Kind: Elbow90, Bore: 19 * mm, Count: 3},
+		Rated{Name: "filter", Drop: 0.5 * units.Bar, Flow: 60 * units.LitrePerMinute, Law: Viscous,
+			Viscosity: 32 * units.SquareMillimetrePerSecond, Bypass: 2.5 * units.Bar, Rating: 10 * units.Bar},
+		Fitting{Name: "exit", Kind: Exit, Bore: 19 * mm},
+	}}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := p.Drop(60*units.LitrePerMinute, vg46At50); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

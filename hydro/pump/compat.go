@@ -74,7 +74,7 @@ func (p Pump) Compatibility(c Circuit) (components.Findings, error) {
 	var moving components.Findings
 	switch {
 	case len(c.Demands) > 1 && c.Together && c.Series:
-		moving = p.inSeries(c)
+		moving, err = p.inSeries(c)
 	case len(c.Demands) > 1 && c.Together:
 		moving, err = p.sharing(c)
 	default:
@@ -221,18 +221,23 @@ func (p Pump) throughCenter(c Circuit) (components.Finding, error) {
 		return components.NewFinding(components.Caution, components.HotSurface, "pump.open-center-load-sensing", heatRule,
 			"a load-sensing pump needs closed-center load-sensing valves: through this %v center it senses no load and passes up to %v to tank at %v or more, about %v of heat",
 			c.Center.String(), pt.Flow, pt.Pressure, pt.Shaft), nil
-	case c.CenterDrop == 0:
-		return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
-			"with every valve centred the pump's %v passes to tank through the %v center; give the center's P→T pressure drop to quote its heat",
-			pt.Flow, c.Center.String()), nil
 	case p.Control == PressureCompensated:
 		st, err := p.Standby()
 		if err != nil {
 			return components.Finding{}, err
 		}
+		if c.CenterDrop == 0 {
+			return components.NewFinding(components.Caution, components.NoHazard, "pump.open-center-compensated", heatRule,
+				"the %v center keeps the pressure-compensated pump at full stroke: its %v passes to tank and the compensator never acts (give the center's P→T pressure drop to quote the heat); a closed-center valve would let it stroke back to about %v",
+				c.Center.String(), pt.Flow, st.Shaft), nil
+		}
 		return components.NewFinding(components.Caution, components.NoHazard, "pump.open-center-compensated", heatRule,
 			"the %v center keeps the pressure-compensated pump at full stroke: its %v passes to tank at %v, about %v of heat, and the compensator never acts; a closed-center valve would let it stroke back to about %v",
 			c.Center.String(), pt.Flow, pt.Pressure, pt.Shaft, st.Shaft), nil
+	case c.CenterDrop == 0:
+		return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
+			"with every valve centred the pump's %v passes to tank through the %v center; give the center's P→T pressure drop to quote its heat",
+			pt.Flow, c.Center.String()), nil
 	}
 	return components.NewFinding(components.Notice, components.NoHazard, "pump.through-center", heatRule,
 		"with every valve centred the pump's %v passes to tank through the %v center at %v: about %v of heat",
@@ -313,22 +318,33 @@ func (p Pump) surplus(c Circuit, d Demand) (components.Finding, bool, error) {
 		d.Name, d.Pressure, d.Flow, pt.Flow, pt.Flow-d.Flow, c.Relief, heat), true, nil
 }
 
-// inSeries is valves in series moving together: the loads add up.
-func (p Pump) inSeries(c Circuit) components.Findings {
+// inSeries is valves in series moving together: the loads add up. Stalled,
+// the whole shaft power becomes heat (over the relief for a fixed pump, in
+// the pump's own losses for one held at its cut-off); moving, the pump's
+// own loss at the summed pressure is quoted, the valves' drops coming on
+// top.
+func (p Pump) inSeries(c Circuit) (components.Findings, error) {
 	var sum units.Pressure
 	for _, d := range c.Demands {
 		sum += d.Pressure
 	}
+	rule := components.PhysicsRule("pressures add along a series path")
 	if lim := p.limit(c); sum >= lim {
-		return components.Findings{components.NewFinding(components.Caution, components.NoHazard, "pump.series-stall",
-			components.PhysicsRule("pressures add along a series path"),
-			"moving together through valves in series the loads add up to %v, at or above the %v the pump can reach: the last in line stalls",
-			sum, lim)}
+		pt, err := p.At(lim)
+		if err != nil {
+			return nil, err
+		}
+		return components.Findings{components.NewFinding(components.Caution, components.HotSurface, "pump.series-stall", rule,
+			"moving together through valves in series the loads add up to %v, at or above the %v the pump can reach: the last in line stalls and the pump's %v of shaft power all becomes heat",
+			sum, lim, pt.Shaft)}, nil
 	}
-	return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "pump.series",
-		components.PhysicsRule("pressures add along a series path"),
-		"moving together through valves in series the pump works at the sum of the loads, %v, and each actuator passes the same flow",
-		sum)}
+	pt, err := p.At(sum)
+	if err != nil {
+		return nil, err
+	}
+	return components.Findings{components.NewFinding(components.Notice, components.NoHazard, "pump.series", rule,
+		"moving together through valves in series the pump works at the sum of the loads, %v, and each actuator passes the same flow; the pump itself turns %v into heat there, the valves' drops come on top",
+		sum, pt.Loss())}, nil
 }
 
 // sharing is several demands moving together on valves in parallel. When

@@ -6,6 +6,7 @@ import (
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -89,12 +90,12 @@ func TestCheckInlet(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "static head", r.Static, -870*9.80665*0.4, 1e-15)
+	checktest.Near(t, "static head", r.Static, -870*9.80665*0.4, 1e-15)
 	want := float64(amb.Pressure) - 870*9.80665*0.4 - 0.12e5
-	near(t, "inlet pressure", float64(r.Pressure), want, 1e-15)
+	checktest.Near(t, "inlet pressure", float64(r.Pressure), want, 1e-15)
 	path := gnuUnitsPath(t)
 	got := gnuUnits(t, path, formatG(amb.Pressure.Pascals())+" Pa + 870 kg/m^3 * gravity * (-0.4 m) - 0.12 bar", "Pa")
-	near(t, "inlet pressure vs GNU units", float64(r.Pressure), got, 1e-14)
+	checktest.Near(t, "inlet pressure vs GNU units", float64(r.Pressure), got, 1e-14)
 	// 0.66 bar(a) is below the 0.8 bar(a) minimum: a cavitation warning.
 	if r.Check.OK() || len(r.Findings.Hazard(components.Cavitation)) != 1 || r.Findings[0].Severity != components.Warning {
 		t.Errorf("check %+v, findings %v; want a failed check and one cavitation warning", r.Check, r.Findings)

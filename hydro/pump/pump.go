@@ -198,27 +198,13 @@ func DisplacementFor(q units.Flow, n units.RotationalSpeed, volumetric float64) 
 	}
 	d, err := q.PerSpeed(n)
 	if err != nil {
-		return 0, renamed(err, fn, "displacement")
+		return 0, validate.Renamed(err, fn, validate.Param("displacement"))
 	}
 	d = units.Displacement(float64(d) / volumetric)
 	if err := validate.Positive(fn, "displacement", d); err != nil { // overflowed, or underflowed to 0
 		return 0, err
 	}
 	return d, nil
-}
-
-// renamed returns err with its function renamed to fn and its parameter to
-// param when it is a range error from a helper, so the caller sees the
-// function it called and the argument, field or result concerned. A nil
-// err stays nil.
-func renamed(err error, fn, param string) error {
-	re, ok := err.(*units.RangeError)
-	if !ok {
-		return err
-	}
-	c := *re
-	c.Func, c.Param = fn, param
-	return &c
 }
 
 // geometric returns the full-stroke geometric flow D·n.

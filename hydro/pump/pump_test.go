@@ -9,14 +9,6 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// near fails unless got is within rel (relative) of want.
-func near[T ~float64](t *testing.T, what string, got, want T, rel float64) {
-	t.Helper()
-	if math.IsNaN(float64(got)) || math.Abs(float64(got-want)) > rel*math.Abs(float64(want)) {
-		t.Errorf("%s = %.10g; want %.10g (±%g relative)", what, float64(got), float64(want), rel)
-	}
-}
-
 // baler is a fixed gear pump of a baling press power unit (demo data):
 // 45 cm³/rev at 1450 rpm, η_v 0.95, η_hm 0.92.
 func baler() Pump {
@@ -37,21 +29,21 @@ func TestPumpTextbookEfficiencies(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "delivered flow", pt.Flow, 0.0015, 1e-12)
-	near(t, "theoretical torque (η_hm = 1)", pt.Torque, 111.4, 0.05/111.4)
+	checktest.Near(t, "delivered flow", pt.Flow, 0.0015, 1e-12)
+	checktest.Near(t, "theoretical torque (η_hm = 1)", pt.Torque, 111.4, 0.05/111.4)
 	p.Mechanical = float64(pt.Torque) / 120
-	near(t, "η_m", p.Mechanical, 0.928, 0.0005/0.928)
-	near(t, "η_o", p.Overall(), 0.836, 0.0006/0.836)
+	checktest.Near(t, "η_m", p.Mechanical, 0.928, 0.0005/0.928)
+	checktest.Near(t, "η_o", p.Overall(), 0.836, 0.0006/0.836)
 	pt, err = p.At(70 * units.Bar)
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "input torque", pt.Torque, 120, 1e-12)
+	checktest.Near(t, "input torque", pt.Torque, 120, 1e-12)
 	// Shaft power 2π·n·T = 2π × (1000/60) × 120 = 12 566 W; hydraulic
 	// power p·Q = 7 MPa × 0.0015 = 10 500 W; their ratio is η_o.
-	near(t, "shaft power", pt.Shaft, 2*math.Pi*1000.0/60*120, 1e-12)
-	near(t, "hydraulic power", pt.Hydraulic, 10500, 1e-12)
-	near(t, "η_o from the powers", float64(pt.Hydraulic/pt.Shaft), p.Overall(), 1e-12)
+	checktest.Near(t, "shaft power", pt.Shaft, 2*math.Pi*1000.0/60*120, 1e-12)
+	checktest.Near(t, "hydraulic power", pt.Hydraulic, 10500, 1e-12)
+	checktest.Near(t, "η_o from the powers", float64(pt.Hydraulic/pt.Shaft), p.Overall(), 1e-12)
 }
 
 // The trade's shaft-power formula of the fixed pump: P = p·Q/η_o with Q
@@ -66,10 +58,10 @@ func TestPumpShaftPowerTradeForm(t *testing.T) {
 	}
 	gpm := pt.Flow.USGallonsPerMinute()
 	hp := 3000 * gpm / (550.0 * 12 * 60 / 231) / p.Overall()
-	near(t, "shaft power, hp", pt.Shaft.Horsepower(), hp, 1e-13)
+	checktest.Near(t, "shaft power, hp", pt.Shaft.Horsepower(), hp, 1e-13)
 	// Torque from the same point, lbf·in = 63 025·hp/rpm, where
 	// 63 025 = 550·12·60/(2π) from the definitions.
-	near(t, "torque, lbf·in", pt.Torque.PoundForceInches(), 550.0*12*60/(2*math.Pi)*pt.Shaft.Horsepower()/1450, 1e-13)
+	checktest.Near(t, "torque, lbf·in", pt.Torque.PoundForceInches(), 550.0*12*60/(2*math.Pi)*pt.Shaft.Horsepower()/1450, 1e-13)
 }
 
 // GNU units 2.22 (Debian package units) evaluates the ideal pump relations
@@ -82,11 +74,11 @@ func TestPumpAgainstGNUUnits(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "flow, L/min", pt.Flow.LitresPerMinute(), 61.987499999999997, 1e-14)
-	near(t, "torque, N·m", pt.Torque, 163.47980567591426, 1e-14)
+	checktest.Near(t, "flow, L/min", pt.Flow.LitresPerMinute(), 61.987499999999997, 1e-14)
+	checktest.Near(t, "torque, N·m", pt.Torque, 163.47980567591426, 1e-14)
 	path := gnuUnitsPath(t)
-	near(t, "flow vs GNU units", pt.Flow.LitresPerMinute(), gnuUnits(t, path, "45 cm^3 * 1450/min * 0.95", "L/min"), 1e-14)
-	near(t, "torque vs GNU units", float64(pt.Torque), gnuUnits(t, path, "45 cm^3 * 210 bar / (2 pi) / 0.92", "N m"), 1e-14)
+	checktest.Near(t, "flow vs GNU units", pt.Flow.LitresPerMinute(), gnuUnits(t, path, "45 cm^3 * 1450/min * 0.95", "L/min"), 1e-14)
+	checktest.Near(t, "torque vs GNU units", float64(pt.Torque), gnuUnits(t, path, "45 cm^3 * 210 bar / (2 pi) / 0.92", "N m"), 1e-14)
 }
 
 func TestDisplacementFor(t *testing.T) {
@@ -95,13 +87,13 @@ func TestDisplacementFor(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "displacement, cm³/rev", d.CubicCentimetresPerRevolution(), 62e3/(1450*0.95), 1e-14)
+	checktest.Near(t, "displacement, cm³/rev", d.CubicCentimetresPerRevolution(), 62e3/(1450*0.95), 1e-14)
 	// Round trip: that displacement at that speed delivers the flow.
 	pt, err := Pump{Displacement: d, Speed: 1450 * units.RevolutionPerMinute, Volumetric: 0.95, Mechanical: 1}.At(0)
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "round-trip flow", pt.Flow, 62*units.LitrePerMinute, 1e-14)
+	checktest.Near(t, "round-trip flow", pt.Flow, 62*units.LitrePerMinute, 1e-14)
 }
 
 func TestMechanicalEfficiency(t *testing.T) {
@@ -130,7 +122,7 @@ func TestPumpLeakageScaling(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		near(t, "flow at "+c.pr.String(), float64(pt.Flow), geometric*c.frac, 1e-14)
+		checktest.Near(t, "flow at "+c.pr.String(), float64(pt.Flow), geometric*c.frac, 1e-14)
 	}
 	// Leakage takes the whole flow at 200 bar / 0.05 = 4000 bar: the model
 	// refuses a fixed pump beyond that.
@@ -150,7 +142,7 @@ func TestPumpPressureCompensated(t *testing.T) {
 	if err != nil || below.Deadheaded {
 		t.Fatalf("At(249 bar) = %+v, %v", below, err)
 	}
-	near(t, "full-stroke flow", below.Flow.LitresPerMinute(), 61.9875, 1e-14)
+	checktest.Near(t, "full-stroke flow", below.Flow.LitresPerMinute(), 61.9875, 1e-14)
 	st, err := p.Standby()
 	if err != nil {
 		t.Fatal(err)
@@ -159,14 +151,14 @@ func TestPumpPressureCompensated(t *testing.T) {
 	if st != at || !st.Deadheaded || st.Flow != 0 || st.Hydraulic != 0 {
 		t.Errorf("Standby = %+v; At(setting) = %+v", st, at)
 	}
-	near(t, "standby power", st.Shaft, 250e5*45e-6*1450/60*0.05/0.92, 1e-14)
-	near(t, "standby heat", st.Loss(), st.Shaft, 0)
+	checktest.Near(t, "standby power", st.Shaft, 250e5*45e-6*1450/60*0.05/0.92, 1e-14)
+	checktest.Near(t, "standby heat", st.Loss(), st.Shaft, 0)
 	// At the setting the compensator delivers what the circuit takes.
 	d, err := p.Delivering(250*units.Bar, 30*units.LitrePerMinute)
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "stroke for 30 L/min", d.Displacement.CubicCentimetresPerRevolution(), (30+3.2625)*1e3/1450, 1e-13)
+	checktest.Near(t, "stroke for 30 L/min", d.Displacement.CubicCentimetresPerRevolution(), (30+3.2625)*1e3/1450, 1e-13)
 	if _, err := p.Delivering(200*units.Bar, 30*units.LitrePerMinute); !errors.Is(err, units.ErrRange) {
 		t.Errorf("Delivering below the setting: error = %v; want ErrRange (the pump is on its curve)", err)
 	}
@@ -193,7 +185,7 @@ func TestPumpLoadSensing(t *testing.T) {
 		t.Fatalf("Standby = %+v, %v", st, err)
 	}
 	// Standby at 20 bar costs 20/250 of the compensator's 1477.6 W.
-	near(t, "standby power", st.Shaft, 20e5*45e-6*1450/60*0.05/0.92, 1e-14)
+	checktest.Near(t, "standby power", st.Shaft, 20e5*45e-6*1450/60*0.05/0.92, 1e-14)
 	if _, err := p.Delivering(170*units.Bar, 40*units.LitrePerMinute); err != nil {
 		t.Errorf("Delivering(170 bar, 40 L/min): %v", err)
 	}
@@ -210,7 +202,7 @@ func TestPumpPowerLimited(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "corner pressure", corner, 15e3*0.92/(45e-6*1450/60), 1e-14)
+	checktest.Near(t, "corner pressure", corner, 15e3*0.92/(45e-6*1450/60), 1e-14)
 	prev := units.Flow(math.Inf(1))
 	for bar := 0.0; bar <= 300; bar += 10 {
 		pt, err := p.At(units.Pressure(bar) * units.Bar)
@@ -222,7 +214,7 @@ func TestPumpPowerLimited(t *testing.T) {
 		}
 		prev = pt.Flow
 		if pt.Pressure > corner {
-			near(t, "shaft power above the corner", pt.Shaft, 15e3, 1e-13)
+			checktest.Near(t, "shaft power above the corner", pt.Shaft, 15e3, 1e-13)
 		} else if pt.Shaft > 15e3*(1+1e-13) {
 			t.Errorf("shaft power %v above the limit at %v bar", pt.Shaft, bar)
 		}
@@ -365,6 +357,6 @@ func TestPumpLossless(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "lossless flow", pt.Flow, 45e-6*1450/60, 1e-15)
-	near(t, "hydraulic power", pt.Hydraulic, 100e5*45e-6*1450/60, 1e-15)
+	checktest.Near(t, "lossless flow", pt.Flow, 45e-6*1450/60, 1e-15)
+	checktest.Near(t, "hydraulic power", pt.Hydraulic, 100e5*45e-6*1450/60, 1e-15)
 }

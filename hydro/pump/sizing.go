@@ -107,14 +107,14 @@ func Size(n Need) (Sizing, error) {
 	}
 	d, err := DisplacementFor(s.RatedFlow, n.Speed, n.Volumetric)
 	if err != nil {
-		return Sizing{}, renamed(err, fn, "Displacement")
+		return Sizing{}, validate.Renamed(err, fn, validate.Param("Displacement"))
 	}
 	list := n.Displacements
 	if list.Len() == 0 {
 		list = CommonDisplacements()
 	}
 	if s.Displacement, err = list.Select(d); err != nil {
-		return Sizing{}, renamed(err, fn, "Displacement")
+		return Sizing{}, validate.Renamed(err, fn, validate.Param("Displacement"))
 	}
 	if !s.Displacement.OK() {
 		s.Findings = components.Findings{components.NewFinding(components.Notice, components.NoHazard, "pump.size-beyond-list",

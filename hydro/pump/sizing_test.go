@@ -49,13 +49,13 @@ func TestSize(t *testing.T) {
 	if s.Margin != 0.25 || s.MarginRule.Kind != components.CommonPractice {
 		t.Errorf("margin %v (%v); want the default 0.25, common practice", s.Margin, s.MarginRule)
 	}
-	near(t, "rated flow", s.RatedFlow.LitresPerMinute(), 68.75, 1e-14)
-	near(t, "rated pressure", s.RatedPressure.Bar(), 225, 1e-14)
-	near(t, "required displacement", s.Displacement.Required.CubicCentimetresPerRevolution(), 68.75e3/(1450*0.95), 1e-13)
+	checktest.Near(t, "rated flow", s.RatedFlow.LitresPerMinute(), 68.75, 1e-14)
+	checktest.Near(t, "rated pressure", s.RatedPressure.Bar(), 225, 1e-14)
+	checktest.Near(t, "required displacement", s.Displacement.Required.CubicCentimetresPerRevolution(), 68.75e3/(1450*0.95), 1e-13)
 	if s.Displacement.Chosen != 50*units.CubicCentimetrePerRevolution || !s.Displacement.OK() {
 		t.Errorf("chosen %v; want 50 cm³/rev", s.Displacement.Chosen)
 	}
-	near(t, "delivered", s.Delivered.LitresPerMinute(), 68.875, 1e-13)
+	checktest.Near(t, "delivered", s.Delivered.LitresPerMinute(), 68.875, 1e-13)
 
 	for _, c := range []struct {
 		margin float64

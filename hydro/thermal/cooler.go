@@ -32,15 +32,18 @@ func ThrottleRise(dp units.Pressure, rho units.Density, c units.SpecificHeatCapa
 // of fluid f at temperature t (fluid.Fluid.Density at atmospheric
 // pressure, downstream of the throttle; fluid.Fluid.SpecificHeat).
 func ThrottleRiseOf(dp units.Pressure, f fluid.Fluid, t units.Temperature) (units.TemperatureDifference, error) {
+	const fn = "thermal.ThrottleRiseOf"
+	names := validate.Fields("f.", map[string]string{"t": "t", "dp": "dp", "ΔT": "ΔT"})
 	rho, err := f.Density(t, 0)
 	if err != nil {
-		return 0, err
+		return 0, validate.Renamed(err, fn, names)
 	}
 	c, err := f.SpecificHeat(t)
 	if err != nil {
-		return 0, err
+		return 0, validate.Renamed(err, fn, names)
 	}
-	return ThrottleRise(dp, rho, c)
+	d, err := ThrottleRise(dp, rho, c)
+	return d, validate.Renamed(err, fn, names)
 }
 
 // CoolerNeed is what a cooler must do: hold the oil at or below MaxOil
@@ -56,12 +59,12 @@ type CoolerNeed struct {
 
 // Cooler is the duty a cooler must meet.
 type Cooler struct {
-	Duty     units.Power                 // heat the cooler must remove, ≥ 0
-	Specific Conductance                 // Duty per kelvin of entering temperature difference: what its rating must reach
-	ETD      units.TemperatureDifference // entering temperature difference MaxOil − MaxAmbient
-	Natural  units.Power                 // what the surfaces shed with the oil at MaxOil
-	Steady   units.Temperature           // the oil's steady temperature at MaxAmbient without a cooler (0 with no dissipation)
-	Check    components.Check[units.Temperature]
+	Duty     units.Power                         // heat the cooler must remove, ≥ 0
+	Specific Conductance                         // Duty per kelvin of entering temperature difference: what its rating must reach
+	ETD      units.TemperatureDifference         // entering temperature difference MaxOil − MaxAmbient
+	Natural  units.Power                         // what the surfaces shed with the oil at MaxOil
+	Steady   units.Temperature                   // the oil's steady temperature at MaxAmbient without a cooler (0 with a load and no dissipation: it has none)
+	Check    components.Check[units.Temperature] // Steady against MaxOil; the zero Check (none made) when Steady is 0
 	Findings components.Findings
 }
 
@@ -74,11 +77,15 @@ func (c Cooler) BTUPerHour() float64 { return c.Duty.In(units.BTUPerHour) }
 // are rated by, the entering temperature difference ETD = T_oil,in − T_air,in
 // taken as MaxOil − MaxAmbient (the oil enters the cooler at its hottest
 // allowed temperature; a cooler in the return line sees a little more).
-// The check holds the steady temperature without a cooler against MaxOil;
+// The check holds the steady temperature without a cooler against MaxOil
+// (with no load that is MaxAmbient; with a load and no dissipation there is
+// none, and no check is made);
 // a notice gives the duty, a caution hot oil where a cooler is needed, and
 // a notice ISO 4413's 60 °C pump-inlet limit where MaxOil is above it.
 // MaxAmbient must be below MaxOil (an air cooler cannot cool oil to below
-// the air: this is an error); Load and Dissipation finite and ≥ 0.
+// the air: this is an error); Load and Dissipation finite and ≥ 0. A
+// natural dissipation or steady temperature that overflows is an error
+// naming Natural or Steady.
 func (n CoolerNeed) Size() (Cooler, error) {
 	const fn = "thermal.CoolerNeed.Size"
 	if err := validate.NonNegative(fn, "Load", n.Load); err != nil {
@@ -94,14 +101,26 @@ func (n CoolerNeed) Size() (Cooler, error) {
 		return Cooler{}, validate.Fail(fn, "MaxAmbient", n.MaxAmbient, "above 0 K and below MaxOil ("+n.MaxOil.String()+")")
 	}
 	c := Cooler{ETD: n.MaxOil.Sub(n.MaxAmbient)}
-	c.Natural = n.Dissipation.Times(c.ETD)
+	var err error
+	if c.Natural, err = validate.Checked(fn, "Natural", n.Dissipation.Times(c.ETD)); err != nil {
+		return Cooler{}, err
+	}
 	c.Duty = max(0, n.Load-c.Natural)
 	c.Specific = Conductance(float64(c.Duty) / float64(c.ETD))
 	if err := validate.Result(fn, "Specific", c.Specific); err != nil {
 		return Cooler{}, err
 	}
-	if n.Dissipation > 0 {
-		c.Steady, _ = SteadyTemperature(n.Load, n.Dissipation, n.MaxAmbient)
+	switch {
+	case n.Dissipation > 0:
+		steady, err := SteadyTemperature(n.Load, n.Dissipation, n.MaxAmbient)
+		if err != nil {
+			return Cooler{}, validate.Renamed(err, fn, validate.Fields("", map[string]string{"T": "Steady"}))
+		}
+		c.Steady = steady
+	case n.Load == 0:
+		c.Steady = n.MaxAmbient // no heat: the oil settles at the air's temperature
+	}
+	if c.Steady > 0 {
 		c.Check = components.Within(c.Steady, n.MaxOil, components.CallerRule("CoolerNeed.MaxOil"))
 	}
 	rule := components.PhysicsRule("heat balance: P = h·A·(T − T_amb) + cooler duty")

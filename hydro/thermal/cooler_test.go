@@ -2,6 +2,7 @@ package thermal
 
 import (
 	"math"
+	"strings"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -54,6 +55,12 @@ func TestCoolerDuty(t *testing.T) {
 	if len(c.Findings.Topic("thermal.cooler")) != 1 || len(c.Findings.Topic("thermal.pump-inlet")) != 0 {
 		t.Errorf("findings %v", c.Findings)
 	}
+	// No load and no surfaces: the oil sits at the ambient, no cooler.
+	c, err = CoolerNeed{MaxOil: celsius(55), MaxAmbient: celsius(35)}.Size()
+	if err != nil || c.Duty != 0 || c.Steady != celsius(35) || !c.Check.OK() ||
+		strings.Contains(c.Findings[0].Text(units.Metric()), "-273") {
+		t.Errorf("no load: steady %v, check %v, findings %v, %v", c.Steady, c.Check, c.Findings, err)
+	}
 	// Enough surface: no cooler, and a notice says so; 65 °C oil is above
 	// ISO 4413's pump-inlet limit.
 	c, _ = CoolerNeed{Load: 1 * units.Kilowatt, Dissipation: 60, MaxOil: celsius(65), MaxAmbient: celsius(35)}.Size()
@@ -76,11 +83,29 @@ func TestCoolerBadInput(t *testing.T) {
 		{"load", bad(func(n *CoolerNeed) { n.Load = -1 }), "Load"},
 		{"dissipation", bad(func(n *CoolerNeed) { n.Dissipation = Conductance(math.NaN()) }), "Dissipation"},
 		{"max oil", bad(func(n *CoolerNeed) { n.MaxOil = 0 }), "MaxOil"},
+		// Results that overflow are errors, not +Inf beside nil.
+		{"natural overflows", bad(func(n *CoolerNeed) { n.Dissipation = math.MaxFloat64 }), "Natural"},
+		{"steady overflows", bad(func(n *CoolerNeed) { n.Load, n.Dissipation = 1e300, 1e-300 }), "Steady"},
 		{"throttle dp", second(ThrottleRise(-1, 870, 1900)), "dp"},
 		{"throttle rho", second(ThrottleRise(1e7, 0, 1900)), "rho"},
 		{"throttle c", second(ThrottleRise(1e7, 870, 0)), "c"},
 	} {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
+	}
+	// ThrottleRiseOf names itself and its own parameters, not fluid's.
+	oil, _ := fluid.Typical(fluid.HM, fluid.VG46)
+	for _, c := range []struct {
+		name, param string
+		f           fluid.Fluid
+		dp          units.Pressure
+		t           units.Temperature
+	}{
+		{"too hot", "t", oil, 1e7, celsius(400)},
+		{"zero fluid", "f.Density15", fluid.Fluid{}, 1e7, celsius(40)},
+		{"dp", "dp", oil, -1, celsius(40)},
+	} {
+		_, err := ThrottleRiseOf(c.dp, c.f, c.t)
+		t.Run("of "+c.name, func(t *testing.T) { checktest.RangeErrorIn(t, err, "thermal.ThrottleRiseOf", c.param) })
 	}
 }
 

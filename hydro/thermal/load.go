@@ -1,6 +1,7 @@
 package thermal
 
 import (
+	"math"
 	"strconv"
 	"time"
 
@@ -50,7 +51,7 @@ var energyRule = components.PhysicsRule("energy balance: power not delivered as 
 // input P_in = p·Q/η, heat P_in − p·Q = p·Q·(1/η − 1). All of it is counted
 // into the oil (a pump's case is cooled mostly by its drain flow); the
 // electric motor's own losses go to the air and are not counted. p and q
-// must be finite and ≥ 0, overall in (0, 1].
+// must be finite and ≥ 0, overall in [0.001, 1].
 func PumpLoss(name string, p units.Pressure, q units.Flow, overall float64) (Load, error) {
 	const fn = "thermal.PumpLoss"
 	hyd, err := hydraulic(fn, p, q)
@@ -69,7 +70,7 @@ func PumpLoss(name string, p units.Pressure, q units.Flow, overall float64) (Loa
 
 // MotorLoss returns the heat a hydraulic motor (or cylinder) makes taking
 // flow q across pressure difference dp with overall efficiency overall:
-// Δp·Q·(1 − η). dp and q must be finite and ≥ 0, overall in (0, 1].
+// Δp·Q·(1 − η). dp and q must be finite and ≥ 0, overall in [0.001, 1].
 func MotorLoss(name string, dp units.Pressure, q units.Flow, overall float64) (Load, error) {
 	const fn = "thermal.MotorLoss"
 	hyd, err := hydraulic(fn, dp, q)
@@ -187,7 +188,8 @@ const (
 // notice comparing the two: the guess overstates the heat of a
 // pressure-compensated or unloading circuit and understates that of a
 // fixed pump that relieves. Each phase needs a duration > 0 and valid
-// loads; a phase whose loads exceed its input power is an error.
+// loads, the cycle at most 292 years in all; a phase whose loads exceed its
+// input power is an error, and so is a mean heat or input that overflows.
 func Budget(phases []Phase) (HeatLoad, error) {
 	const fn = "thermal.Budget"
 	if len(phases) == 0 {
@@ -201,6 +203,9 @@ func Budget(phases []Phase) (HeatLoad, error) {
 		name := "phases[" + strconv.Itoa(i) + "]"
 		if ph.Duration <= 0 {
 			return HeatLoad{}, validate.Fail(fn, name+".Duration", ph.Duration.Seconds(), "> 0 s")
+		}
+		if ph.Duration > math.MaxInt64-total {
+			return HeatLoad{}, validate.Fail(fn, name+".Duration", ph.Duration.Seconds(), "short enough for a cycle of 292 years at most")
 		}
 		if err := validate.NonNegative(fn, name+".Input", ph.Input); err != nil {
 			return HeatLoad{}, err
@@ -242,6 +247,9 @@ func Budget(phases []Phase) (HeatLoad, error) {
 		}
 	}
 	if err := validate.Result(fn, "Mean", out.Mean); err != nil {
+		return HeatLoad{}, err
+	}
+	if err := validate.Result(fn, "Input", out.Input); err != nil {
 		return HeatLoad{}, err
 	}
 	out.compare()

@@ -123,6 +123,10 @@ func TestBudgetBadInput(t *testing.T) {
 		{"source", []Phase{{Duration: 1, Loads: []Load{ok, {Power: 1}}}}, "phases[0].Loads[1].Source"},
 		{"power", []Phase{{Duration: 1, Loads: []Load{{Source: FromOther, Power: -1}}}}, "phases[0].Loads[0].Power"},
 		{"over input", []Phase{{Duration: 1, Input: 50, Loads: []Load{ok}}}, "phases[0].Loads"},
+		// A cycle longer than a time.Duration holds (the total wrapped
+		// negative) and an input energy that overflows.
+		{"too long", []Phase{{Duration: math.MaxInt64/2 + 1, Loads: []Load{ok}}, {Duration: math.MaxInt64/2 + 1, Loads: []Load{ok}}}, "phases[1].Duration"},
+		{"input overflows", []Phase{{Duration: 2 * time.Second, Input: math.MaxFloat64, Loads: []Load{ok}}}, "Input"},
 	} {
 		t.Run(c.name, func(t *testing.T) { _, err := Budget(c.phases); checktest.RangeError(t, err, c.param) })
 	}
@@ -138,5 +142,23 @@ func TestBudgetBadInput(t *testing.T) {
 		{"other", second(Other("", -1, components.Rule{})), "power"},
 	} {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
+	}
+}
+
+// BenchmarkBudget totals a two-phase cycle of five loads.
+func BenchmarkBudget(b *testing.B) {
+	q := 60 * units.LitrePerMinute
+	pump, _ := PumpLoss("pump", 210*units.Bar, q, 0.85)
+	valve, _ := Throttling("flow control", 40*units.Bar, q)
+	lines, _ := LineLoss("lines", 8*units.Bar, q)
+	ram, _ := MotorLoss("ram", 162*units.Bar, q, 0.95)
+	relief, _ := ReliefFlow("relief", 210*units.Bar, q)
+	phases := []Phase{{Name: "press", Duration: 20 * time.Second, Loads: []Load{pump, valve, lines, ram}},
+		{Name: "dwell", Duration: 40 * time.Second, Loads: []Load{pump, relief}}}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := Budget(phases); err != nil {
+			b.Fatal(err)
+		}
 	}
 }

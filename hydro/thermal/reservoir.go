@@ -147,8 +147,9 @@ func (t Tank) SurfaceArea() (units.Area, error) {
 // StillAir is the usual heat-transfer coefficient of a steel reservoir wall
 // to still air, natural convection and radiation together: 10 W/(m²·K), the
 // lower end of the trade's 10–12 W/(m²·K) (common practice; US texts use
-// 2 BTU/(h·ft²·°F) ≈ 11.4 W/(m²·K) with good air circulation). A tank in a
-// corner or behind panels gives less; a fan gives much more.
+// 2 BTU/(h·ft²·°F) ≈ 11.4 W/(m²·K) with good air circulation, from
+// memory). A tank in a corner or behind panels gives less; a fan gives
+// much more.
 const StillAir units.HeatTransferCoefficient = 10
 
 // Dissipation returns the conductance h·A of a surface of area a with

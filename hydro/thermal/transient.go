@@ -46,7 +46,8 @@ type Response struct {
 // and held constant, so the closed form of At applies. Oil must be finite
 // and > 0, Steel and Load finite and ≥ 0, Dissipation finite and > 0,
 // Ambient and start finite and above absolute zero, and the fluid's models
-// valid at the mean temperature.
+// valid at the mean temperature (an error there names start, the fluid's
+// data Fluid.…).
 func (l Lumped) Response(start units.Temperature) (Response, error) {
 	const fn = "thermal.Lumped.Response"
 	if err := l.validate(fn); err != nil {
@@ -62,17 +63,20 @@ func (l Lumped) Response(start units.Temperature) (Response, error) {
 	mean := start + (steady-start)/2
 	rho, err := l.Fluid.Density(mean, 0)
 	if err != nil {
-		return Response{}, err
+		return Response{}, validate.Renamed(err, fn, fluidFields)
 	}
 	c, err := l.Fluid.SpecificHeat(mean)
 	if err != nil {
-		return Response{}, err
+		return Response{}, validate.Renamed(err, fn, fluidFields)
 	}
 	ch := l.SteelHeat
 	if ch == 0 {
 		ch = CarbonSteel
 	}
 	capacity := float64(rho)*float64(l.Oil)*float64(c) + float64(l.Steel)*float64(ch)
+	if err := validate.PositiveResult(fn, "Capacity", capacity); err != nil {
+		return Response{}, err
+	}
 	tau := capacity / float64(l.Dissipation)
 	if err := validate.Result(fn, "τ", tau); err != nil {
 		return Response{}, err
@@ -82,6 +86,11 @@ func (l Lumped) Response(start units.Temperature) (Response, error) {
 	}
 	return Response{Steady: steady, TimeConstant: time.Duration(tau * 1e9), Capacity: capacity}, nil
 }
+
+// fluidFields maps the parameters of a fluid.Fluid error to Lumped's: the
+// temperature (the mean of start and the steady temperature) to start, the
+// fluid's data to Fluid.….
+var fluidFields = validate.Fields("Fluid.", map[string]string{"t": "start"})
 
 func (l Lumped) validate(fn string) error {
 	if err := validate.Positive(fn, "Oil", l.Oil); err != nil {
@@ -114,7 +123,9 @@ func (l Lumped) At(start units.Temperature, d time.Duration) (units.Temperature,
 	if err != nil {
 		return 0, err
 	}
-	x := math.Exp(-d.Seconds() / r.TimeConstant.Seconds())
+	// τ from the capacity, not TimeConstant, which rounds to whole
+	// nanoseconds (to 0 for a tiny body).
+	x := math.Exp(-d.Seconds() * float64(l.Dissipation) / r.Capacity)
 	return r.Steady + (start-r.Steady)*units.Temperature(x), nil
 }
 
@@ -136,7 +147,7 @@ func (l Lumped) TimeTo(start, target units.Temperature) (time.Duration, error) {
 	if !(target > lo && target < hi) {
 		return 0, validate.Fail(fn, "target", target, "between the start "+start.String()+" and the steady "+r.Steady.String()+", not at it")
 	}
-	t := r.TimeConstant.Seconds() * math.Log(float64((start-r.Steady)/(target-r.Steady)))
+	t := r.Capacity / float64(l.Dissipation) * math.Log(float64((start-r.Steady)/(target-r.Steady)))
 	if err := validate.Result(fn, "t", t); err != nil || t > float64(math.MaxInt64)/1e9 {
 		return 0, validate.Fail(fn, "target", target, "reached within 292 years")
 	}

@@ -102,6 +102,21 @@ func TestWarmUpAndCoolDown(t *testing.T) {
 	}
 }
 
+// TestTinyTimeConstant: a body whose τ is below a nanosecond (TimeConstant
+// rounds to 0) still has a temperature at every time, never NaN.
+func TestTinyTimeConstant(t *testing.T) {
+	l := demoUnit(t)
+	l.Oil, l.Steel, l.Dissipation = 1e-15, 0, 1e6
+	for _, d := range []time.Duration{0, time.Nanosecond, time.Second} {
+		got, err := l.At(celsius(20), d)
+		r, _ := l.Response(celsius(20))
+		want := r.Steady + (celsius(20)-r.Steady)*units.Temperature(math.Exp(-d.Seconds()*1e6/r.Capacity))
+		if err != nil || math.IsNaN(float64(got)) || math.Abs(float64(got-want)) > 1e-9 {
+			t.Errorf("At(%v) = %v, %v; want %v", d, got, err, want)
+		}
+	}
+}
+
 func TestTransientBadInput(t *testing.T) {
 	ok := demoUnit(t)
 	bad := func(f func(*Lumped)) error { l := ok; f(&l); _, err := l.Response(celsius(20)); return err }
@@ -120,7 +135,32 @@ func TestTransientBadInput(t *testing.T) {
 		{"past steady", second(ok.TimeTo(celsius(20), celsius(90))), "target"},
 		{"wrong side", second(ok.TimeTo(celsius(20), celsius(10))), "target"},
 		{"d", second(ok.At(celsius(20), -time.Second)), "d"},
+		// The zero fluid and a mean temperature beyond the fluid's models
+		// name Lumped's fields.
+		{"zero fluid", bad(func(l *Lumped) { l.Fluid = fluid.Fluid{} }), "Fluid.Density15"},
+		{"too hot", bad(func(l *Lumped) { l.Load = 100 * units.Kilowatt }), "start"},
 	} {
 		t.Run(c.name, func(t *testing.T) { checktest.RangeError(t, c.err, c.param) })
 	}
+	t.Run("function", func(t *testing.T) {
+		checktest.RangeErrorIn(t, bad(func(l *Lumped) { l.Fluid = fluid.Fluid{} }), "thermal.Lumped.Response", "Fluid.Density15")
+	})
+}
+
+// BenchmarkLumpedAt evaluates the warm-up of the demo unit at a spread of
+// times (fluid properties at the mean temperature each call).
+func BenchmarkLumpedAt(b *testing.B) {
+	oil, err := fluid.Typical(fluid.HM, fluid.VG46)
+	if err != nil {
+		b.Fatal(err)
+	}
+	l := Lumped{Fluid: oil, Oil: 250 * units.Litre, Steel: 300, Dissipation: 45, Ambient: celsius(25), Load: 2 * units.Kilowatt}
+	start := celsius(20)
+	b.ReportAllocs()
+	var sink units.Temperature
+	for i := 0; b.Loop(); i++ {
+		t, _ := l.At(start, time.Duration(i%600)*time.Minute)
+		sink += t
+	}
+	_ = sink
 }

@@ -24,7 +24,7 @@ const DefaultCounterbalanceRatio = 1.3
 // error matches units.ErrRange.
 func Coupling(c actuator.Cylinder, dir actuator.Direction) (float64, error) {
 	if err := c.Validate(); err != nil {
-		return 0, renamed(err, "valve.Coupling")
+		return 0, validate.Renamed(err, "valve.Coupling", nil)
 	}
 	return validate.Checked("valve.Coupling", "coupling", float64(c.Area(dir)/c.OutletArea(dir)))
 }

@@ -76,7 +76,7 @@ func (k Kv) Flow(dp units.Pressure, rho units.Density) (units.Flow, error) {
 		return 0, err
 	}
 	q, err := OrificeFlow(1, k.area(), dp, rho)
-	return q, renamed(err, fn)
+	return q, validate.Renamed(err, fn, nil)
 }
 
 // Drop returns the pressure drop of flow q through a valve of coefficient
@@ -88,7 +88,7 @@ func (k Kv) Drop(q units.Flow, rho units.Density) (units.Pressure, error) {
 		return 0, err
 	}
 	dp, err := OrificeDrop(1, k.area(), q, rho)
-	return dp, renamed(err, fn)
+	return dp, validate.Renamed(err, fn, nil)
 }
 
 // KvFor returns the coefficient a valve needs to pass flow q at pressure
@@ -98,19 +98,7 @@ func KvFor(q units.Flow, dp units.Pressure, rho units.Density) (Kv, error) {
 	const fn = "valve.KvFor"
 	a, err := OrificeArea(1, q, dp, rho)
 	if err != nil {
-		return 0, renamed(err, fn)
+		return 0, validate.Renamed(err, fn, nil)
 	}
-	return validate.Checked(fn, "Kv", Kv(float64(a/Kv(1).area())))
-}
-
-// renamed returns err with its function renamed to fn when it is a range
-// error from a helper, so the caller sees the function it called.
-func renamed(err error, fn string) error {
-	re, ok := err.(*units.RangeError)
-	if !ok {
-		return err
-	}
-	c := *re
-	c.Func = fn
-	return &c
+	return validate.Checked(fn, "coefficient", Kv(float64(a/Kv(1).area())))
 }

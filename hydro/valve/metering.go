@@ -121,7 +121,7 @@ func CheckMetering(n MeteringNeed) (MeteringCheck, error) {
 		return MeteringCheck{}, err
 	}
 	if err := n.Cylinder.Validate(); err != nil {
-		return MeteringCheck{}, renamed(err, fn)
+		return MeteringCheck{}, validate.Renamed(err, fn, nil)
 	}
 	mc := MeteringCheck{Traits: tr}
 	if !tr.HoldsOverrunning {
@@ -135,7 +135,7 @@ func CheckMetering(n MeteringNeed) (MeteringCheck, error) {
 	}
 	in, err := n.Cylinder.Intensification(n.Stroke, n.Supply, n.Resist)
 	if err != nil {
-		return MeteringCheck{}, renamed(err, fn)
+		return MeteringCheck{}, validate.Renamed(err, fn, nil)
 	}
 	mc.Outlet, mc.Intensified, mc.Cylinder, mc.Findings = in.Pressure, in.Ratio, in.Rating, in.Findings
 	if n.ValveRating > 0 {

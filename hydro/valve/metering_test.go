@@ -44,8 +44,8 @@ func TestCheckMeteringMeterOut(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "rod-side pressure", mc.Outlet, 400*bar, 1e-13)
-	near(t, "intensification", mc.Intensified, 2, 1e-13)
+	checktest.Near(t, "rod-side pressure", mc.Outlet, 400*bar, 1e-13)
+	checktest.Near(t, "intensification", mc.Intensified, 2, 1e-13)
 	if mc.Cylinder.OK() || mc.Valve.OK() {
 		t.Errorf("checks %+v, %+v; want both failed", mc.Cylinder, mc.Valve)
 	}
@@ -60,7 +60,7 @@ func TestCheckMeteringMeterOut(t *testing.T) {
 	cyl := twoToOne()
 	mc, _ = CheckMetering(MeteringNeed{Metering: MeterOut, Cylinder: cyl, Stroke: actuator.Extend, Supply: 100 * bar,
 		Resist: -20 * units.Kilonewton})
-	near(t, "with an overrunning load", mc.Outlet, 200*bar+units.Pressure(20e3/float64(cyl.AnnulusArea())), 1e-13)
+	checktest.Near(t, "with an overrunning load", mc.Outlet, 200*bar+units.Pressure(20e3/float64(cyl.AnnulusArea())), 1e-13)
 }
 
 func TestCheckMeteringOverrunning(t *testing.T) {

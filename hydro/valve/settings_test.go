@@ -17,8 +17,8 @@ func TestReliefSetting(t *testing.T) {
 		t.Fatal(err)
 	}
 	// 180 bar + 10 % = 198 bar; at full flow 198 + 12 = 210 bar, within 250.
-	near(t, "setting", r.Setting, 198*bar, 1e-15)
-	near(t, "full flow", r.FullFlow, 210*bar, 1e-15)
+	checktest.Near(t, "setting", r.Setting, 198*bar, 1e-15)
+	checktest.Near(t, "full flow", r.FullFlow, 210*bar, 1e-15)
 	if r.Margin != DefaultReliefMargin || r.MarginRule.Kind != components.CommonPractice || !r.Protects.OK() || len(r.Findings) != 0 {
 		t.Errorf("relief %+v", r)
 	}
@@ -76,17 +76,17 @@ func TestCounterbalanceCommonPractice(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "setting", cb.Setting, 195*bar, 1e-15)
-	near(t, "pilot", cb.Pilot, (195-150)*bar/4.5, 1e-15)
+	checktest.Near(t, "setting", cb.Setting, 195*bar, 1e-15)
+	checktest.Near(t, "pilot", cb.Pilot, (195-150)*bar/4.5, 1e-15)
 	if cb.Ratio != 1.3 || cb.RatioRule.Kind != components.CommonPractice || len(cb.Findings) != 0 {
 		t.Errorf("counterbalance %+v", cb)
 	}
 	// Back pressure adds to the setting of a non-vented valve, not of a
 	// vented one: 5 bar of back pressure → (195 + 5 − 150)/4.5.
 	cb, _ = CounterbalanceSetting(CounterbalanceNeed{Load: 150 * bar, PilotRatio: 4.5, Back: 5 * bar})
-	near(t, "pilot with back pressure", cb.Pilot, 50*bar/4.5, 1e-15)
+	checktest.Near(t, "pilot with back pressure", cb.Pilot, 50*bar/4.5, 1e-15)
 	cb, _ = CounterbalanceSetting(CounterbalanceNeed{Load: 150 * bar, PilotRatio: 4.5, Back: 5 * bar, Vented: true})
-	near(t, "pilot, vented", cb.Pilot, 45*bar/4.5, 1e-15)
+	checktest.Near(t, "pilot, vented", cb.Pilot, 45*bar/4.5, 1e-15)
 }
 
 // A forestry crane's boom cylinder, 100 mm bore, 56 mm rod, holds its
@@ -106,16 +106,16 @@ func TestCounterbalanceCoupled(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	near(t, "coupling", c, (100.0*100-56*56)/(100*100), 1e-14)
+	checktest.Near(t, "coupling", c, (100.0*100-56*56)/(100*100), 1e-14)
 	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 150 * bar, PilotRatio: 4.5, Back: 5 * bar, Coupling: c,
 		Flow: 40 * units.LitrePerMinute, Rating: 250 * bar})
 	if err != nil {
 		t.Fatal(err)
 	}
 	pcap := 150*bar + units.Pressure(c)*cb.Pilot
-	near(t, "poppet balance", pcap+units.Pressure(4.5)*cb.Pilot, cb.Setting+5*bar, 1e-15)
-	near(t, "throttled drop", cb.Throttled, pcap-5*bar, 1e-15)
-	near(t, "heat", cb.Heat, (pcap - 5*bar).TimesFlow(40*units.LitrePerMinute), 1e-15)
+	checktest.Near(t, "poppet balance", pcap+units.Pressure(4.5)*cb.Pilot, cb.Setting+5*bar, 1e-15)
+	checktest.Near(t, "throttled drop", cb.Throttled, pcap-5*bar, 1e-15)
+	checktest.Near(t, "heat", cb.Heat, (pcap - 5*bar).TimesFlow(40*units.LitrePerMinute), 1e-15)
 	if cb.Pilot >= 50*bar/4.5 {
 		t.Errorf("the coupling must lower the pilot pressure below the uncoupled %v: got %v", 50*bar/4.5, cb.Pilot)
 	}
@@ -162,16 +162,16 @@ func TestPilotCheckPressure(t *testing.T) {
 	if err != nil || !pc.Opens {
 		t.Fatal(pc, err)
 	}
-	near(t, "4:1 at 3000 psi", pc.Pilot.PSI(), 750, 1e-14)
+	checktest.Near(t, "4:1 at 3000 psi", pc.Pilot.PSI(), 750, 1e-14)
 	ext, _ := PilotCheckPressure(PilotCheckNeed{Load: 200 * bar, Back: 10 * bar, Ratio: 4, Cracking: 2 * bar, ExternalDrain: true})
-	near(t, "externally drained", ext.Pilot, (200+2-10)*bar/4, 1e-15)
+	checktest.Near(t, "externally drained", ext.Pilot, (200+2-10)*bar/4, 1e-15)
 	// Balance with the piston's back side at tank: p_x·R + p_back = p_load + p_crack.
-	near(t, "external balance", ext.Pilot*4+10*bar, 202*bar, 1e-15)
+	checktest.Near(t, "external balance", ext.Pilot*4+10*bar, 202*bar, 1e-15)
 	in, _ := PilotCheckPressure(PilotCheckNeed{Load: 200 * bar, Back: 10 * bar, Ratio: 4, Cracking: 2 * bar})
-	near(t, "internally drained", in.Pilot, (200+2+3*10)*bar/4, 1e-15)
+	checktest.Near(t, "internally drained", in.Pilot, (200+2+3*10)*bar/4, 1e-15)
 	// Force balance of the internally drained valve at that pilot:
 	// (p_x − p_back)·R + p_back = p_load + p_crack.
-	near(t, "internal balance", (in.Pilot-10*bar)*4+10*bar, 202*bar, 1e-15)
+	checktest.Near(t, "internal balance", (in.Pilot-10*bar)*4+10*bar, 202*bar, 1e-15)
 }
 
 // On the annulus port of a 2:1 cylinder piloted from the cap line, the
@@ -188,7 +188,7 @@ func TestPilotCheckOnTheRodSide(t *testing.T) {
 		t.Errorf("findings %v", pc.Findings)
 	}
 	pc, _ = PilotCheckPressure(PilotCheckNeed{Load: 80 * bar, Ratio: 3, Coupling: 2, ExternalDrain: true})
-	near(t, "3:1 on a 2:1 cylinder", pc.Pilot, 80*bar, 1e-15)
+	checktest.Near(t, "3:1 on a 2:1 cylinder", pc.Pilot, 80*bar, 1e-15)
 	for param, n := range map[string]PilotCheckNeed{
 		"Load":     {Ratio: 3},
 		"Ratio":    {Load: 1e7},

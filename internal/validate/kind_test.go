@@ -45,3 +45,22 @@ func TestPositiveResult(t *testing.T) {
 		t.Errorf("PositiveResult(5e-324) = %v, want nil", err)
 	}
 }
+
+// TestRenamedKeepsKind: Renamed renames the range error inside a Kind and
+// keeps the kind; a nil param mapping keeps the parameter names.
+func TestRenamedKeepsKind(t *testing.T) {
+	kind := Sentinel("no steady state")
+	err := Kind(Fail("pkg.Inner", "q", 1.0, "> 3"), kind)
+	got := Renamed(err, "pkg.Outer", nil)
+	var re *RangeError
+	if !errors.As(got, &re) || re.Func != "pkg.Outer" || re.Param != "q" || !errors.Is(got, kind) || !errors.Is(got, ErrRange) {
+		t.Errorf("Renamed(Kind(...)) = %v; want pkg.Outer naming q, still matching the kind", got)
+	}
+	if errors.As(err, &re); re.Func != "pkg.Inner" {
+		t.Errorf("Renamed changed the error it was given: %v", err)
+	}
+	got = Renamed(err, "pkg.Outer", Fields("Need.", nil))
+	if errors.As(got, &re); re.Param != "Need.q" {
+		t.Errorf("Renamed(Kind(...)) with Fields: param %q, want Need.q", re.Param)
+	}
+}

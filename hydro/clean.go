@@ -1,0 +1,201 @@
+package hydro
+
+import (
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/hydro/contamination"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// cleanliness works out the target code (contamination.RecommendTarget),
+// the filters, the β their elements need against the ingress, and the code
+// the filtration holds (contamination.SteadyState), with each filter's
+// clean drop against its bypass setting running and at a cold start
+// (contamination.CheckBypass).
+func (z *sizer) cleanliness(ml mainLines, nuRun, nuCold units.KinematicViscosity) (CleanlinessResult, components.Findings, error) {
+	cl := z.spec.Cleanliness
+	comp := z.kind.component
+	if c, ok := componentNamed(cl.MostSensitive); ok {
+		comp = c
+	}
+	in := contamination.TargetInput{Components: []contamination.Component{comp}, Pressure: max(z.pumpP, units.Bar),
+		Critical: cl.Critical, SevereDuty: cl.SevereDuty}
+	if !cl.Target.IsZero() {
+		t := cl.Target
+		in.Override = &t
+	}
+	t, err := contamination.RecommendTarget(in)
+	if err != nil {
+		return CleanlinessResult{}, nil, &FieldError{Path: "cleanliness", Err: err}
+	}
+	r := CleanlinessResult{Target: t.Code, Basis: t.Basis.String(), Rule: t.Rule}
+	fs := t.Findings
+	ingress, known, err := z.ingress()
+	if err != nil {
+		return r, nil, &FieldError{Path: "cleanliness.sample", Err: err}
+	}
+	rating := ""
+	if known {
+		var f components.Findings
+		rating, _, f, err = z.filtration(&r, ingress, t.Code)
+		if err != nil {
+			return r, nil, &FieldError{Path: "cleanliness", Err: err}
+		}
+		fs = fs.Merge(f...)
+	}
+	for _, f := range z.filters(ml) {
+		fr, ff, err := z.filterCheck(f, rating, nuRun, nuCold)
+		if err != nil {
+			return r, nil, &FieldError{Path: "cleanliness", Err: err}
+		}
+		r.Filters = append(r.Filters, fr)
+		fs = fs.Merge(ff...)
+	}
+	return r, fs, nil
+}
+
+// ingress returns the particles entering per minute at ≥4, ≥6, ≥14 µm(c):
+// the spec's, or worked back from a sample. The steady state C = R/(Q·(1 −
+// 1/β)) is linear in R, so R = C / SteadyState(1, Q, β) with the family's
+// own balance.
+func (z *sizer) ingress() ([3]float64, bool, error) {
+	cl := z.spec.Cleanliness
+	switch {
+	case cl.Ingress != nil:
+		return cl.Ingress.PerMinute, true, nil
+	case cl.Sample != nil:
+		var r [3]float64
+		for i, c := range cl.Sample.PerML {
+			per, err := contamination.SteadyState(1, cl.Sample.Flow, cl.Sample.Beta[i])
+			if err != nil {
+				return r, false, err
+			}
+			r[i] = c / per
+		}
+		return r, true, nil
+	}
+	return [3]float64{}, false, nil
+}
+
+// filtration chooses the element rating for a known ingress: the β needed
+// at each size for the target with the pump's flow through a full-flow
+// filter (contamination.BetaForTarget), then the coarsest rating of
+// components.FilterRatings that gives it, an element rated β_x(c) ≥ 200
+// (or 1000 where 200 is not enough) being credited with that β at sizes at
+// or above x and with belowRatingBeta below x; and the code that holds
+// (contamination.SteadyState).
+func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target contamination.Code) (string, float64, components.Findings, error) {
+	var fs components.Findings
+	sizes := [3]units.Length{4 * units.Micrometre, 6 * units.Micrometre, 14 * units.Micrometre}
+	beta := filterBeta
+	for i := range 3 {
+		b, err := contamination.BetaForTarget(ingress[i], z.delivery, target.N[i].Scale)
+		if err != nil {
+			fs = fs.Merge(components.NewFinding(components.Caution, components.Contamination, "hydro.target-unreachable",
+				components.PhysicsRule("particle balance of a full-flow filter"),
+				"No full-flow filter at %v holds the target %v at %v against this ingress: add an off-line filter or cut the ingress.",
+				z.delivery, target.String(), contamination.Counter.SizeLabel(i)))
+			b = 1000
+		}
+		r.Required[i] = b
+		if b > beta {
+			beta = 1000
+		}
+	}
+	ratings := components.FilterRatings()
+	x := ratings.Smallest()
+	for rt := range ratings.All() {
+		if creditOK(rt, sizes, r.Required, beta) {
+			x = rt // ascending: the last that passes is the coarsest
+		}
+	}
+	var held [3]float64
+	for i := range 3 {
+		c, err := contamination.SteadyState(ingress[i], z.delivery, credit(x, sizes[i], beta))
+		if err != nil {
+			return "", 0, nil, err
+		}
+		held[i] = c
+	}
+	code, err := contamination.CodeFromCounts(held[0], held[1], held[2])
+	if err != nil {
+		return "", 0, nil, err
+	}
+	cmp, err := contamination.Compare(code, target)
+	if err != nil {
+		return "", 0, nil, err
+	}
+	r.Held, r.Meets = code, cmp.Meets
+	return contamination.Rating{Size: x, Beta: beta}.String(), beta, fs.Merge(cmp.Findings...), nil
+}
+
+// belowRatingBeta is the β credited to an element below its rated size: 2,
+// half the particles caught (our choice, conservative: makers' β curves
+// fall off below the rated size but stay well above 2 near it).
+const belowRatingBeta = 2.0
+
+// credit is the β an element rated β_x(c) ≥ beta is credited with at size s.
+func credit(x, s units.Length, beta float64) float64 {
+	if s >= x {
+		return beta
+	}
+	return belowRatingBeta
+}
+
+// creditOK reports whether a rating x meets the required β at every size.
+func creditOK(x units.Length, sizes [3]units.Length, need [3]float64, beta float64) bool {
+	for i, s := range sizes {
+		if need[i] > credit(x, s, beta) {
+			return false
+		}
+	}
+	return true
+}
+
+// filterPlace is one filter of the circuit.
+type filterPlace struct {
+	placement contamination.Placement
+	rated     units.Flow
+	flow      units.Flow
+	bypass    units.Pressure
+}
+
+func (z *sizer) filters(ml mainLines) []filterPlace {
+	out := []filterPlace{{contamination.ReturnFilter, ml.returnFilter, ml.ret.flow, returnBypass}}
+	if ml.pressureFilter > 0 {
+		out = append(out, filterPlace{contamination.PressureFilter, ml.pressureFilter, z.delivery, pressureBypass})
+	}
+	return out
+}
+
+// filterCheck reports one filter: the placement advice, the rating, and its
+// clean drop against the bypass setting running and at a cold start.
+func (z *sizer) filterCheck(f filterPlace, rating string, nuRun, nuCold units.KinematicViscosity) (FilterResult, components.Findings, error) {
+	adv, _ := contamination.PlacementAdvice(f.placement)
+	r := FilterResult{Placement: adv.Name, Rating: rating, Flow: Value[units.Flow]{f.flow, components.PhysicsRule("the highest flow through it")}}
+	if rating == "" {
+		r.Rating = adv.Element
+	}
+	fs := adv.Findings
+	if f.rated == 0 {
+		fs = fs.Merge(components.NewFinding(components.Notice, components.NoHazard, "hydro.filter-size",
+			filterFigures, "No element of the sizes considered passes %v: use filters in parallel.", f.flow))
+		return r, fs, nil
+	}
+	r.Size = Value[units.Flow]{f.rated, filterFigures}
+	at := contamination.ElementPoint{Drop: filterDrop, Flow: f.rated, Viscosity: filterViscosity}
+	for _, c := range []struct {
+		nu  units.KinematicViscosity
+		out *components.Check[units.Pressure]
+	}{{nuRun, &r.Clean}, {nuCold, &r.Cold}} {
+		if c.nu <= 0 || f.flow <= 0 {
+			continue
+		}
+		b, err := contamination.CheckBypass(at, f.flow, c.nu, f.bypass)
+		if err != nil {
+			return r, nil, err
+		}
+		*c.out = b.Setting
+		fs = fs.Merge(b.Findings...)
+	}
+	return r, fs, nil
+}

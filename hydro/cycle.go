@@ -1,0 +1,177 @@
+package hydro
+
+import (
+	"math"
+	"strconv"
+	"time"
+
+	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/hydro/actuator"
+	"github.com/hydrosize/hydrosize/units"
+)
+
+// act is one actuator through the passes.
+type act struct {
+	spec  Actuator
+	index int
+	moves []*mv
+
+	// Set by each pass.
+	cyl       actuator.Cylinder
+	motor     actuator.Motor
+	size      actuator.CylinderSize // the governing cylinder sizing
+	msize     actuator.MotorSize    // the governing motor sizing
+	governing string                // the phase that set the size
+	ok        bool                  // a standard size was found
+	valve     int                   // index into valveSizes, −1 when none is large enough
+	lineA     *lineRun              // work line to the cap side (or motor port A)
+	lineB     *lineRun              // work line to the annulus side (or port B)
+	holder    *holder               // the counterbalance valve fitted, if any
+}
+
+func (a *act) cylinder() bool { return a.spec.Kind == "cylinder" }
+
+// mv is one move of an actuator in a phase.
+type mv struct {
+	spec  Move
+	phase *phase
+	act   *act
+	dir   actuator.Direction
+	dist  units.Length   // travel (cylinders)
+	speed units.Velocity // rod speed (cylinders)
+	shaft units.RotationalSpeed
+	time  time.Duration // the move's time; 0 for a hold
+
+	// Set by each pass.
+	forces     actuator.LoadForces
+	port       units.Pressure      // inlet port pressure
+	back       units.Pressure      // outlet port pressure: the return path's drop
+	flow       units.Flow          // pump flow the move takes
+	capFlow    units.Flow          // flow into the inlet port (the cap flow of a regenerative extend)
+	ret        units.Flow          // flow out of the outlet port to the return line
+	supplyDrop units.Pressure      // valve and work line on the way in
+	returnDrop units.Pressure      // work line and valve on the way out (the return line's share is in back too)
+	findings   components.Findings // the family's findings for this move
+}
+
+func (m *mv) hold() bool { return m.spec.Direction == "hold" }
+
+// overruns reports a cylinder move whose load drives it (its total force
+// is below 0): the pump only fills the inlet; a counterbalance valve holds
+// the load back.
+func (m *mv) overruns() bool { return m.act.cylinder() && !m.hold() && m.forces.Total() < 0 }
+
+// phase is one phase of the cycle.
+type phase struct {
+	name  string
+	spec  Phase
+	moves []*mv
+	time  time.Duration // moves and dwell
+	move  time.Duration // the longest move
+
+	// Set by each pass.
+	demand   units.Flow     // pump flow the moves take
+	ret      units.Flow     // flow back to the tank through the return line
+	load     units.Pressure // highest inlet port pressure plus its branch drop
+	pumpP    units.Pressure // pump outlet pressure
+	lineDrop units.Pressure // pressure line drop at the phase's flow
+	retDrop  units.Pressure // return line and filter drop at the phase's return flow
+}
+
+// working reports a phase in which something moves.
+func (ph *phase) working() bool {
+	for _, m := range ph.moves {
+		if !m.hold() {
+			return true
+		}
+	}
+	return false
+}
+
+// holding reports a phase in which an actuator holds a load.
+func (ph *phase) holding() bool {
+	for _, m := range ph.moves {
+		if m.hold() {
+			return true
+		}
+	}
+	return false
+}
+
+// resolveCycle builds the actuators and phases and times every move.
+func (z *sizer) resolveCycle() error {
+	byName := map[string]*act{}
+	for i, a := range z.spec.Actuators {
+		x := &act{spec: a, index: i, valve: -1}
+		z.acts = append(z.acts, x)
+		byName[a.Name] = x
+	}
+	for i, p := range z.spec.Cycle.Phases {
+		ph := &phase{name: p.Name, spec: p}
+		if ph.name == "" {
+			ph.name = "phase " + strconv.Itoa(i+1)
+		}
+		for _, m := range p.Moves {
+			a := byName[m.Actuator]
+			x := &mv{spec: m, phase: ph, act: a, dir: direction(m.Direction)}
+			x.timeIt()
+			ph.moves = append(ph.moves, x)
+			a.moves = append(a.moves, x)
+		}
+		z.phases = append(z.phases, ph)
+	}
+	z.retime()
+	return nil
+}
+
+// retime sets each phase's time from its moves' and the idle time between
+// cycles.
+func (z *sizer) retime() {
+	var total time.Duration
+	for _, ph := range z.phases {
+		ph.move = 0
+		for _, m := range ph.moves {
+			ph.move = max(ph.move, m.time)
+		}
+		ph.time = ph.move + ph.spec.Dwell
+		total += ph.time
+	}
+	z.idle = 0
+	if cph := z.spec.Cycle.CyclesPerHour; cph > 0 {
+		z.idle = max(time.Duration(float64(time.Hour)/cph)-total, 0)
+	}
+}
+
+// timeIt works out a move's speed, travel and time from what the spec
+// gives (distance over speed, or the time given).
+func (m *mv) timeIt() {
+	s := m.spec
+	if m.hold() {
+		return
+	}
+	if m.act.cylinder() {
+		m.dist = m.act.spec.Stroke
+		if s.Distance > 0 {
+			m.dist = s.Distance
+		}
+		m.speed, m.time = s.Speed, s.Time
+		switch {
+		case s.Speed > 0:
+			m.time = seconds2(float64(m.dist / units.Length(s.Speed)))
+		case s.Time > 0:
+			m.speed = units.Velocity(float64(m.dist) / s.Time.Seconds())
+		}
+		return
+	}
+	m.shaft, m.time = s.ShaftSpeed, s.Time
+	switch {
+	case s.Time > 0 && s.ShaftSpeed > 0:
+	case s.Time > 0:
+		m.shaft = units.RotationalSpeed(s.Turns / s.Time.Seconds())
+	default:
+		m.time = seconds2(s.Turns / float64(s.ShaftSpeed))
+	}
+}
+
+// seconds2 converts seconds to a duration, rounded to the nanosecond.
+func seconds2(s float64) time.Duration { return time.Duration(math.Round(s * 1e9)) }
