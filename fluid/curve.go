@@ -84,10 +84,18 @@ func NewCurve(a, b float64) (Curve, error) {
 
 func newCurve(a, b float64) Curve {
 	c := Curve{a: a, b: b}
-	c.lo = c.temperatureAt(MaxViscosity.SquareMillimetresPerSecond())
-	c.hi = c.temperatureAt(MinViscosity.SquareMillimetresPerSecond())
+	c.lo = c.temperatureOfLogLog(loglogZMaxViscosity)
+	c.hi = c.temperatureOfLogLog(loglogZMinViscosity)
 	return c
 }
+
+// The D341 log log Z of the viscosity limits, computed once at start-up and
+// never changed: a curve's valid range is where it reaches them, so
+// building a curve does not recompute these constants.
+var (
+	loglogZMinViscosity = loglogZ(MinViscosity.SquareMillimetresPerSecond())
+	loglogZMaxViscosity = loglogZ(MaxViscosity.SquareMillimetresPerSecond())
+)
 
 // rangeFinite reports whether the curve's valid range is a finite,
 // non-empty span above 0 K.
@@ -144,12 +152,41 @@ func (c Curve) TemperatureFor(v units.KinematicViscosity) (units.Temperature, er
 	if err := validate.InRange(fn, "v", v, MinViscosity, MaxViscosity); err != nil {
 		return 0, err
 	}
-	return c.temperatureAt(v.SquareMillimetresPerSecond()), nil
+	// v in range puts T in range; clamp the last-bit round-off at the ends
+	// so that At accepts every temperature TemperatureFor returns.
+	return min(max(c.temperatureAt(v.SquareMillimetresPerSecond()), c.lo), c.hi), nil
 }
 
 func (c Curve) temperatureAt(nu float64) units.Temperature {
-	return units.Temperature(math.Pow(10, (c.a-loglogZ(nu))/c.b))
+	return c.temperatureOfLogLog(loglogZ(nu))
 }
+
+// temperatureOfLogLog returns T = 10^((A − y)/B) in kelvins, the temperature
+// at which the curve's log log Z is y.
+func (c Curve) temperatureOfLogLog(y float64) units.Temperature {
+	return units.Temperature(exp10((c.a - y) / c.b))
+}
+
+// exp10 returns 10^x as 10^n · e^(f·ln 10) with n = ⌊x⌋ and 0 ≤ f < 1: an
+// exact power of ten (math.Pow10) times one exponential of an argument below
+// 2.31, whose rounding is carried into the result (math.FMA and the low part
+// of ln 10), so that it is within 2 ulp of 10^x, at a fraction of the cost
+// of math.Pow(10, x). Beyond the exact powers (n < 0 or n > 22) it is
+// math.Pow.
+func exp10(x float64) float64 {
+	n := math.Floor(x)
+	if !(n >= 0 && n <= 22) {
+		return math.Pow(10, x)
+	}
+	f := x - n // exact: x and n share their binary exponent range
+	y := f * math.Ln10
+	lo := math.FMA(f, math.Ln10, -y) + f*ln10Low // the part of f·ln 10 that y rounded off
+	return math.Pow10(int(n)) * (math.Exp(y) * (1 + lo))
+}
+
+// ln10Low is ln 10 − math.Ln10, the part of ln 10 below float64 precision:
+// ln 10 = 2.302585092994045684017991454684364207601 (to 40 digits).
+const ln10Low = -2.1707562233822494e-16
 
 func (c Curve) rangeError(fn, param string, t units.Temperature) error {
 	if c.b <= 0 {

@@ -147,9 +147,10 @@ func (p *exprParser) multiplySign() bool {
 	switch {
 	case p.s[p.i] == '*' || p.s[p.i] == '.':
 		p.i++
-	case strings.HasPrefix(p.s[p.i:], "·"), strings.HasPrefix(p.s[p.i:], "⋅"):
-		_, n := utf8.DecodeRuneInString(p.s[p.i:])
-		p.i += n
+	case strings.HasPrefix(p.s[p.i:], "·"):
+		p.i += len("·")
+	case strings.HasPrefix(p.s[p.i:], "⋅"):
+		p.i += len("⋅")
 	case p.s[p.i] == '-' && p.i+1 < len(p.s) && isNameStart(p.s[p.i+1:]):
 		p.i++
 	case spaces > 0 && (isNameStart(p.s[p.i:]) || p.s[p.i] == '('):
@@ -162,6 +163,9 @@ func (p *exprParser) multiplySign() bool {
 }
 
 func (p *exprParser) combine(d, e Dimension, sign int8) (Dimension, error) {
+	if e == (Dimension{}) {
+		return d, nil
+	}
 	for k := range d.e {
 		n := int(d.e[k]) + int(sign)*int(e.e[k])
 		if n > maxExp || n < -maxExp {
@@ -191,7 +195,28 @@ func (p *exprParser) power(depth int) (float64, Dimension, error) {
 	return math.Pow(f, float64(n)), d, nil
 }
 
-var superscripts = map[rune]int{'⁰': 0, '¹': 1, '²': 2, '³': 3, '⁴': 4, '⁵': 5, '⁶': 6, '⁷': 7, '⁸': 8, '⁹': 9}
+// superscript returns the value of the superscript digit at the start of
+// s and its length in bytes, or −1: ¹ ² ³ are U+00B9, U+00B2, U+00B3 (two
+// bytes, C2 B9/B2/B3); ⁰ and ⁴–⁹ are U+2070, U+2074–U+2079 (E2 81 B0,
+// E2 81 B4–B9). Reading the bytes costs no map look-up after every name.
+func superscript(s string) (int, int) {
+	switch {
+	case len(s) >= 2 && s[0] == 0xC2:
+		switch s[1] {
+		case 0xB9:
+			return 1, 2
+		case 0xB2:
+			return 2, 2
+		case 0xB3:
+			return 3, 2
+		}
+	case len(s) >= 3 && s[0] == 0xE2 && s[1] == 0x81:
+		if c := s[2]; c == 0xB0 || (c >= 0xB4 && c <= 0xB9) {
+			return int(c - 0xB0), 3
+		}
+	}
+	return -1, 0
+}
 
 // exponent reads "^n", "^-n", superscript digits (with ⁻), or plain digits
 // written straight after a name (in3, mm2). It reports whether one was there.
@@ -232,9 +257,8 @@ func (p *exprParser) exponent() (int, bool, error) {
 	}
 	n, found := 0, false
 	for p.i < len(p.s) {
-		r, size := utf8.DecodeRuneInString(p.s[p.i:])
-		v, ok := superscripts[r]
-		if !ok {
+		v, size := superscript(p.s[p.i:])
+		if v < 0 {
 			break
 		}
 		n, found = n*10+v, true
@@ -345,6 +369,13 @@ func isLetter(c byte) bool { return c|0x20 >= 'a' && c|0x20 <= 'z' }
 func nameLen(s string) int {
 	n := 0
 	for n < len(s) {
+		if c := s[n]; c < utf8.RuneSelf {
+			if !isLetter(c) && c != '"' {
+				break
+			}
+			n++
+			continue
+		}
 		r, size := utf8.DecodeRuneInString(s[n:])
 		if !isNameRune(r) {
 			break

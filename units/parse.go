@@ -105,7 +105,7 @@ func parseTyped(fn, s string, t *typeInfo) (float64, error) {
 		for at < len(in) && in[at] == ' ' {
 			at++
 		}
-		if i, found := spellings[in[at:]]; found {
+		if i, found := fastSpellings.get(in[at:]); found {
 			u := &unitTable[i]
 			if u.dim == t.dim && u.ref&t.accept != 0 && (num >= 0 || !u.isVacuum()) {
 				v := float64(num * u.factor)

@@ -57,7 +57,7 @@ func BenchmarkParsePressure(b *testing.B) {
 // BenchmarkParse measures the dynamic parser on a registered spelling and
 // on an expression built from several units.
 func BenchmarkParse(b *testing.B) {
-	for _, s := range []string{"1.3 gal/min", "12 kW/(m²·K)", "750 in^3/rev"} {
+	for _, s := range []string{"1.3 gal/min", "12 kW/(m²·K)", "2 kW·h/(m²·K)", "750 in^3/rev"} {
 		b.Run(s, func(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {

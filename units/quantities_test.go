@@ -225,6 +225,42 @@ func BenchmarkConvertBare(b *testing.B) {
 	sinkFloat = s
 }
 
+// BenchmarkFloor measures, in one run, what a typed conversion is made of:
+// the b.Loop harness with the operand load and the sum (harness), the same
+// with a bare multiply and a bare divide, and a typed p.PSI(), which is one
+// divide by a constant. A typed accessor costs the harness plus one divide;
+// compare the sub-benchmarks with each other, not across runs.
+func BenchmarkFloor(b *testing.B) {
+	b.Run("harness", func(b *testing.B) {
+		var s float64
+		for i := 0; b.Loop(); i++ {
+			s += benchInputs[i&7]
+		}
+		sinkFloat = s
+	})
+	b.Run("bare_multiply", func(b *testing.B) {
+		var s float64
+		for i := 0; b.Loop(); i++ {
+			s += benchInputs[i&7] * 1.450377377302092e-4
+		}
+		sinkFloat = s
+	})
+	b.Run("bare_divide", func(b *testing.B) {
+		var s float64
+		for i := 0; b.Loop(); i++ {
+			s += benchInputs[i&7] / 6894.757293168361
+		}
+		sinkFloat = s
+	})
+	b.Run("typed_PSI", func(b *testing.B) {
+		var s float64
+		for i := 0; b.Loop(); i++ {
+			s += Pressure(benchInputs[i&7]).PSI()
+		}
+		sinkFloat = s
+	})
+}
+
 // BenchmarkConvertIn reads a Flow in gpm through In(unit).
 func BenchmarkConvertIn(b *testing.B) {
 	b.ReportAllocs()

@@ -28,7 +28,38 @@ type Quantity struct {
 // registered spelling keeps its meaning: °C and °F are points on their
 // scales, psia and bara absolute, psi and bar gauge; inside a longer
 // expression, temperature units count as intervals (BTU/(lbm·°F)).
-func Parse(s string) (Quantity, error) { return parseQuantity("units.Parse", s, numberStyle{}) }
+func Parse(s string) (Quantity, error) {
+	if q, ok := parseRegistered(s); ok {
+		return q, nil
+	}
+	return parseQuantity("units.Parse", s, numberStyle{})
+}
+
+// parseRegistered is Parse's fast path: a plain decimal, spaces and one
+// registered spelling, with the general path's arithmetic. It reports false
+// for everything the general path must look at (a value that is not
+// finite, a point below absolute zero, an absolute pressure below vacuum, a
+// negative vacuum reading) and leaves it to that path.
+func parseRegistered(s string) (Quantity, bool) {
+	in := trimRight(s)
+	num, n, ok := fastNumber(in)
+	if !ok {
+		return Quantity{}, false
+	}
+	for n < len(in) && in[n] == ' ' {
+		n++
+	}
+	i, ok := fastSpellings.get(in[n:])
+	if !ok {
+		return Quantity{}, false
+	}
+	u := &unitTable[i]
+	if num < 0 && (u.factor < 0 || u.ref&(refPoint|refAbsolute) != 0) {
+		return Quantity{}, false
+	}
+	q := quantityOf(num, resolvedOf(u))
+	return q, q.value-q.value == 0
+}
 
 // parseQuantity is Parse for the function fn, reading numbers in style st.
 func parseQuantity(fn, s string, st numberStyle) (Quantity, error) {
@@ -151,6 +182,35 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 // absolute zero or an absolute pressure below vacuum, given or asked for, is
 // ErrRange.
 func Convert(value float64, from, to string) (float64, error) {
+	if i, ok := fastSpellings.get(from); ok {
+		if j, ok := fastSpellings.get(to); ok {
+			if v, ok := convertRegistered(value, &unitTable[i], &unitTable[j]); ok {
+				return v, nil
+			}
+		}
+	}
+	return convertSlow(value, from, to)
+}
+
+// convertRegistered is Convert's fast path, for two registered spellings
+// whose conversion is a multiply and a divide, with the general path's
+// arithmetic: value·u.factor/w.factor. It reports false for everything the
+// general path must look at (a temperature point, a reference that does not
+// cross, a value that is not finite or breaks a bound, a vacuum reading
+// below zero) and leaves it to that path.
+func convertRegistered(value float64, u, w *unitDef) (float64, bool) {
+	refs := u.ref | w.ref
+	if u.dim != w.dim || refs&refPoint != 0 || value-value != 0 ||
+		(value < 0 && (u.factor < 0 || refs&refAbsolute != 0)) ||
+		(refs&refAbsolute != 0 && refs&(refGauge|refDiff) != 0) {
+		return 0, false
+	}
+	v := float64(value*u.factor) / w.factor
+	return v, v-v == 0
+}
+
+// convertSlow is the general path of Convert, with full error reports.
+func convertSlow(value float64, from, to string) (float64, error) {
 	const fn = "units.Convert"
 	if err := validate.Finite(fn, "value", value); err != nil {
 		return 0, err

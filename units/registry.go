@@ -206,7 +206,12 @@ func appendFold(b []byte, s string) []byte {
 			continue
 		}
 		r, n := utf8.DecodeRuneInString(s[i:])
-		b = utf8.AppendRune(b, unicode.ToLower(r))
+		switch {
+		case r < 0xC0: // Latin-1 signs (° · ² ³ µ º): no case
+			b = append(b, s[i:i+n]...)
+		default:
+			b = utf8.AppendRune(b, unicode.ToLower(r))
+		}
 		i += n
 	}
 	return b
@@ -216,11 +221,16 @@ func appendFold(b []byte, s string) []byte {
 // entry when s could be more than one unit, or ok false when nothing folds
 // to s. It allocates nothing.
 func lookupFold(s string) (unit int, e foldEntry, ok bool) {
-	if len(s) > maxFold/2 { // folding grows UTF-8 by at most half: the buffer holds it
+	if len(s) > maxFold/2 || !foldFilter.mayFold(s) { // folding grows UTF-8 by at most half: the buffer holds it
 		return 0, foldEntry{}, false
 	}
 	var buf [maxFold]byte
-	e, ok = folds[string(appendFold(buf[:0], s))]
+	key, h := foldedHash(buf[:0], s)
+	k, ok := foldIndex.getHashed(key, h)
+	if !ok {
+		return 0, foldEntry{}, false
+	}
+	e = foldEntries[k]
 	for _, t := range e.twins {
 		if s == t { // "mPa" is no unit: unknown, not ambiguous
 			return 0, foldEntry{}, false
@@ -232,10 +242,40 @@ func lookupFold(s string) (unit int, e foldEntry, ok bool) {
 // lookupName returns the unit of spelling s: exactly, else by letter case.
 // A spelling that folds to more than one unit gives −1 and its entry.
 func lookupName(s string) (int, foldEntry, bool) {
-	if i, ok := spellings[s]; ok {
+	if i, ok := fastSpellings.get(s); ok {
 		return i, foldEntry{}, true
 	}
 	return lookupFold(s)
+}
+
+// foldedHash appends s folded to lower case to b, as appendFold does, and
+// returns the FNV-1a hash of the result, in one pass.
+func foldedHash(b []byte, s string) ([]byte, uint32) {
+	h := uint32(2166136261)
+	for i := 0; i < len(s); {
+		c := s[i]
+		if c < utf8.RuneSelf {
+			if 'A' <= c && c <= 'Z' {
+				c += 'a' - 'A'
+			}
+			b = append(b, c)
+			h = (h ^ uint32(c)) * 16777619
+			i++
+			continue
+		}
+		start := len(b)
+		r, n := utf8.DecodeRuneInString(s[i:])
+		if r < 0xC0 {
+			b = append(b, s[i:i+n]...)
+		} else {
+			b = utf8.AppendRune(b, unicode.ToLower(r))
+		}
+		for _, c := range b[start:] {
+			h = (h ^ uint32(c)) * 16777619
+		}
+		i += n
+	}
+	return b, h
 }
 
 // ambiguousDetail says what s could be, for an ErrAmbiguous error.
@@ -260,4 +300,124 @@ func contextHint(spelling string) string {
 		}
 	}
 	return ""
+}
+
+// spellTable is a read-only hash table from strings to small integers, for
+// the look-ups on the parsing hot paths: a unit name costs one short hash
+// (FNV-1a over its bytes) and one string compare, where a Go map hashes
+// with the general-purpose runtime hash. Built once at start-up.
+type spellTable struct {
+	keys []string
+	vals []int32
+	mask uint32
+}
+
+// newSpellTable builds a table of m with at most a quarter of its slots
+// used, so that a probe sequence is short.
+func newSpellTable(m map[string]int) spellTable {
+	n := uint32(8)
+	for int(n) < 4*len(m) {
+		n *= 2
+	}
+	t := spellTable{keys: make([]string, n), vals: make([]int32, n), mask: n - 1}
+	for k, v := range m {
+		h := fnv(k) & t.mask
+		for t.vals[h] != 0 {
+			h = (h + 1) & t.mask
+		}
+		t.keys[h], t.vals[h] = k, int32(v)+1
+	}
+	return t
+}
+
+// get returns the value of key s.
+func (t *spellTable) get(s string) (int, bool) {
+	for h := fnv(s) & t.mask; ; h = (h + 1) & t.mask {
+		switch v := t.vals[h]; {
+		case v == 0:
+			return 0, false
+		case t.keys[h] == s:
+			return int(v) - 1, true
+		}
+	}
+}
+
+// getHashed returns the value of the key held in b, whose hash is h.
+func (t *spellTable) getHashed(b []byte, h uint32) (int, bool) {
+	for h &= t.mask; ; h = (h + 1) & t.mask {
+		switch v := t.vals[h]; {
+		case v == 0:
+			return 0, false
+		case t.keys[h] == string(b):
+			return int(v) - 1, true
+		}
+	}
+}
+
+// fnv is the 32-bit FNV-1a hash of s.
+func fnv(s string) uint32 {
+	h := uint32(2166136261)
+	for i := 0; i < len(s); i++ {
+		h = (h ^ uint32(s[i])) * 16777619
+	}
+	return h
+}
+
+// fastSpellings is spellings as a spellTable; foldIndex maps each folded
+// spelling to its entry in foldEntries. Both are built once at start-up.
+var (
+	fastSpellings          = newSpellTable(spellings)
+	foldIndex, foldEntries = buildFoldIndex()
+	foldFilter             = buildFoldFilter()
+)
+
+// foldSieve is a filter over the folded spellings by length, first byte
+// and last byte: most unit expressions ("kW·h/(m²·K)") are no spelling in
+// any case, and the filter says so without folding them.
+type foldSieve struct {
+	lenFirst [64]uint64 // bit first&63 of word len&63
+	last     [4]uint64  // bit of the last byte
+}
+
+func buildFoldFilter() foldSieve {
+	var f foldSieve
+	for k := range folds {
+		f.lenFirst[len(k)&63] |= 1 << (k[0] & 63)
+		f.last[k[len(k)-1]>>6] |= 1 << (k[len(k)-1] & 63)
+	}
+	return f
+}
+
+// mayFold reports whether s could fold to a registered spelling. It is
+// exact for the bytes it looks at: ASCII letters fold to lower case, and a
+// string with a letter beyond Latin-1 signs (which may change length or its
+// last byte when folded) is always looked up.
+func (f *foldSieve) mayFold(s string) bool {
+	if len(s) == 0 {
+		return false
+	}
+	for i := 0; i < len(s); i++ {
+		if c := s[i]; c >= 0xC3 { // a rune at or above U+00C0 (letters that fold)
+			return true
+		}
+	}
+	first, last := lowerASCII(s[0]), lowerASCII(s[len(s)-1])
+	return f.lenFirst[len(s)&63]&(1<<(first&63)) != 0 && f.last[last>>6]&(1<<(last&63)) != 0
+}
+
+func lowerASCII(c byte) byte {
+	if 'A' <= c && c <= 'Z' {
+		return c + 'a' - 'A'
+	}
+	return c
+}
+
+func buildFoldIndex() (spellTable, []foldEntry) {
+	idx := make(map[string]int, len(folds))
+	entries := make([]foldEntry, 0, len(folds))
+	for k, e := range folds {
+		idx[k] = len(entries)
+		entries = append(entries, e)
+	}
+	return newSpellTable(idx), entries
 }

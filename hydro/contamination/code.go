@@ -2,6 +2,7 @@ package contamination
 
 import (
 	"fmt"
+	"math"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/internal/validate"
@@ -206,7 +207,7 @@ func numberError(fn, prefix string, i int, n Number, valid string) error {
 
 // ordered reports whether the measured numbers of c do not grow with size;
 // when they do, small and large are the first offending pair of sizes.
-func (c Code) ordered() (small, large int, ok bool) {
+func (c *Code) ordered() (small, large int, ok bool) {
 	prev, at := -1, 0
 	for j := range c.Len() {
 		r := c.N[j].rank()
@@ -301,6 +302,9 @@ func MicroscopeCodeFromCounts(c5, c15 float64) (Code, error) {
 // checkCounts checks three cumulative counts (the third may be a zero
 // placeholder with an empty name): finite, ≥ 0, not growing with size.
 func checkCounts(fn, nA, nB, nC string, a, b, c float64) error {
+	if a >= b && b >= c && c >= 0 && a <= math.MaxFloat64 { // all finite, ≥ 0, in order (NaN fails)
+		return nil
+	}
 	if err := validate.NonNegative(fn, nA, a); err != nil {
 		return err
 	}

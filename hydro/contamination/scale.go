@@ -1,6 +1,8 @@
 package contamination
 
 import (
+	"math"
+
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -51,21 +53,39 @@ func ScaleNumber(perML float64) (int, error) {
 	return scale(perML), nil
 }
 
-// scale is ScaleNumber for a checked, non-negative, finite count: a binary
-// search for the first bound that is not below the count.
+// scale is ScaleNumber for a checked, non-negative, finite count: the first
+// scale number whose bound, widened by boundSlack, is not below the count.
+// The bounds lie within 4 % of 0.01·2ⁿ (1.3 for 1.28, 2500 for 2560), so
+// the binary exponent of 100·count is the scale number or next to it: one
+// or two comparisons instead of a binary search.
 func scale(perML float64) int {
-	x := perML / (1 + boundSlack)
-	lo, hi := 0, len(upper)
-	for lo < hi {
-		m := int(uint(lo+hi) >> 1)
-		if upper[m] < x {
-			lo = m + 1
-		} else {
-			hi = m
-		}
+	switch {
+	case perML <= upperSlack[0]:
+		return 0
+	case perML > upperSlack[MaxScale]:
+		return AboveTable
 	}
-	return lo // len(upper) == AboveTable when x is above the table
+	// 100·perML = f·2ⁿ with ½ ≤ f < 1 (math.Frexp's n), read from the
+	// exponent bits: perML is a positive normal number here.
+	n := int(math.Float64bits(perML*100)>>52) - 1022
+	n = min(max(n, 1), MaxScale)
+	for upperSlack[n-1] >= perML {
+		n--
+	}
+	for upperSlack[n] < perML {
+		n++
+	}
+	return n
 }
+
+// upperSlack holds each bound of upper widened by boundSlack, computed once
+// at start-up and never changed.
+var upperSlack = func() (t [MaxScale + 1]float64) {
+	for i, u := range upper {
+		t[i] = u * (1 + boundSlack)
+	}
+	return t
+}()
 
 // ScaleRange returns the count range, in particles per mL, that scale number
 // n stands for: more than above, up to and including upTo (ISO 4406:2021,

@@ -268,3 +268,36 @@ func TestNegativeZeroCount(t *testing.T) {
 		}
 	}
 }
+
+// TestScaleSearch: the exponent-guided search agrees with a plain binary
+// search of the table for counts at, just above and just below every bound
+// and its slack, and across the whole range.
+func TestScaleSearch(t *testing.T) {
+	binary := func(x float64) int {
+		lo, hi := 0, len(upperSlack)
+		for lo < hi {
+			m := int(uint(lo+hi) >> 1)
+			if upperSlack[m] < x {
+				lo = m + 1
+			} else {
+				hi = m
+			}
+		}
+		return lo
+	}
+	var xs []float64
+	for _, u := range upper {
+		for _, x := range []float64{u, u * (1 + boundSlack), u * (1 + 2*boundSlack), u * (1 - 1e-15), u * 1.01, u * 0.99} {
+			xs = append(xs, x, math.Nextafter(x, 0), math.Nextafter(x, math.Inf(1)))
+		}
+	}
+	for k := 0; k <= 20000; k++ {
+		xs = append(xs, math.Pow(10, -4+11*float64(k)/20000))
+	}
+	xs = append(xs, 0, 5e-324, 1e-300, 2.5e6, 3e6, 1e300, math.MaxFloat64)
+	for _, x := range xs {
+		if got, want := scale(x), binary(x); got != want {
+			t.Errorf("scale(%.17g) = %d, binary search %d", x, got, want)
+		}
+	}
+}

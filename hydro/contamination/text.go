@@ -25,8 +25,64 @@ import (
 // "16/13". Errors are *units.ParseError values that quote the input and
 // offset and match units.ErrSyntax, units.ErrRange or ErrOrder. ParseCode does not allocate unless it
 // fails.
-func ParseCode(s string) (Code, error) {
+func ParseCode(s string) (c Code, err error) {
+	if plainCode(&c, s) {
+		return c, nil
+	}
 	return parseCode("ParseCode", s)
+}
+
+// plainCode is ParseCode's fast path for the usual text, read into c (left
+// partly written when it reports false): two or three
+// numbers of one or two digits, each perhaps marked "≥", separated by "/"
+// without spaces ("18/16/13", "14/12/≥7"). It reports false for anything
+// else (and for a code whose numbers grow with size), which parseCode then
+// reads with full error reports; what it accepts, parseCode reads the same
+// (TestPlainCodeAgrees).
+func plainCode(c *Code, s string) bool {
+	n, i := 0, 0
+	for {
+		m := MarkNone
+		if i < len(s) && s[i] == "≥"[0] {
+			if !strings.HasPrefix(s[i:], "≥") {
+				return false
+			}
+			m, i = MarkFewCounted, i+len("≥")
+		}
+		if i >= len(s) || !isDigit(s[i]) {
+			return false
+		}
+		v, j := int(s[i]-'0'), i+1
+		if j < len(s) && isDigit(s[j]) {
+			v, j = v*10+int(s[j]-'0'), j+1
+		}
+		if v > MaxScale || (j < len(s) && isDigit(s[j])) {
+			return false
+		}
+		// Plain and "≥" numbers rank by their scale number, so the numbers
+		// are in order (Code.ordered) when no scale exceeds the one before.
+		if n > 0 && v > c.N[n-1].Scale {
+			return false
+		}
+		c.N[n] = Number{Scale: v, Mark: m}
+		n++
+		if j == len(s) {
+			break
+		}
+		if s[j] != '/' || n == 3 {
+			return false
+		}
+		i = j + 1
+	}
+	switch n {
+	case 2:
+		c.Form = Microscope
+	case 3:
+		c.Form = Counter
+	default:
+		return false
+	}
+	return true
 }
 
 func parseCode(fn, s string) (Code, error) {
@@ -89,6 +145,8 @@ func parseNumber(s string, i int) (Number, int, *units.ParseError) {
 		return syntax(i, "want a number, -, * or >28")
 	}
 	switch {
+	case isDigit(s[i]):
+		return parseDigits(s, i, MarkNone)
 	case s[i] == '-':
 		return Number{Mark: MarkNotMeasured}, i + 1, nil
 	case s[i] == '*':

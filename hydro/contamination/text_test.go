@@ -411,3 +411,34 @@ func FuzzCodeUnmarshalText(f *testing.F) {
 		}
 	})
 }
+
+// TestPlainCodeAgrees: ParseCode's fast path reads what the general parser
+// reads, for every code of plain and "≥" numbers up to 29 and many others,
+// and leaves the rest to it.
+func TestPlainCodeAgrees(t *testing.T) {
+	nums := []string{"0", "7", "13", "28", "29", "≥7", "≥28", "07", "-", "*", ">28", "123", "", "≥", " 5"}
+	var ins []string
+	for _, a := range nums {
+		for _, b := range nums {
+			ins = append(ins, a+"/"+b)
+			for _, c := range nums {
+				ins = append(ins, a+"/"+b+"/"+c)
+			}
+		}
+	}
+	ins = append(ins, "18/16/13/5", "18/16/", "/16/13", "18//13", "18 /16/13", "18/16/13 ", "1/2/3")
+	for _, in := range ins {
+		slow, slowErr := parseCode("ParseCode", in)
+		var fast Code
+		ok := plainCode(&fast, in)
+		if !ok {
+			continue
+		}
+		if slowErr != nil || fast != slow {
+			t.Errorf("plainCode(%q) = %v; parseCode gives %v, %v", in, fast, slow, slowErr)
+		}
+	}
+	if !plainCode(new(Code), "14/12/≥7") {
+		t.Error(`plainCode("14/12/≥7") left a plain code to the general path`)
+	}
+}
