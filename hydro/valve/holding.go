@@ -41,6 +41,11 @@ type CounterbalanceNeed struct {
 	// Ratio is the setting over Load, from 1 to 10. Nil selects
 	// DefaultCounterbalanceRatio (1.3, common practice).
 	Ratio *float64
+	// Setting is the valve's setting when it is already chosen (for the
+	// heaviest load the valve holds), to find the pilot pressure and the
+	// throttling for this Load, a lighter one: finite and above Load, with
+	// Ratio nil. Zero sets it at Load × Ratio.
+	Setting units.Pressure
 	// PilotRatio is the valve's pilot ratio R: pilot area over the
 	// relief poppet's effective area (3:1, 4.5:1, 8:1 …), > 0.
 	PilotRatio float64
@@ -88,8 +93,8 @@ type Counterbalance struct {
 
 // CounterbalanceSetting returns a counterbalance valve's setting,
 // p_set = ratio × p_load (1.3 unless the caller gives a ratio: common
-// practice), and the pilot pressure that opens it for its pilot ratio,
-// with back pressure and the actuator's coupling (see
+// practice) or the Setting given, and the pilot pressure that opens it for
+// its pilot ratio, with back pressure and the actuator's coupling (see
 // [Counterbalance.Pilot]; the form is a force balance, and valve makers'
 // own formulas differ: where the maker gives one, use it). A ratio below
 // 1.3 draws a Warning (hazard OverrunningLoad): the valve may not reseat,
@@ -115,13 +120,15 @@ func CounterbalanceSetting(n CounterbalanceNeed) (Counterbalance, error) {
 	if err := validate.NonNegative(fn, "Rating", n.Rating); err != nil {
 		return Counterbalance{}, err
 	}
-	ratio, rule, err := marginOf(fn, "Ratio", n.Ratio, 1, 10, DefaultCounterbalanceRatio,
-		components.PracticeRule("counterbalance set at least 1.3 × the load-induced pressure"))
+	ratio, rule, err := counterbalanceRatio(fn, n)
 	if err != nil {
 		return Counterbalance{}, err
 	}
 	cb := Counterbalance{Load: n.Load, Setting: units.Pressure(float64(n.Load) * ratio), Ratio: ratio, RatioRule: rule,
 		PilotRule: pilotRule()}
+	if n.Setting != 0 {
+		cb.Setting = n.Setting
+	}
 	effective := cb.Setting
 	if !n.Vented {
 		effective += n.Back
@@ -144,6 +151,22 @@ func CounterbalanceSetting(n CounterbalanceNeed) (Counterbalance, error) {
 			cb.Setting, n.Rating))
 	}
 	return cb, nil
+}
+
+// counterbalanceRatio is the setting over the load: the caller's Ratio,
+// the default, or a given Setting over Load.
+func counterbalanceRatio(fn string, n CounterbalanceNeed) (float64, components.Rule, error) {
+	if n.Setting == 0 {
+		return marginOf(fn, "Ratio", n.Ratio, 1, 10, DefaultCounterbalanceRatio,
+			components.PracticeRule("counterbalance set at least 1.3 × the load-induced pressure"))
+	}
+	if n.Ratio != nil {
+		return 0, components.Rule{}, validate.Fail(fn, "Setting", n.Setting, "0 when Ratio is given: one way to set the valve")
+	}
+	if err := validate.Above(fn, "Setting", n.Setting, n.Load); err != nil {
+		return 0, components.Rule{}, err
+	}
+	return float64(n.Setting / n.Load), components.CallerRule("Setting"), nil
 }
 
 // PilotCheckNeed describes a pilot-operated check valve holding a load.
