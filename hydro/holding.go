@@ -2,6 +2,7 @@ package hydro
 
 import (
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -40,8 +41,11 @@ func (a *act) holds() (suspended, overrunning bool) {
 // fitHolder sizes the counterbalance valve of cylinder a
 // (valve.CounterbalanceSetting): its load pressure is the highest the load
 // puts on the held side — on the outlet of a move the load drives, or on the
-// inlet of a move that raises it, held still — and the pilot pressure that
-// opens it becomes the inlet pressure of the move the load drives.
+// inlet of a move or hold that raises it, held still — and the pilot
+// pressure that opens it becomes the inlet pressure of the move the load
+// drives. On the held side the process force counts with the weight: a
+// load the spec gives as a force (a log on a crane's boom) falls as the
+// weight does when pressure is lost, so the valve must hold it too.
 func (z *sizer) fitHolder(a *act) error {
 	a.holder = nil
 	s, o := a.holds()
@@ -60,8 +64,8 @@ func (z *sizer) fitHolder(a *act) error {
 			if h.lowering == nil || m.ret > h.lowering.ret {
 				h.lowering = m
 			}
-		case !m.hold() && m.forces.Gravity > m.forces.Friction:
-			p, err := (m.forces.Gravity - m.forces.Friction).PerArea(a.cyl.Area(m.dir))
+		case m.forces.Gravity > m.forces.Friction:
+			p, err := heldPressure(a.cyl, m)
 			if err != nil {
 				return err
 			}
@@ -91,8 +95,7 @@ func (z *sizer) fitHolder(a *act) error {
 		if err != nil {
 			return err
 		}
-		ratio := float64(cb.Setting / dyn)
-		need.Load, need.Ratio = dyn, &ratio
+		need.Load, need.Setting = dyn, cb.Setting
 		if h.lower, err = valve.CounterbalanceSetting(need); err != nil {
 			return err
 		}
@@ -100,6 +103,18 @@ func (z *sizer) fitHolder(a *act) error {
 	}
 	a.holder = h
 	return nil
+}
+
+// heldPressure is the pressure a move that raises the load (or a hold
+// against it) puts on the inlet side when it stops: its process force and
+// the weight along the path, less the guide friction while it moves (none
+// credited to a hold, which has no motion to set its direction).
+func heldPressure(c actuator.Cylinder, m *mv) (units.Pressure, error) {
+	f := m.forces.Process + m.forces.Gravity
+	if !m.hold() {
+		f -= m.forces.Friction
+	}
+	return f.PerArea(c.Area(m.dir))
 }
 
 // holdingResult reports the load-holding valve of an actuator with what
