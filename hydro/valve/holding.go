@@ -59,6 +59,11 @@ type CounterbalanceNeed struct {
 	// ([Coupling]): 1/φ, φ or 1 from the actuator, or 0 to leave it out
 	// (the common-practice form).
 	Coupling float64
+	// Joined marks a valve whose outlet is joined to its own pilot line,
+	// as on a regenerative extend where the annulus oil it passes joins
+	// the cap side's: the pressure past it is then the pilot pressure plus
+	// Back (the drops of the oil's way across).
+	Joined bool
 	// Flow is the flow through the valve while lowering, for the heat; zero
 	// leaves it out.
 	Flow units.Flow
@@ -77,15 +82,17 @@ type Counterbalance struct {
 	// Pilot is the pilot pressure at which the valve starts to open and the
 	// load to move:
 	//
-	//	p_x = (p_set + k·p_back − p_load) / (R + c)
+	//	p_x = (p_set + k·p_back − p_load) / (R + c − k·j)
 	//
-	// with k = 1 (k = 0 for a Vented valve) and c the Coupling. With c = 0
+	// with k = 1 (k = 0 for a Vented valve), c the Coupling, and j = 1 for
+	// a Joined valve (its outlet at p_x + p_back), 0 otherwise. With c = 0
 	// and no back pressure this is the common-practice
 	// (setting − load)/R.
 	Pilot     units.Pressure
 	PilotRule components.Rule
 	// Throttled is the drop the valve takes while lowering, from the held
-	// pressure p_load + c·p_x down to p_back, and Heat that drop times Flow.
+	// pressure p_load + c·p_x down to the pressure past it (p_back, or
+	// p_x + p_back when Joined), and Heat that drop times Flow.
 	Throttled units.Pressure
 	Heat      units.Power
 	Findings  components.Findings
@@ -129,12 +136,22 @@ func CounterbalanceSetting(n CounterbalanceNeed) (Counterbalance, error) {
 	if n.Setting != 0 {
 		cb.Setting = n.Setting
 	}
-	effective := cb.Setting
+	effective, opening := cb.Setting, n.PilotRatio+n.Coupling
 	if !n.Vented {
 		effective += n.Back
+		if n.Joined {
+			opening-- // the pilot pressure past the poppet holds it shut as much
+		}
 	}
-	cb.Pilot = units.Pressure(float64(effective-n.Load) / (n.PilotRatio + n.Coupling))
-	cb.Throttled = n.Load + units.Pressure(n.Coupling*float64(cb.Pilot)) - n.Back
+	if !(opening > 0) {
+		return Counterbalance{}, validate.Fail(fn, "PilotRatio", n.PilotRatio, "above 1 − Coupling for a Joined valve: its pilot could never open it")
+	}
+	cb.Pilot = units.Pressure(float64(effective-n.Load) / opening)
+	past := n.Back
+	if n.Joined {
+		past += cb.Pilot
+	}
+	cb.Throttled = n.Load + units.Pressure(n.Coupling*float64(cb.Pilot)) - past
 	cb.Heat = cb.Throttled.TimesFlow(n.Flow)
 	if err := validate.Result(fn, "Heat", cb.Heat); err != nil {
 		return Counterbalance{}, err

@@ -154,6 +154,25 @@ func TestCounterbalanceAtSetting(t *testing.T) {
 	}
 }
 
+// On a regenerative extend the annulus oil the valve passes joins the cap
+// side, so the pressure past the valve is the pilot pressure plus the
+// drops of the way across: the poppet balance of TestCounterbalanceCoupled
+// with p_back replaced by p_x + 3 bar.
+func TestCounterbalanceJoined(t *testing.T) {
+	bar := units.Bar
+	const c = 2.566 // φ of a 160 mm × 125 mm cylinder, valve on the annulus port
+	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 16 * bar, Setting: 29 * bar, PilotRatio: 3, Back: 3 * bar,
+		Coupling: c, Joined: true, Flow: 70 * units.LitrePerMinute})
+	if err != nil {
+		t.Fatal(err)
+	}
+	held, past := 16*bar+units.Pressure(c)*cb.Pilot, cb.Pilot+3*bar
+	checktest.Near(t, "poppet balance", held+3*cb.Pilot, 29*bar+past, 1e-15)
+	checktest.Near(t, "throttled drop", cb.Throttled, held-past, 1e-15)
+	_, err = CounterbalanceSetting(CounterbalanceNeed{Load: 16 * bar, PilotRatio: 0.5, Joined: true})
+	checktest.RangeErrorIn(t, err, "valve.CounterbalanceSetting", "PilotRatio")
+}
+
 func TestCounterbalanceFindings(t *testing.T) {
 	bar := units.Bar
 	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 150 * bar, PilotRatio: 3, Ratio: new(1.1), Rating: 160 * bar})
