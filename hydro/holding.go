@@ -61,7 +61,7 @@ func (z *sizer) fitHolder(a *act) error {
 				return err
 			}
 			h.load = max(h.load, p)
-			if h.lowering == nil || m.ret > h.lowering.ret {
+			if h.lowering == nil || m.outFlow() > h.lowering.outFlow() {
 				h.lowering = m
 			}
 		case m.forces.Gravity > m.forces.Friction:
@@ -81,27 +81,57 @@ func (z *sizer) fitHolder(a *act) error {
 		if err != nil {
 			return err
 		}
-		need.Back, need.Coupling, need.Flow = m.back, c, m.ret
+		need.Back, need.Coupling, need.Flow = m.back, c, m.outFlow()
 	}
 	cb, err := valve.CounterbalanceSetting(need)
 	if err != nil {
 		return err
 	}
 	h.cb, h.lower = cb, cb
+	for _, m := range a.moves {
+		if m.overruns() {
+			if err := lower(a, m, cb.Setting); err != nil {
+				return err
+			}
+		}
+	}
 	if m := h.lowering; m != nil {
-		// The move's own load, at the same setting: what opens the valve and
-		// what it throttles while this move runs.
-		dyn, err := (-m.forces.Total()).PerArea(a.cyl.OutletArea(m.dir))
-		if err != nil {
-			return err
-		}
-		need.Load, need.Setting = dyn, cb.Setting
-		if h.lower, err = valve.CounterbalanceSetting(need); err != nil {
-			return err
-		}
-		m.port = h.lower.Pilot // the pump must open the valve to lower the load
+		h.lower = *m.holding
 	}
 	a.holder = h
+	return nil
+}
+
+// lower works out the counterbalance valve set at setting on move m, which
+// the load drives: the move's own load at the same setting gives the pilot
+// pressure that opens the valve, which the pump must supply at the inlet
+// port, and the drop it throttles the outlet oil across, down to the
+// pressure past the valve (the return path's, or on a regenerative extend
+// the cap side's).
+func lower(a *act, m *mv, setting units.Pressure) error {
+	dyn, err := (-m.forces.Total()).PerArea(a.cyl.OutletArea(m.dir))
+	if err != nil {
+		return err
+	}
+	c, err := valve.Coupling(a.cyl, m.dir)
+	if err != nil {
+		return err
+	}
+	if dyn >= setting {
+		dyn = setting * (1 - 1e-12) // the valve set for the heaviest held load already: its own load is no more
+	}
+	need := valve.CounterbalanceNeed{Load: dyn, Setting: setting, PilotRatio: pilotRatio, Back: m.back, Coupling: c, Flow: m.outFlow()}
+	if m.spec.Regenerative {
+		need.Back, need.Joined = m.supplyDrop+m.returnDrop, true
+	}
+	cb, err := valve.CounterbalanceSetting(need)
+	if err != nil {
+		return err
+	}
+	m.holding, m.port = &cb, cb.Pilot
+	if m.spec.Regenerative {
+		m.back = m.port + need.Back
+	}
 	return nil
 }
 
