@@ -78,9 +78,13 @@ func (z *sizer) duty(m *mv, p units.Pressure) actuator.Duty {
 		dir = z.holdDirection(m)
 		m.dir = dir
 	}
+	back := m.back
+	if m.spec.Regenerative {
+		back = 0 // the annulus oil crosses to the cap side: hydro/actuator's Cylinder.RegenerativeFor
+	}
 	return actuator.Duty{
 		Direction: dir, Force: m.spec.Force, Mass: a.Mass, InclineDegrees: incline(a, dir), Friction: a.Friction,
-		Speed: m.speed, AccelTime: m.spec.AccelTime, Pressure: p, BackPressure: m.back,
+		Speed: m.speed, AccelTime: m.spec.AccelTime, Pressure: p, BackPressure: back,
 		SealEfficiency: z.seal, AreaRatio: a.AreaRatio, Stroke: a.Stroke, Bores: z.bores, Rods: z.rods,
 	}
 }
@@ -213,7 +217,7 @@ func timeMove(c actuator.Cylinder, m *mv) error {
 func (z *sizer) cylinderMove(a *act, m *mv) error {
 	c := a.cyl
 	eta := a.size.SealEfficiency
-	m.port, m.flow, m.capFlow, m.ret, m.fit = 0, 0, 0, 0, fitted{}
+	m.port, m.flow, m.capFlow, m.ret, m.holding, m.fit = 0, 0, 0, 0, nil, fitted{}
 	switch {
 	case m.spec.Regenerative:
 		return z.regenerative(c, m, eta)
@@ -269,24 +273,22 @@ func (f fitted) findings() components.Findings {
 	return r.Findings
 }
 
-// regenerative works out a regenerative extend from the family's
-// Cylinder.Regenerative, which gives speed and force for a pump flow and
-// pressure (v = Q/A_rod, F = p·A_rod): both are linear, so the flow and
-// pressure a move needs are read off one reference point. The seal
-// efficiency of the sizing is applied to the force as the family's sizing
-// applies it.
+// regenerative works out a regenerative extend through the family's
+// Cylinder.RegenerativeFor: the pump and cap flows for the move's speed,
+// and, for a load that opposes it, the cap pressure with the sizing's seal
+// efficiency and the annulus oil's drops on its way across (the last
+// pass's). A load that drives the stroke is the counterbalance valve's to
+// meter (fitHolder).
 func (z *sizer) regenerative(c actuator.Cylinder, m *mv, eta float64) error {
-	const qRef, pRef = units.LitrePerMinute, units.Bar
-	reg, err := c.Regenerative(qRef, pRef)
+	f := m.forces.Total()
+	r, err := c.RegenerativeFor(m.speed, max(f, 0), m.supplyDrop+m.returnDrop, eta)
 	if err != nil {
 		return err
 	}
-	if m.speed > 0 {
-		k := float64(m.speed / reg.Speed)
-		m.flow, m.capFlow = qRef*units.Flow(k), reg.CapFlow*units.Flow(k)
-	}
-	if f := m.forces.Total(); f > 0 {
-		m.port = pRef * units.Pressure(float64(f)/eta/float64(reg.Force))
+	m.flow, m.capFlow = r.Flow, r.CapFlow
+	if f >= 0 {
+		m.port = r.Pressure
+		m.back = m.port + m.supplyDrop + m.returnDrop
 	}
 	return nil
 }

@@ -224,14 +224,20 @@ func (z *sizer) drops(ml *mainLines) error {
 			if err != nil {
 				return err
 			}
-			out, err := z.drop(branchOut(m), m.ret)
+			out, err := z.drop(branchOut(m), m.outFlow())
 			if err != nil {
 				return err
 			}
 			m.supplyDrop, m.returnDrop = in, out
-			m.back = 0
-			if m.ret > 0 {
+			switch {
+			case m.spec.Regenerative:
+				// The annulus oil joins the cap side's ahead of the valve: the
+				// cap port's pressure (the last pass's) and the drops of its way.
+				m.back = m.port + m.supplyDrop + m.returnDrop
+			case m.ret > 0:
 				m.back = m.returnDrop + ph.retDrop
+			default:
+				m.back = 0
 			}
 		}
 	}
