@@ -257,7 +257,9 @@ func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error
 		return r, nil, err
 	}
 	r.Inlet = inlet.Check
-	return r, fs.Merge(f...).Merge(inlet.Findings...), nil
+	from := r.Inlet.Rule
+	r.Inlet.Rule = pumpFigures // the family's minimum is the sizer's figure by pump type
+	return r, fs.Merge(f...).Merge(ours(inlet.Findings, from, pumpFigures)...), nil
 }
 
 // inlet checks the pump inlet at a cold start: the suction line's drop at
@@ -317,7 +319,9 @@ func (z *sizer) driveResult(res *result) (DriveResult, components.Findings, erro
 		return r, nil, &FieldError{Path: "supply", Err: err}
 	}
 	r.Rating, r.Thermal, r.Torque = m.Rating, m.Thermal, m.Torque
-	fs = fs.Merge(m.Findings...)
+	from := r.Torque.Rule
+	r.Torque.Rule = breakdownRule // the family's Breakdown is the sizer's figure
+	fs = fs.Merge(ours(m.Findings, from, breakdownRule)...)
 	if z.spec.Site.Altitude > 1000*units.Metre {
 		fs = fs.Merge(components.NewFinding(components.Notice, components.NoHazard, "hydro.altitude",
 			components.StandardRule("IEC 60034-1, site altitude"),

@@ -194,8 +194,10 @@ func (z *sizer) filterCheck(f filterPlace, rating string, nuRun, nuCold units.Ki
 		if err != nil {
 			return r, nil, err
 		}
+		// The bypass setting is the sizer's figure, not the caller's.
 		*c.out = b.Setting
-		fs = fs.Merge(b.Findings...)
+		c.out.Rule = bypassRule
+		fs = fs.Merge(ours(b.Findings, b.Setting.Rule, bypassRule)...)
 	}
 	return r, fs, nil
 }

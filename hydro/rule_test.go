@@ -1,0 +1,66 @@
+package hydro
+
+import (
+	"encoding/json"
+	"regexp"
+	"testing"
+)
+
+// specPath is the form of a caller's rule in a report: a JSON path into
+// the spec, such as "design.pressure" or "cycle.phases[].moves[].torque".
+var specPath = regexp.MustCompile(`^(name|actuators|cycle|supply|site|fluid|cleanliness|circuit|design|units)(\[\])?(\.[a-z_0-9]+(\[\])?)*$`)
+
+// reportRules collects the rules of kind "caller" anywhere in v, a report
+// read back from JSON.
+func reportRules(v any, out *[]string) {
+	switch x := v.(type) {
+	case map[string]any:
+		if x["kind"] == "caller" {
+			s, _ := x["source"].(string)
+			*out = append(*out, s)
+		}
+		for _, e := range x {
+			reportRules(e, out)
+		}
+	case []any:
+		for _, e := range x {
+			reportRules(e, out)
+		}
+	}
+}
+
+// TestCallerRulesNameTheSpec: a figure the report credits to the caller
+// names the spec field it came from. A figure the sizer chose itself — a
+// motor's breakdown torque, a filter's bypass setting, a pump's least inlet
+// pressure — is ours, and says so: a reviewer must not take it for the
+// customer's.
+func TestCallerRulesNameTheSpec(t *testing.T) {
+	us := demoSpec(t)
+	us.Units = "us"
+	pressureFilter := demoSpec(t)
+	pressureFilter.Cleanliness.MostSensitive = "servo valve"
+	for name, s := range map[string]Spec{"demo": demoSpec(t), "us": us, "crane": craneSpec(t), "clamp": clampSpec(),
+		"pressure filter": pressureFilter} {
+		r, err := Size(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		b, err := json.Marshal(r)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var v any
+		if err := json.Unmarshal(b, &v); err != nil {
+			t.Fatal(err)
+		}
+		var sources []string
+		reportRules(v, &sources)
+		seen := map[string]bool{}
+		for _, src := range sources {
+			if !specPath.MatchString(src) && !seen[src] {
+				seen[src] = true
+				t.Errorf("%s: a rule credits the caller with %q, which is no field of the spec", name, src)
+			}
+		}
+	}
+}
