@@ -18,6 +18,8 @@ type Value[T ~float64] struct {
 	Rule  components.Rule `json:"rule"`
 }
 
+func (Value[T]) ruled() {}
+
 // Report is what [Size] returns: the whole machine sized, every number
 // with its unit and the rule it came from, in the order an engineer works.
 // It marshals to JSON with the field names given on each field (stable
@@ -298,7 +300,7 @@ type BillItem struct {
 // reads back to the identical value), durations in seconds ("2.5 s"),
 // choices, checks and findings in the components vocabulary's own JSON, and
 // fields at their zero value (a number with no rule, an empty list) left
-// out.
+// out; a number with its rule is written even when it is zero ("0 bar").
 func (r Report) MarshalJSON() ([]byte, error) { return encodeJSON(reflect.ValueOf(r)) }
 
 // MarshalJSON writes the comparison as Report.MarshalJSON writes a report.

@@ -64,3 +64,34 @@ func TestCallerRulesNameTheSpec(t *testing.T) {
 		}
 	}
 }
+
+// TestReportValuesWritten: a number with its rule is written even when it
+// is zero ("0 bar" of back pressure, a residual of 0 K): a program reading
+// the JSON finds "value" beside every "rule", never a rule alone.
+func TestReportValuesWritten(t *testing.T) {
+	b, err := json.Marshal(demoReport(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var v any
+	if err := json.Unmarshal(b, &v); err != nil {
+		t.Fatal(err)
+	}
+	var walk func(path string, v any)
+	walk = func(path string, v any) {
+		switch x := v.(type) {
+		case map[string]any:
+			if _, ok := x["rule"]; ok && len(x) == 1 {
+				t.Errorf("%s: a rule with no value", path)
+			}
+			for k, e := range x {
+				walk(path+"."+k, e)
+			}
+		case []any:
+			for _, e := range x {
+				walk(path+"[]", e)
+			}
+		}
+	}
+	walk("", v)
+}
