@@ -429,7 +429,7 @@ func (z *sizer) heatResult(b balance) (HeatResult, components.Findings) {
 	amb := z.spec.Site.AmbientMax
 	r := HeatResult{
 		Load:        Value[units.Power]{b.load.Mean, components.PhysicsRule("itemised heat, time-weighted over the cycle (hydro/thermal)")},
-		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("shaft input, time-weighted (hydro/thermal)")},
+		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("pump shaft input and the power of loads lowered, time-weighted (hydro/thermal)")},
 		Reservoir:   b.reservoir.Volume,
 		Area:        Value[units.Area]{b.area, components.OurRule("tank twice as long as wide and deep, 80 % full: its wetted area")},
 		Dissipation: Value[units.Power]{b.ua.Times(top.Sub(amb)), components.PracticeRule("still air on the tank walls, 10 W/(m²·K)")},

@@ -97,6 +97,7 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 			b = 1000
 		}
 		r.Required[i] = b
+		r.RequiredRule = betaRule
 		if b > beta {
 			beta = 1000
 		}
@@ -127,6 +128,8 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 	r.Held, r.Meets = code, cmp.Meets
 	return contamination.Rating{Size: x, Beta: beta}.String(), beta, fs.Merge(cmp.Findings...), nil
 }
+
+var betaRule = components.PhysicsRule("particle balance of a full-flow filter: β = 1/(1 − R/(Q·C)) (hydro/contamination)")
 
 // belowRatingBeta is the β credited to an element below its rated size: 2,
 // half the particles caught (our choice, conservative: makers' β curves

@@ -239,7 +239,7 @@ type AccumulatorResult struct {
 type HeatResult struct {
 	Items       []HeatItem                          `json:"items"` // the mean heat by source
 	Load        Value[units.Power]                  `json:"load"`  // mean heat into the oil
-	Input       Value[units.Power]                  `json:"input"` // mean shaft input
+	Input       Value[units.Power]                  `json:"input"` // mean input: the pump's shaft and the loads lowered
 	Reservoir   components.Choice[units.Volume]     `json:"reservoir"`
 	Area        Value[units.Area]                   `json:"area"`        // wetted area of the tank
 	Dissipation Value[units.Power]                  `json:"dissipation"` // shed by the tank at the highest oil temperature
@@ -252,6 +252,9 @@ type HeatResult struct {
 
 // HeatItem is the mean heat of one source.
 type HeatItem struct {
+	// Source is hydro/thermal's name of the source: "pump", "motor" (the
+	// actuators' own losses: cylinder seal friction, hydraulic motors),
+	// "throttling", "relief", "standby", "lines" or "other".
 	Source string             `json:"source"`
 	Heat   Value[units.Power] `json:"heat"`
 }
@@ -273,9 +276,10 @@ type CleanlinessResult struct {
 	Basis    string             `json:"basis"` // the component that sets it
 	Rule     components.Rule    `json:"rule"`
 	Filters  []FilterResult     `json:"filters"`
-	Held     contamination.Code `json:"held"`          // the code the filtration holds (with a known ingress)
-	Meets    bool               `json:"meets"`         //
-	Required [3]float64         `json:"required_beta"` // β needed at ≥4, ≥6, ≥14 µm(c)
+	Held         contamination.Code `json:"held"`               // the code the filtration holds (with a known ingress)
+	Meets        bool               `json:"meets"`              //
+	Required     [3]float64         `json:"required_beta"`      // β needed at ≥4, ≥6, ≥14 µm(c)
+	RequiredRule components.Rule    `json:"required_beta_rule"` // the rule of Required
 }
 
 // FilterResult is one filter of the plan.

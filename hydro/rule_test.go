@@ -95,3 +95,56 @@ func TestReportValuesWritten(t *testing.T) {
 	}
 	walk("", v)
 }
+
+// TestReportNumbersHaveRules: every number in the report's JSON sits beside
+// its rule (a Value, a Choice, a Check), is a count, or is a list whose
+// rule is named beside it ("required_beta" and "required_beta_rule").
+func TestReportNumbersHaveRules(t *testing.T) {
+	for name, s := range map[string]Spec{"demo": demoSpec(t), "crane": craneSpec(t), "clamp": clampSpec()} {
+		r, err := Size(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		b, err := json.Marshal(r)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var v any
+		if err := json.Unmarshal(b, &v); err != nil {
+			t.Fatal(err)
+		}
+		counts := map[string]bool{"count": true, "iterations": true}
+		var walk func(path string, v any)
+		walk = func(path string, v any) {
+			m, ok := v.(map[string]any)
+			if !ok {
+				if l, ok := v.([]any); ok {
+					for _, e := range l {
+						walk(path+"[]", e)
+					}
+				}
+				return
+			}
+			_, ruled := m["rule"]
+			for k, e := range m {
+				switch x := e.(type) {
+				case float64:
+					if !ruled && !counts[k] {
+						t.Errorf("%s: %s.%s = %v has no rule beside it", name, path, k, x)
+					}
+				case []any:
+					if len(x) > 0 {
+						if _, num := x[0].(float64); num {
+							if _, ok := m[k+"_rule"]; !ok {
+								t.Errorf("%s: %s.%s, a list of numbers, has no %s_rule beside it", name, path, k, k)
+							}
+							continue
+						}
+					}
+				}
+				walk(path+"."+k, e)
+			}
+		}
+		walk("", v)
+	}
+}
