@@ -272,10 +272,10 @@ type FluidResult struct {
 
 // CleanlinessResult is the cleanliness plan.
 type CleanlinessResult struct {
-	Target   contamination.Code `json:"target"`
-	Basis    string             `json:"basis"` // the component that sets it
-	Rule     components.Rule    `json:"rule"`
-	Filters  []FilterResult     `json:"filters"`
+	Target       contamination.Code `json:"target"`
+	Basis        string             `json:"basis"` // the component that sets it
+	Rule         components.Rule    `json:"rule"`
+	Filters      []FilterResult     `json:"filters"`
 	Held         contamination.Code `json:"held"`               // the code the filtration holds (with a known ingress)
 	Meets        bool               `json:"meets"`              //
 	Required     [3]float64         `json:"required_beta"`      // β needed at ≥4, ≥6, ≥14 µm(c)
