@@ -54,9 +54,7 @@ func (z *sizer) cleanliness(ml mainLines, nuRun, nuCold units.KinematicViscosity
 }
 
 // ingress returns the particles entering per minute at ≥4, ≥6, ≥14 µm(c):
-// the spec's, or worked back from a sample. The steady state C = R/(Q·(1 −
-// 1/β)) is linear in R, so R = C / SteadyState(1, Q, β) with the family's
-// own balance.
+// the spec's, or worked back from a sample (contamination.IngressFrom).
 func (z *sizer) ingress() ([3]float64, bool, error) {
 	cl := z.spec.Cleanliness
 	switch {
@@ -65,11 +63,10 @@ func (z *sizer) ingress() ([3]float64, bool, error) {
 	case cl.Sample != nil:
 		var r [3]float64
 		for i, c := range cl.Sample.PerML {
-			per, err := contamination.SteadyState(1, cl.Sample.Flow, cl.Sample.Beta[i])
-			if err != nil {
-				return r, false, err
+			var err error
+			if r[i], err = contamination.IngressFrom(c, cl.Sample.Flow, cl.Sample.Beta[i]); err != nil {
+				return [3]float64{}, false, err
 			}
-			r[i] = c / per
 		}
 		return r, true, nil
 	}
