@@ -109,6 +109,7 @@ const deadLength = 200 * units.Millimetre
 // each move with it.
 func (z *sizer) sizeCylinder(a *act) error {
 	var best actuator.CylinderSize
+	var governs fitted
 	found, failed := false, false
 	for _, m := range a.moves {
 		d := z.duty(m, z.available(m))
@@ -123,22 +124,22 @@ func (z *sizer) sizeCylinder(a *act) error {
 		if d.Direction == actuator.Extend {
 			d.Buckling = z.column(a)
 		}
-		r, err := d.Size()
+		r, err := d.Fit()
 		if err != nil {
 			return err
 		}
 		if !r.Bore.OK() {
 			if !failed {
-				best, a.governing = r, m.phase.name
+				best, governs, a.governing = r, fitted{d, true}, m.phase.name
 			}
 			failed = true
 			continue
 		}
 		if !failed && (!found || larger(r.Cylinder, best.Cylinder)) {
-			best, a.governing, found = r, m.phase.name, true
+			best, governs, a.governing, found = r, fitted{d, true}, m.phase.name, true
 		}
 	}
-	a.size, a.ok = best, found && !failed
+	a.size, a.fit, a.ok = best, governs, found && !failed
 	if !a.ok {
 		a.cyl = actuator.Cylinder{}
 		return nil
@@ -147,7 +148,18 @@ func (z *sizer) sizeCylinder(a *act) error {
 	if a.cyl.Stroke == 0 {
 		a.cyl.Stroke = a.spec.Stroke
 	}
+	if a.chosen.bores.Len() == 0 || a.chosen.cyl != a.cyl {
+		a.chosen = chosenSeries{a.cyl, only("chosen bore", a.cyl.Bore), only("chosen rod", a.cyl.Rod)}
+	}
 	return z.workMoves(a)
+}
+
+// chosenSeries holds the chosen cylinder's bore and rod as one-size
+// series, which restrict the family's sizing to that cylinder; they are
+// built again when the choice changes.
+type chosenSeries struct {
+	cyl         actuator.Cylinder
+	bores, rods components.Series[units.Length]
 }
 
 // workMoves works out every move of actuator a with the size chosen, at
@@ -205,7 +217,7 @@ func timeMove(c actuator.Cylinder, m *mv) error {
 func (z *sizer) cylinderMove(a *act, m *mv) error {
 	c := a.cyl
 	eta := a.size.SealEfficiency
-	m.port, m.flow, m.capFlow, m.ret, m.holding, m.findings = 0, 0, 0, 0, nil, nil
+	m.port, m.flow, m.capFlow, m.ret, m.holding, m.fit = 0, 0, 0, 0, nil, fitted{}
 	switch {
 	case m.spec.Regenerative:
 		return z.regenerative(c, m, eta)
@@ -230,15 +242,35 @@ func (z *sizer) cylinderMove(a *act, m *mv) error {
 		return nil
 	}
 	d := z.duty(m, highestPressure*100)
-	d.Bores, d.Rods, d.AreaRatio = only("chosen bore", c.Bore), only("chosen rod", c.Rod), 0
-	r, err := d.Size()
+	d.Bores, d.Rods, d.AreaRatio = a.chosen.bores, a.chosen.rods, 0
+	r, err := d.Fit()
 	if err != nil {
 		return err
 	}
 	m.port = r.Pressure.Value
 	m.flow, m.capFlow, m.ret = r.Flow, r.Flow, r.ReturnFlow
-	m.findings = r.Findings.Filter(func(f components.Finding) bool { return f.Hazard != components.NoHazard })
+	m.fit = fitted{duty: d, ok: true}
 	return nil
+}
+
+// fitted is a cylinder sizing the passes ran without its findings
+// (actuator.Duty.Fit), kept so that the report can take them from the
+// family once (actuator.Duty.Size, the same sizing with its findings).
+type fitted struct {
+	duty actuator.Duty
+	ok   bool // a sizing was run
+}
+
+// findings returns the sizing's findings; none when no sizing was run.
+func (f fitted) findings() components.Findings {
+	if !f.ok {
+		return nil
+	}
+	r, err := f.duty.Size()
+	if err != nil {
+		return nil // Fit ran the same duty without an error
+	}
+	return r.Findings
 }
 
 // regenerative works out a regenerative extend through the family's

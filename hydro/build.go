@@ -91,10 +91,11 @@ func (z *sizer) report(res *result) (Report, error) {
 
 func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 	r := ActuatorResult{Name: a.spec.Name, Kind: a.spec.Kind, Governing: a.governing}
-	var fs components.Findings
+	var fs, sized components.Findings
 	if a.cylinder() {
 		r.Bore, r.Rod, r.Stroke = a.size.Bore, a.size.Rod, a.spec.Stroke
-		fs = a.size.Findings
+		sized = a.fit.findings()
+		fs = sized
 		if a.ok {
 			phi, _ := a.cyl.AreaRatio()
 			r.AreaRatio = Value[float64]{phi, components.PhysicsRule("φ = A_cap/A_annulus of the chosen bore and rod")}
@@ -109,7 +110,7 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		r.Displacement = a.msize.Displacement
 		fs = a.msize.Findings
 	}
-	fs = fs.Merge(z.holdingFindings(a)...)
+	fs = fs.Merge(z.holdingFindings(a, sized)...)
 	if h, f, err := z.holdingResult(a); err == nil {
 		r.Holding = h
 		fs = fs.Merge(f...)
@@ -140,18 +141,21 @@ func moveResult(a *act, m *mv) MoveResult {
 	return r
 }
 
-// holdingFindings are the family's findings for each move, and the
-// load-holding caution the spec's flags call for where the families gave
-// none (a load the cylinder family does not see as suspended, a motor).
-func (z *sizer) holdingFindings(a *act) components.Findings {
+// holdingFindings are the family's cautions for each move (its findings
+// about a hazard), and the load-holding caution the spec's flags call for
+// where the families gave none, in the moves or in sized, the findings of
+// the actuator's sizing (a load the cylinder family does not see as
+// suspended, a motor).
+func (z *sizer) holdingFindings(a *act, sized components.Findings) components.Findings {
 	var fs components.Findings
+	hazard := func(f components.Finding) bool { return f.Hazard != components.NoHazard }
 	for _, m := range a.moves {
-		fs = fs.Merge(m.findings...)
+		fs = fs.Merge(m.fit.findings().Filter(hazard)...)
 	}
 	held := func(f components.Finding) bool {
 		return f.Hazard == components.SuspendedLoad || f.Hazard == components.OverrunningLoad
 	}
-	if (a.spec.Suspended || a.spec.Overrunning) && len(fs.Filter(held))+len(a.size.Findings.Filter(held)) == 0 {
+	if (a.spec.Suspended || a.spec.Overrunning) && len(fs.Filter(held))+len(sized.Filter(held)) == 0 {
 		fs = fs.Merge(components.NewFinding(components.Warning, components.SuspendedLoad, "hydro.load-holding",
 			components.StandardRule("ISO 4413:2010, load holding"),
 			"%v carries a load that can fall or run away: hold it with a load-holding valve at the actuator port, or a brake on a motor, and keep people clear of it.",
@@ -223,11 +227,11 @@ func (z *sizer) pumpResult(res *result) PumpResult {
 // and its inlet at a cold start (pump.CheckInlet) to the pump's result.
 func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error) {
 	r := z.pumpResult(res)
-	cd, err := z.drop("center", nonNil(valveElement("valve P→T", z.mainValve())), z.delivery)
+	cd, err := z.drop(z.centerEls, z.delivery)
 	if err != nil {
 		return r, nil, err
 	}
-	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd.Total}
+	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd}
 	for _, a := range z.acts {
 		var d pump.Demand
 		for _, m := range a.moves {
@@ -276,7 +280,7 @@ func (z *sizer) inlet(res *result) (pump.InletResult, components.Findings, error
 	}
 	var fs components.Findings
 	loss := units.Pressure(0)
-	if els := res.lines.suction.elements(); len(els) > 0 {
+	if els := res.lines.suction.els; len(els) > 0 {
 		st, err := line.ColdStart(line.Path{Name: "suction", Elements: els}, z.delivery, z.fl, cold, z.tOil)
 		if err != nil {
 			fs = fs.Merge(components.NewFinding(components.Caution, components.ColdStart, "hydro.cold-suction",
@@ -412,8 +416,7 @@ func (z *sizer) lineResults(ml mainLines) []LineResult {
 		if l.flow <= 0 {
 			continue
 		}
-		d, err := z.drop(l.name, l.elements(), l.flow)
-		drop := d.Total
+		drop, err := z.drop(l.els, l.flow)
 		if err != nil {
 			drop = 0
 		}

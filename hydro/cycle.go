@@ -5,7 +5,6 @@ import (
 	"strconv"
 	"time"
 
-	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
@@ -20,13 +19,16 @@ type act struct {
 	// Set by each pass.
 	cyl       actuator.Cylinder
 	motor     actuator.Motor
-	size      actuator.CylinderSize // the governing cylinder sizing
+	size      actuator.CylinderSize // the governing cylinder sizing, without its findings
+	fit       fitted                // the governing sizing's duty, for its findings
+	chosen    chosenSeries          // the chosen bore and rod as series
 	msize     actuator.MotorSize    // the governing motor sizing
 	governing string                // the phase that set the size
 	ok        bool                  // a standard size was found
 	valve     int                   // index into valveSizes, −1 when none is large enough
 	lineA     *lineRun              // work line to the cap side (or motor port A)
 	lineB     *lineRun              // work line to the annulus side (or port B)
+	paths     branches              // the paths through the valve and work lines
 	holder    *holder               // the counterbalance valve fitted, if any
 }
 
@@ -53,7 +55,7 @@ type mv struct {
 	supplyDrop units.Pressure        // valve and work line on the way in
 	returnDrop units.Pressure        // work line and valve on the way out (the return line's share is in back too)
 	holding    *valve.Counterbalance // the load-holding valve on a move the load drives: its pilot and throttling
-	findings   components.Findings   // the family's findings for this move
+	fit        fitted                // the family's sizing of the move on the chosen cylinder, for its findings
 }
 
 func (m *mv) hold() bool { return m.spec.Direction == "hold" }
