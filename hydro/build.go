@@ -261,7 +261,9 @@ func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error
 		return r, nil, err
 	}
 	r.Inlet = inlet.Check
-	return r, fs.Merge(f...).Merge(inlet.Findings...), nil
+	from := r.Inlet.Rule
+	r.Inlet.Rule = pumpFigures // the family's minimum is the sizer's figure by pump type
+	return r, fs.Merge(f...).Merge(ours(inlet.Findings, from, pumpFigures)...), nil
 }
 
 // inlet checks the pump inlet at a cold start: the suction line's drop at
@@ -321,7 +323,9 @@ func (z *sizer) driveResult(res *result) (DriveResult, components.Findings, erro
 		return r, nil, &FieldError{Path: "supply", Err: err}
 	}
 	r.Rating, r.Thermal, r.Torque = m.Rating, m.Thermal, m.Torque
-	fs = fs.Merge(m.Findings...)
+	from := r.Torque.Rule
+	r.Torque.Rule = breakdownRule // the family's Breakdown is the sizer's figure
+	fs = fs.Merge(ours(m.Findings, from, breakdownRule)...)
 	if z.spec.Site.Altitude > 1000*units.Metre {
 		fs = fs.Merge(components.NewFinding(components.Notice, components.NoHazard, "hydro.altitude",
 			components.StandardRule("IEC 60034-1, site altitude"),
@@ -428,7 +432,7 @@ func (z *sizer) heatResult(b balance) (HeatResult, components.Findings) {
 	amb := z.spec.Site.AmbientMax
 	r := HeatResult{
 		Load:        Value[units.Power]{b.load.Mean, components.PhysicsRule("itemised heat, time-weighted over the cycle (hydro/thermal)")},
-		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("shaft input, time-weighted (hydro/thermal)")},
+		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("pump shaft input and the power of loads lowered, time-weighted (hydro/thermal)")},
 		Reservoir:   b.reservoir.Volume,
 		Area:        Value[units.Area]{b.area, components.OurRule("tank twice as long as wide and deep, 80 % full: its wetted area")},
 		Dissipation: Value[units.Power]{b.ua.Times(top.Sub(amb)), components.PracticeRule("still air on the tank walls, 10 W/(m²·K)")},

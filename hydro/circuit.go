@@ -411,9 +411,11 @@ func (z *sizer) working(ph *phase, model pump.Pump) (operating, error) {
 	if err != nil || ph.demand >= pt.Flow || pt.Deadheaded {
 		return operating{mode: "working", point: pt, use: drive.Working}, err
 	}
-	if traits, _ := z.centerTraits(); model.Control == pump.NoControl && traits.Unloads() {
-		// An open or tandem center meters a fixed pump by bleeding the
-		// surplus to tank through the center at the load's pressure.
+	if model.Control == pump.NoControl && z.center() == valve.OpenCenter {
+		// An open center, metered by its spool, bleeds a fixed pump's
+		// surplus to tank at the load's pressure; a tandem or closed
+		// center shifts fully and the surplus passes the relief (common
+		// practice, as hydro/pump's Compatibility judges it).
 		return operating{mode: "working", point: pt, bleed: pt.Flow - ph.demand, use: drive.Working}, nil
 	}
 	if model.Control == pump.NoControl {
