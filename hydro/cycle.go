@@ -6,6 +6,7 @@ import (
 	"time"
 
 	"github.com/hydrosize/hydrosize/hydro/actuator"
+	"github.com/hydrosize/hydrosize/hydro/thermal"
 	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -111,6 +112,7 @@ type phase struct {
 	pumpP    units.Pressure // pump outlet pressure
 	lineDrop units.Pressure // pressure line drop at the phase's flow
 	retDrop  units.Pressure // return line and filter drop at the phase's return flow
+	loads    []thermal.Load // its heat loads, in a buffer each pass fills again
 }
 
 // working reports a phase in which something moves.

@@ -30,10 +30,11 @@ func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 		if err != nil {
 			return nil, err
 		}
-		loads, driving, err := z.phaseLoads(ph, op)
+		loads, driving, err := z.phaseLoads(ph, op, ph.loads[:0])
 		if err != nil {
 			return nil, err
 		}
+		ph.loads = loads
 		out = append(out, phaseHeat{name: ph.name, time: ph.time, op: op, loads: loads, driving: driving})
 	}
 	if z.idle > 0 {
@@ -41,10 +42,11 @@ func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 		if err != nil {
 			return nil, err
 		}
-		loads, _, err := z.phaseLoads(nil, op)
+		loads, _, err := z.phaseLoads(nil, op, z.idleLoads[:0])
 		if err != nil {
 			return nil, err
 		}
+		z.idleLoads = loads
 		out = append(out, phaseHeat{name: "idle between cycles", time: z.idle, op: op, loads: loads})
 	}
 	return out, nil
@@ -54,13 +56,17 @@ func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 // the flow control's throttling, the line and valve drops, the center's
 // drop when unloading, and the actuators' friction; and the power of loads
 // that drive their actuators (a lowered weight), which the counterbalance
-// valve turns into heat as well.
-func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power, error) {
-	n := 4 // pump, relief, center, bleed-off
-	if ph != nil {
-		n += 2 + 4*len(ph.moves) // the lines; each move's flow control, ways in and out, and its own
+// valve turns into heat as well. It appends the loads to loads, the
+// phase's buffer from the last pass (whose loads the last pass no longer
+// needs).
+func (z *sizer) phaseLoads(ph *phase, op operating, loads []thermal.Load) ([]thermal.Load, units.Power, error) {
+	if loads == nil {
+		n := 4 // pump, relief, center, bleed-off
+		if ph != nil {
+			n += 2 + 4*len(ph.moves) // the lines; each move's flow control, ways in and out, and its own
+		}
+		loads = make([]thermal.Load, 0, n)
 	}
-	loads := make([]thermal.Load, 0, n)
 	add := func(l thermal.Load, err error) error {
 		if err == nil && l.Power > 0 {
 			loads = append(loads, l)
