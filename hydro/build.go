@@ -108,7 +108,8 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		}
 	} else {
 		r.Displacement = a.msize.Displacement
-		fs = a.msize.Findings
+		sized = a.msize.Findings
+		fs = sized
 	}
 	fs = fs.Merge(z.holdingFindings(a, sized)...)
 	if h, f, err := z.holdingResult(a); err == nil {

@@ -3,6 +3,7 @@ package hydro
 import (
 	"testing"
 
+	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -36,5 +37,27 @@ func TestCounterbalanceHoldsEveryHeldLoad(t *testing.T) {
 	}
 	if want := 1.3 * held; boom.Holding.Setting.Value < want*(1-1e-12) {
 		t.Errorf("counterbalance set at %v, below 1.3 × %v = %v", boom.Holding.Setting.Value, held, want)
+	}
+}
+
+// TestMotorHoldingSaidOnce: the crane's slew motor carries an overrunning
+// load; the motor family's warning (brake and counterbalance) says what to
+// do, and the sizer's general load-holding warning is not added beside it.
+func TestMotorHoldingSaidOnce(t *testing.T) {
+	r, err := Size(craneSpec(t))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if f := r.Findings.Topic("hydro.load-holding"); len(f) != 0 {
+		t.Errorf("a second load-holding warning: %v", f)
+	}
+	held := 0
+	for _, f := range r.Findings.AtLeast(components.Warning) {
+		if f.Hazard == components.OverrunningLoad || f.Hazard == components.SuspendedLoad {
+			held++
+		}
+	}
+	if held != 2 { // the boom's and the slew's
+		t.Errorf("%d load-holding warnings, want 2: %v", held, r.Findings)
 	}
 }
