@@ -1,6 +1,7 @@
 package hydro
 
 import (
+	"strings"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -59,5 +60,37 @@ func TestMotorHoldingSaidOnce(t *testing.T) {
 	}
 	if held != 2 { // the boom's and the slew's
 		t.Errorf("%d load-holding warnings, want 2: %v", held, r.Findings)
+	}
+}
+
+// TestFindingsNameTheirActuator: a press with two identical rams side by
+// side gets the cylinder family's load-holding warnings for each ram, each
+// naming its ram; merged by their sentences alone, one would vanish and the
+// other would not say which ram it is about.
+func TestFindingsNameTheirActuator(t *testing.T) {
+	s := demoSpec(t)
+	twin := s.Actuators[0]
+	twin.Name = "press 2"
+	s.Actuators = append(s.Actuators, twin)
+	for i := range 4 { // the press's phases: both rams move together
+		ph := &s.Cycle.Phases[i]
+		m := ph.Moves[0]
+		m.Actuator = "press 2"
+		ph.Moves = append(ph.Moves[:1:1], m)
+	}
+	r, err := Size(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, name := range []string{"press", "press 2"} {
+		n := 0
+		for _, f := range r.Findings.Topic("actuator.overrunning") {
+			if strings.HasPrefix(f.Text(units.Metric()), name+": ") {
+				n++
+			}
+		}
+		if n != 1 {
+			t.Errorf("%s: %d overrunning-load warnings naming it, want 1; all: %v", name, n, r.Findings.Topic("actuator.overrunning"))
+		}
 	}
 }
