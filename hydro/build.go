@@ -94,7 +94,7 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 	var fs, sized components.Findings
 	if a.cylinder() {
 		r.Bore, r.Rod, r.Stroke = a.size.Bore, a.size.Rod, a.spec.Stroke
-		sized = a.fit.findings()
+		sized = about(a.fit.findings(), a.spec.Name)
 		fs = sized
 		if a.ok {
 			phi, _ := a.cyl.AreaRatio()
@@ -108,7 +108,8 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		}
 	} else {
 		r.Displacement = a.msize.Displacement
-		fs = a.msize.Findings
+		sized = about(a.msize.Findings, a.spec.Name)
+		fs = sized
 	}
 	fs = fs.Merge(z.holdingFindings(a, sized)...)
 	if h, f, err := z.holdingResult(a); err == nil {
@@ -119,6 +120,17 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		r.Moves = append(r.Moves, moveResult(a, m))
 	}
 	return r, fs
+}
+
+// about puts the findings of a family that sizes one part at a time,
+// whose sentences do not name the part, about the part they are for
+// (components.Finding.About).
+func about(fs components.Findings, name string) components.Findings {
+	out := make(components.Findings, len(fs))
+	for i, f := range fs {
+		out[i] = f.About(name)
+	}
+	return out
 }
 
 func moveResult(a *act, m *mv) MoveResult {
@@ -150,7 +162,7 @@ func (z *sizer) holdingFindings(a *act, sized components.Findings) components.Fi
 	var fs components.Findings
 	hazard := func(f components.Finding) bool { return f.Hazard != components.NoHazard }
 	for _, m := range a.moves {
-		fs = fs.Merge(m.fit.findings().Filter(hazard)...)
+		fs = fs.Merge(about(m.fit.findings().Filter(hazard), a.spec.Name)...)
 	}
 	held := func(f components.Finding) bool {
 		return f.Hazard == components.SuspendedLoad || f.Hazard == components.OverrunningLoad
