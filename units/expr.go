@@ -432,7 +432,6 @@ func (p *exprParser) digits() (int, bool) {
 	return n, p.i > start
 }
 
-
 // maxWords is the most words a registered spelling has ("in Hg vacuum").
 const maxWords = 3
 
