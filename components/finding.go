@@ -4,6 +4,7 @@ import (
 	"cmp"
 	"encoding/json"
 	"fmt"
+	"reflect"
 	"slices"
 	"strings"
 
@@ -137,10 +138,33 @@ func (f Finding) String() string {
 }
 
 // same reports whether two findings say the same thing: same severity,
-// hazard, topic, rule and sentence.
+// hazard, topic, rule and sentence (in metric units).
 func (f Finding) same(g Finding) bool {
-	return f.Severity == g.Severity && f.Hazard == g.Hazard && f.Topic == g.Topic &&
-		f.Rule == g.Rule && f.Text(metric()) == g.Text(metric())
+	return f.sameHead(g) && (f.sameSentence(g) || f.Text(metric()) == g.Text(metric()))
+}
+
+// sameHead reports whether two findings have the same severity, hazard,
+// topic and rule: whether they say the same thing if their sentences are
+// the same.
+func (f Finding) sameHead(g Finding) bool {
+	return f.Severity == g.Severity && f.Hazard == g.Hazard && f.Topic == g.Topic && f.Rule == g.Rule
+}
+
+// sameSentence reports whether two findings are built from the same format
+// and the same values, so that their sentences are the same in any unit
+// system without writing them. Values of a type that == cannot compare
+// (a slice, a map) never count as the same here.
+func (f Finding) sameSentence(g Finding) bool {
+	if f.format != g.format || len(f.args) != len(g.args) {
+		return false
+	}
+	for i, a := range f.args {
+		b := g.args[i]
+		if t := reflect.TypeOf(a); t != reflect.TypeOf(b) || t != nil && !t.Comparable() || a != b {
+			return false
+		}
+	}
+	return true
 }
 
 // findingJSON is the stable JSON form of a finding.
@@ -174,15 +198,66 @@ func (f *Finding) UnmarshalJSON(b []byte) error {
 type Findings []Finding
 
 // Merge returns fs followed by every finding of more that fs does not yet
-// say, in order, without duplicates.
+// say, in order, without duplicates. Two findings say the same thing when
+// they have the same severity, hazard, topic, rule and sentence (in metric
+// units).
 func (fs Findings) Merge(more ...Finding) Findings {
-	out := slices.Clone(fs)
+	if len(more) == 0 {
+		return slices.Clone(fs)
+	}
+	out := make(Findings, len(fs), len(fs)+len(more))
+	copy(out, fs)
+	var m merger
 	for _, f := range more {
-		if !slices.ContainsFunc(out, f.same) {
+		if !m.says(out, f) {
 			out = append(out, f)
 		}
 	}
 	return out
+}
+
+// merger tells, for Merge, whether findings say the same thing (as
+// Finding.same does) writing each sentence at most once, and only where
+// the heads are the same and the sentences are not plainly the same
+// (built from the same format and values).
+type merger struct {
+	texts []sentence // of out[i]
+}
+
+type sentence struct {
+	text    string
+	written bool
+}
+
+// says reports whether a finding of out says what f says.
+func (m *merger) says(out Findings, f Finding) bool {
+	var text sentence
+	for i, g := range out {
+		if !g.sameHead(f) {
+			continue
+		}
+		if g.sameSentence(f) {
+			return true
+		}
+		if !text.written {
+			text = sentence{f.Text(metric()), true}
+		}
+		if m.text(out, i) == text.text {
+			return true
+		}
+	}
+	return false
+}
+
+// text returns the metric sentence of out[i], writing it the first time.
+func (m *merger) text(out Findings, i int) string {
+	for len(m.texts) < len(out) {
+		m.texts = append(m.texts, sentence{})
+	}
+	if s := &m.texts[i]; !s.written {
+		*s = sentence{out[i].Text(metric()), true}
+	}
+	return m.texts[i].text
 }
 
 // Hazard returns the findings about hazard h, in order.

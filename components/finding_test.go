@@ -161,3 +161,56 @@ func TestRuleString(t *testing.T) {
 		}
 	}
 }
+
+// TestMergeSaysSameAsSentence: Merge drops a finding whose sentence reads
+// the same as one before it even when it is built differently — values
+// that round to the same text, a finding read back from JSON, a value ==
+// cannot compare — and keeps findings whose sentences differ.
+func TestMergeSaysSameAsSentence(t *testing.T) {
+	r := PracticeRule("test")
+	p := NewFinding(Caution, Overpressure, "p", r, "the line sees %v", units.Pressure(100.00001e5))
+	close := NewFinding(Caution, Overpressure, "p", r, "the line sees %v", units.Pressure(100.00002e5)) // also "100 bar"
+	other := NewFinding(Caution, Overpressure, "p", r, "the line sees %v", units.Pressure(120e5))
+	b, err := json.Marshal(p)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var decoded Finding
+	if err := json.Unmarshal(b, &decoded); err != nil {
+		t.Fatal(err)
+	}
+	list := NewFinding(Notice, NoHazard, "l", r, "sizes %v", []int{1, 2})
+	list2 := NewFinding(Notice, NoHazard, "l", r, "sizes %v", []int{1, 2})
+	fs := Findings{p}.Merge(close, decoded, other, list, list2, other)
+	var got []string
+	for _, f := range fs {
+		got = append(got, f.Text(units.Metric()))
+	}
+	want := []string{"the line sees 100 bar", "the line sees 120 bar", "sizes [1 2]"}
+	if diff := cmp.Diff(want, got); diff != "" {
+		t.Errorf("Merge (-want +got):\n%s", diff)
+	}
+	for i, f := range []Finding{close, decoded} {
+		if !p.same(f) {
+			t.Errorf("finding %d does not say what p says: %q", i, f.Text(units.Metric()))
+		}
+	}
+	if Findings(nil).Merge() != nil || Findings(nil).Merge(p).Merge() == nil {
+		t.Error("Merge changed whether the list is nil")
+	}
+}
+
+// BenchmarkMerge merges forty findings, ten of them said twice, the way a
+// report gathers its families' findings.
+func BenchmarkMerge(b *testing.B) {
+	r := PracticeRule("test")
+	var fs Findings
+	for i := range 40 {
+		fs = append(fs, NewFinding(Caution, Overpressure, "line.rating", r, "%v sees %v", "line", units.Pressure(i)*units.Bar))
+	}
+	fs = append(fs, fs[:10]...)
+	b.ReportAllocs()
+	for b.Loop() {
+		_ = Findings(nil).Merge(fs...)
+	}
+}

@@ -78,9 +78,13 @@ func (z *sizer) duty(m *mv, p units.Pressure) actuator.Duty {
 		dir = z.holdDirection(m)
 		m.dir = dir
 	}
+	back := m.back
+	if m.spec.Regenerative {
+		back = 0 // the annulus oil crosses to the cap side: hydro/actuator's Cylinder.RegenerativeFor
+	}
 	return actuator.Duty{
 		Direction: dir, Force: m.spec.Force, Mass: a.Mass, InclineDegrees: incline(a, dir), Friction: a.Friction,
-		Speed: m.speed, AccelTime: m.spec.AccelTime, Pressure: p, BackPressure: m.back,
+		Speed: m.speed, AccelTime: m.spec.AccelTime, Pressure: p, BackPressure: back,
 		SealEfficiency: z.seal, AreaRatio: a.AreaRatio, Stroke: a.Stroke, Bores: z.bores, Rods: z.rods,
 	}
 }
@@ -105,6 +109,7 @@ const deadLength = 200 * units.Millimetre
 // each move with it.
 func (z *sizer) sizeCylinder(a *act) error {
 	var best actuator.CylinderSize
+	var governs fitted
 	found, failed := false, false
 	for _, m := range a.moves {
 		d := z.duty(m, z.available(m))
@@ -119,22 +124,22 @@ func (z *sizer) sizeCylinder(a *act) error {
 		if d.Direction == actuator.Extend {
 			d.Buckling = z.column(a)
 		}
-		r, err := d.Size()
+		r, err := d.Fit()
 		if err != nil {
 			return err
 		}
 		if !r.Bore.OK() {
 			if !failed {
-				best, a.governing = r, m.phase.name
+				best, governs, a.governing = r, fitted{d, true}, m.phase.name
 			}
 			failed = true
 			continue
 		}
 		if !failed && (!found || larger(r.Cylinder, best.Cylinder)) {
-			best, a.governing, found = r, m.phase.name, true
+			best, governs, a.governing, found = r, fitted{d, true}, m.phase.name, true
 		}
 	}
-	a.size, a.ok = best, found && !failed
+	a.size, a.fit, a.ok = best, governs, found && !failed
 	if !a.ok {
 		a.cyl = actuator.Cylinder{}
 		return nil
@@ -143,7 +148,18 @@ func (z *sizer) sizeCylinder(a *act) error {
 	if a.cyl.Stroke == 0 {
 		a.cyl.Stroke = a.spec.Stroke
 	}
+	if a.chosen.bores.Len() == 0 || a.chosen.cyl != a.cyl {
+		a.chosen = chosenSeries{a.cyl, only("chosen bore", a.cyl.Bore), only("chosen rod", a.cyl.Rod)}
+	}
 	return z.workMoves(a)
+}
+
+// chosenSeries holds the chosen cylinder's bore and rod as one-size
+// series, which restrict the family's sizing to that cylinder; they are
+// built again when the choice changes.
+type chosenSeries struct {
+	cyl         actuator.Cylinder
+	bores, rods components.Series[units.Length]
 }
 
 // workMoves works out every move of actuator a with the size chosen, at
@@ -201,7 +217,7 @@ func timeMove(c actuator.Cylinder, m *mv) error {
 func (z *sizer) cylinderMove(a *act, m *mv) error {
 	c := a.cyl
 	eta := a.size.SealEfficiency
-	m.port, m.flow, m.capFlow, m.ret, m.findings = 0, 0, 0, 0, nil
+	m.port, m.flow, m.capFlow, m.ret, m.holding, m.fit = 0, 0, 0, 0, nil, fitted{}
 	switch {
 	case m.spec.Regenerative:
 		return z.regenerative(c, m, eta)
@@ -226,35 +242,53 @@ func (z *sizer) cylinderMove(a *act, m *mv) error {
 		return nil
 	}
 	d := z.duty(m, highestPressure*100)
-	d.Bores, d.Rods, d.AreaRatio = only("chosen bore", c.Bore), only("chosen rod", c.Rod), 0
-	r, err := d.Size()
+	d.Bores, d.Rods, d.AreaRatio = a.chosen.bores, a.chosen.rods, 0
+	r, err := d.Fit()
 	if err != nil {
 		return err
 	}
 	m.port = r.Pressure.Value
 	m.flow, m.capFlow, m.ret = r.Flow, r.Flow, r.ReturnFlow
-	m.findings = r.Findings.Filter(func(f components.Finding) bool { return f.Hazard != components.NoHazard })
+	m.fit = fitted{duty: d, ok: true}
 	return nil
 }
 
-// regenerative works out a regenerative extend from the family's
-// Cylinder.Regenerative, which gives speed and force for a pump flow and
-// pressure (v = Q/A_rod, F = p·A_rod): both are linear, so the flow and
-// pressure a move needs are read off one reference point. The seal
-// efficiency of the sizing is applied to the force as the family's sizing
-// applies it.
+// fitted is a cylinder sizing the passes ran without its findings
+// (actuator.Duty.Fit), kept so that the report can take them from the
+// family once (actuator.Duty.Size, the same sizing with its findings).
+type fitted struct {
+	duty actuator.Duty
+	ok   bool // a sizing was run
+}
+
+// findings returns the sizing's findings; none when no sizing was run.
+func (f fitted) findings() components.Findings {
+	if !f.ok {
+		return nil
+	}
+	r, err := f.duty.Size()
+	if err != nil {
+		return nil // Fit ran the same duty without an error
+	}
+	return r.Findings
+}
+
+// regenerative works out a regenerative extend through the family's
+// Cylinder.RegenerativeFor: the pump and cap flows for the move's speed,
+// and, for a load that opposes it, the cap pressure with the sizing's seal
+// efficiency and the annulus oil's drops on its way across (the last
+// pass's). A load that drives the stroke is the counterbalance valve's to
+// meter (fitHolder).
 func (z *sizer) regenerative(c actuator.Cylinder, m *mv, eta float64) error {
-	const qRef, pRef = units.LitrePerMinute, units.Bar
-	reg, err := c.Regenerative(qRef, pRef)
+	f := m.forces.Total()
+	r, err := c.RegenerativeFor(m.speed, max(f, 0), m.supplyDrop+m.returnDrop, eta)
 	if err != nil {
 		return err
 	}
-	if m.speed > 0 {
-		k := float64(m.speed / reg.Speed)
-		m.flow, m.capFlow = qRef*units.Flow(k), reg.CapFlow*units.Flow(k)
-	}
-	if f := m.forces.Total(); f > 0 {
-		m.port = pRef * units.Pressure(float64(f)/eta/float64(reg.Force))
+	m.flow, m.capFlow = r.Flow, r.CapFlow
+	if f >= 0 {
+		m.port = r.Pressure
+		m.back = m.port + m.supplyDrop + m.returnDrop
 	}
 	return nil
 }

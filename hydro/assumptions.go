@@ -60,6 +60,8 @@ var motorFigures = components.OurRule("first-pass hydraulic motor efficiencies; 
 // voltage dip).
 const breakdownTorque = 2.0
 
+var breakdownRule = components.OurRule("electric motor breakdown torque 2 × rated, the low end of induction motors'")
+
 // lsMargin is a load-sensing pump's margin over the highest load (our
 // choice, within the 15–30 bar makers commonly set, from memory).
 const lsMargin = 20 * units.Bar
@@ -122,6 +124,22 @@ const (
 )
 
 var filterFigures = components.OurRule("filter element sized at ⅔ of its rated flow, 0.5 bar clean at rated flow and 32 mm²/s; use the maker's curve")
+
+var bypassRule = components.OurRule("filter bypass set at 3 bar (return) or 6 bar (pressure); use the maker's setting")
+
+// ours returns fs with every finding under rule from — a family's
+// "the caller's" for a figure the sizer chose itself — put under rule to,
+// the sizer's own.
+func ours(fs components.Findings, from, to components.Rule) components.Findings {
+	out := make(components.Findings, len(fs))
+	for i, f := range fs {
+		if f.Rule == from {
+			f.Rule = to
+		}
+		out[i] = f
+	}
+	return out
+}
 
 // accumulatorSizes are nominal gas volumes of bladder accumulators in
 // litres as commonly offered (common practice, from memory).

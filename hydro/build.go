@@ -91,10 +91,11 @@ func (z *sizer) report(res *result) (Report, error) {
 
 func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 	r := ActuatorResult{Name: a.spec.Name, Kind: a.spec.Kind, Governing: a.governing}
-	var fs components.Findings
+	var fs, sized components.Findings
 	if a.cylinder() {
 		r.Bore, r.Rod, r.Stroke = a.size.Bore, a.size.Rod, a.spec.Stroke
-		fs = a.size.Findings
+		sized = a.fit.findings()
+		fs = sized
 		if a.ok {
 			phi, _ := a.cyl.AreaRatio()
 			r.AreaRatio = Value[float64]{phi, components.PhysicsRule("φ = A_cap/A_annulus of the chosen bore and rod")}
@@ -109,7 +110,7 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		r.Displacement = a.msize.Displacement
 		fs = a.msize.Findings
 	}
-	fs = fs.Merge(z.holdingFindings(a)...)
+	fs = fs.Merge(z.holdingFindings(a, sized)...)
 	if h, f, err := z.holdingResult(a); err == nil {
 		r.Holding = h
 		fs = fs.Merge(f...)
@@ -140,18 +141,21 @@ func moveResult(a *act, m *mv) MoveResult {
 	return r
 }
 
-// holdingFindings are the family's findings for each move, and the
-// load-holding caution the spec's flags call for where the families gave
-// none (a load the cylinder family does not see as suspended, a motor).
-func (z *sizer) holdingFindings(a *act) components.Findings {
+// holdingFindings are the family's cautions for each move (its findings
+// about a hazard), and the load-holding caution the spec's flags call for
+// where the families gave none, in the moves or in sized, the findings of
+// the actuator's sizing (a load the cylinder family does not see as
+// suspended, a motor).
+func (z *sizer) holdingFindings(a *act, sized components.Findings) components.Findings {
 	var fs components.Findings
+	hazard := func(f components.Finding) bool { return f.Hazard != components.NoHazard }
 	for _, m := range a.moves {
-		fs = fs.Merge(m.findings...)
+		fs = fs.Merge(m.fit.findings().Filter(hazard)...)
 	}
 	held := func(f components.Finding) bool {
 		return f.Hazard == components.SuspendedLoad || f.Hazard == components.OverrunningLoad
 	}
-	if (a.spec.Suspended || a.spec.Overrunning) && len(fs.Filter(held))+len(a.size.Findings.Filter(held)) == 0 {
+	if (a.spec.Suspended || a.spec.Overrunning) && len(fs.Filter(held))+len(sized.Filter(held)) == 0 {
 		fs = fs.Merge(components.NewFinding(components.Warning, components.SuspendedLoad, "hydro.load-holding",
 			components.StandardRule("ISO 4413:2010, load holding"),
 			"%v carries a load that can fall or run away: hold it with a load-holding valve at the actuator port, or a brake on a motor, and keep people clear of it.",
@@ -223,11 +227,11 @@ func (z *sizer) pumpResult(res *result) PumpResult {
 // and its inlet at a cold start (pump.CheckInlet) to the pump's result.
 func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error) {
 	r := z.pumpResult(res)
-	cd, err := z.drop("center", nonNil(valveElement("valve P→T", z.mainValve())), z.delivery)
+	cd, err := z.drop(z.centerEls, z.delivery)
 	if err != nil {
 		return r, nil, err
 	}
-	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd.Total}
+	c := pump.Circuit{Center: z.center(), Relief: z.reliefP, CenterDrop: cd}
 	for _, a := range z.acts {
 		var d pump.Demand
 		for _, m := range a.moves {
@@ -257,7 +261,9 @@ func (z *sizer) pumpDetails(res *result) (PumpResult, components.Findings, error
 		return r, nil, err
 	}
 	r.Inlet = inlet.Check
-	return r, fs.Merge(f...).Merge(inlet.Findings...), nil
+	from := r.Inlet.Rule
+	r.Inlet.Rule = pumpFigures // the family's minimum is the sizer's figure by pump type
+	return r, fs.Merge(f...).Merge(ours(inlet.Findings, from, pumpFigures)...), nil
 }
 
 // inlet checks the pump inlet at a cold start: the suction line's drop at
@@ -274,7 +280,7 @@ func (z *sizer) inlet(res *result) (pump.InletResult, components.Findings, error
 	}
 	var fs components.Findings
 	loss := units.Pressure(0)
-	if els := res.lines.suction.elements(); len(els) > 0 {
+	if els := res.lines.suction.els; len(els) > 0 {
 		st, err := line.ColdStart(line.Path{Name: "suction", Elements: els}, z.delivery, z.fl, cold, z.tOil)
 		if err != nil {
 			fs = fs.Merge(components.NewFinding(components.Caution, components.ColdStart, "hydro.cold-suction",
@@ -317,7 +323,9 @@ func (z *sizer) driveResult(res *result) (DriveResult, components.Findings, erro
 		return r, nil, &FieldError{Path: "supply", Err: err}
 	}
 	r.Rating, r.Thermal, r.Torque = m.Rating, m.Thermal, m.Torque
-	fs = fs.Merge(m.Findings...)
+	from := r.Torque.Rule
+	r.Torque.Rule = breakdownRule // the family's Breakdown is the sizer's figure
+	fs = fs.Merge(ours(m.Findings, from, breakdownRule)...)
 	if z.spec.Site.Altitude > 1000*units.Metre {
 		fs = fs.Merge(components.NewFinding(components.Notice, components.NoHazard, "hydro.altitude",
 			components.StandardRule("IEC 60034-1, site altitude"),
@@ -408,8 +416,7 @@ func (z *sizer) lineResults(ml mainLines) []LineResult {
 		if l.flow <= 0 {
 			continue
 		}
-		d, err := z.drop(l.name, l.elements(), l.flow)
-		drop := d.Total
+		drop, err := z.drop(l.els, l.flow)
 		if err != nil {
 			drop = 0
 		}
@@ -425,7 +432,7 @@ func (z *sizer) heatResult(b balance) (HeatResult, components.Findings) {
 	amb := z.spec.Site.AmbientMax
 	r := HeatResult{
 		Load:        Value[units.Power]{b.load.Mean, components.PhysicsRule("itemised heat, time-weighted over the cycle (hydro/thermal)")},
-		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("shaft input, time-weighted (hydro/thermal)")},
+		Input:       Value[units.Power]{b.load.Input, components.PhysicsRule("pump shaft input and the power of loads lowered, time-weighted (hydro/thermal)")},
 		Reservoir:   b.reservoir.Volume,
 		Area:        Value[units.Area]{b.area, components.OurRule("tank twice as long as wide and deep, 80 % full: its wetted area")},
 		Dissipation: Value[units.Power]{b.ua.Times(top.Sub(amb)), components.PracticeRule("still air on the tank walls, 10 W/(m²·K)")},

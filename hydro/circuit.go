@@ -1,6 +1,8 @@
 package hydro
 
 import (
+	"slices"
+
 	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/drive"
@@ -15,6 +17,8 @@ type mainLines struct {
 	suction, pressure, ret *lineRun
 	returnFilter           units.Flow // rated flow of the return filter element; 0 when none fits
 	pressureFilter         units.Flow // of the pressure filter, when one is fitted
+
+	supply, back []line.Element // the supply path (pressure line and filter) and the return path (return line and filter)
 }
 
 // newLines sets up the main and work lines from the spec.
@@ -74,14 +78,19 @@ func (z *sizer) sizeValvesAndLines(ml *mainLines) error {
 			qa, qb = max(qa, in), max(qb, out)
 			q = max(q, m.flow, m.capFlow, m.ret)
 		}
-		a.valve = pickValve(q)
 		a.lineA.flow, a.lineB.flow = qa, qb
 		a.lineA.hold, a.lineB.hold = z.reliefP, z.reliefP
-		if err := z.choose(a.lineA); err != nil {
+		newA, err := z.choose(a.lineA)
+		if err != nil {
 			return err
 		}
-		if err := z.choose(a.lineB); err != nil {
+		newB, err := z.choose(a.lineB)
+		if err != nil {
 			return err
+		}
+		if v := pickValve(q); newA || newB || v != a.valve { // the lines are new on their first choice
+			a.valve = v
+			a.paths = branchPaths(a)
 		}
 	}
 	ret := z.delivery
@@ -92,16 +101,35 @@ func (z *sizer) sizeValvesAndLines(ml *mainLines) error {
 	// accumulator adds its oil to it.
 	ml.suction.flow, ml.pressure.flow, ml.ret.flow = z.delivery, max(z.delivery, z.peakDemand()), ret
 	ml.pressure.hold = z.reliefP
-	for _, l := range []*lineRun{ml.suction, ml.pressure, ml.ret} {
-		if err := z.choose(l); err != nil {
-			return err
-		}
+	if _, err := z.choose(ml.suction); err != nil {
+		return err
 	}
-	ml.returnFilter = pickFilter(ret)
+	newP, err := z.choose(ml.pressure)
+	if err != nil {
+		return err
+	}
+	newR, err := z.choose(ml.ret)
+	if err != nil {
+		return err
+	}
+	rf, pf := pickFilter(ret), units.Flow(0)
 	if z.pressureFiltered() {
-		ml.pressureFilter = pickFilter(ml.pressure.flow)
+		pf = pickFilter(ml.pressure.flow)
 	}
+	if newP || newR || rf != ml.returnFilter || pf != ml.pressureFilter {
+		ml.returnFilter, ml.pressureFilter = rf, pf
+		ml.supply, ml.back = ml.supplyElements(), ml.returnElements()
+	}
+	z.centerPath()
 	return nil
+}
+
+// centerPath keeps the main valve's P→T path, the way an unloading center
+// passes the pump's flow, in step with the valves chosen.
+func (z *sizer) centerPath() {
+	if v := z.mainValve(); z.centerEls == nil || v != z.centerValve {
+		z.centerValve, z.centerEls = v, nonNil(valveElement("valve P→T", v))
+	}
 }
 
 // pressureFiltered reports whether the circuit gets a pressure filter: when
@@ -114,7 +142,7 @@ func (z *sizer) pressureFiltered() bool {
 
 // paths of the circuit.
 func (ml *mainLines) supplyElements() []line.Element {
-	els := ml.pressure.elements()
+	els := slices.Clip(ml.pressure.els)
 	if ml.pressureFilter > 0 {
 		els = append(els, filterElement("pressure filter", ml.pressureFilter, pressureBypass))
 	}
@@ -122,11 +150,29 @@ func (ml *mainLines) supplyElements() []line.Element {
 }
 
 func (ml *mainLines) returnElements() []line.Element {
-	els := ml.ret.elements()
+	els := slices.Clip(ml.ret.els)
 	if ml.returnFilter > 0 {
 		els = append(els, filterElement("return filter", ml.returnFilter, returnBypass))
 	}
 	return els
+}
+
+// branches are an actuator's paths through its directional valve and work
+// lines: in[i] from the pump to port i (the valve P→port, then the line),
+// out[i] from port i to the tank (the line, then the valve port→T), with
+// i 0 for port A and 1 for port B.
+type branches struct {
+	in, out [2][]line.Element
+}
+
+// branchPaths builds the branches of actuator a from its valve and lines.
+func branchPaths(a *act) branches {
+	var b branches
+	for i, p := range [2]port{{a.lineA, "A", 0}, {a.lineB, "B", 1}} {
+		b.in[i] = nonNil(append([]line.Element{valveElement(a.spec.Name+" valve P→"+p.port, a.valve)}, p.run.els...)...)
+		b.out[i] = nonNil(append(slices.Clip(p.run.els), valveElement(a.spec.Name+" valve "+p.port+"→T", a.valve))...)
+	}
+	return b
 }
 
 // branchIn and branchOut are the valve and work line a move's oil passes
@@ -134,23 +180,24 @@ func (ml *mainLines) returnElements() []line.Element {
 // forward), line B in on a retract (or reverse).
 func branchIn(m *mv) []line.Element {
 	in, _ := m.lines()
-	return nonNil(append([]line.Element{valveElement(m.act.spec.Name+" valve P→"+in.port, m.act.valve)}, in.run.elements()...)...)
+	return m.act.paths.in[in.i]
 }
 
 func branchOut(m *mv) []line.Element {
 	_, out := m.lines()
-	return nonNil(append(out.run.elements(), valveElement(m.act.spec.Name+" valve "+out.port+"→T", m.act.valve))...)
+	return m.act.paths.out[out.i]
 }
 
 // port is a work line and the valve port it serves.
 type port struct {
 	run  *lineRun
 	port string
+	i    int // 0 for A, 1 for B
 }
 
 // lines returns the move's inlet and outlet work lines.
 func (m *mv) lines() (in, out port) {
-	a, b := port{m.act.lineA, "A"}, port{m.act.lineB, "B"}
+	a, b := port{m.act.lineA, "A", 0}, port{m.act.lineB, "B", 1}
 	if m.dir == actuator.Retract || m.spec.Direction == "reverse" {
 		return b, a
 	}
@@ -162,30 +209,35 @@ func (m *mv) lines() (in, out port) {
 // phase; and from them each move's back pressure and each phase's load and
 // pump pressure.
 func (z *sizer) drops(ml *mainLines) error {
-	supply, back := ml.supplyElements(), ml.returnElements()
 	for _, ph := range z.phases {
-		d, err := z.drop("pressure line", supply, ph.demand)
+		d, err := z.drop(ml.supply, ph.demand)
 		if err != nil {
 			return err
 		}
-		r, err := z.drop("return", back, ph.ret)
+		r, err := z.drop(ml.back, ph.ret)
 		if err != nil {
 			return err
 		}
-		ph.lineDrop, ph.retDrop = d.Total, r.Total
+		ph.lineDrop, ph.retDrop = d, r
 		for _, m := range ph.moves {
-			in, err := z.drop("branch in", branchIn(m), m.capFlow)
+			in, err := z.drop(branchIn(m), m.capFlow)
 			if err != nil {
 				return err
 			}
-			out, err := z.drop("branch out", branchOut(m), m.ret)
+			out, err := z.drop(branchOut(m), m.outFlow())
 			if err != nil {
 				return err
 			}
-			m.supplyDrop, m.returnDrop = in.Total, out.Total
-			m.back = 0
-			if m.ret > 0 {
+			m.supplyDrop, m.returnDrop = in, out
+			switch {
+			case m.spec.Regenerative:
+				// The annulus oil joins the cap side's ahead of the valve: the
+				// cap port's pressure (the last pass's) and the drops of its way.
+				m.back = m.port + m.supplyDrop + m.returnDrop
+			case m.ret > 0:
 				m.back = m.returnDrop + ph.retDrop
+			default:
+				m.back = 0
 			}
 		}
 	}
@@ -306,12 +358,12 @@ func (z *sizer) operate(ph *phase, model pump.Pump) (operating, error) {
 	traits, _ := z.centerTraits()
 	switch {
 	case traits.Unloads():
-		cd, err := z.drop("center", nonNil(valveElement("valve P→T", z.mainValve())), model.Displacement.TimesSpeed(model.Speed))
+		cd, err := z.drop(z.centerEls, model.Displacement.TimesSpeed(model.Speed))
 		if err != nil {
 			return operating{}, err
 		}
-		pt, err := model.At(cd.Total)
-		return operating{mode: "unloaded", point: pt, center: cd.Total, use: drive.Working}, err
+		pt, err := model.At(cd)
+		return operating{mode: "unloaded", point: pt, center: cd, use: drive.Working}, err
 	case model.Control == pump.NoControl:
 		pt, err := model.At(z.reliefP)
 		return operating{mode: "relieving", point: pt, relief: pt.Flow, use: drive.Relieving}, err
@@ -351,9 +403,11 @@ func (z *sizer) working(ph *phase, model pump.Pump) (operating, error) {
 	if err != nil || ph.demand >= pt.Flow || pt.Deadheaded {
 		return operating{mode: "working", point: pt, use: drive.Working}, err
 	}
-	if traits, _ := z.centerTraits(); model.Control == pump.NoControl && traits.Unloads() {
-		// An open or tandem center meters a fixed pump by bleeding the
-		// surplus to tank through the center at the load's pressure.
+	if model.Control == pump.NoControl && z.center() == valve.OpenCenter {
+		// An open center, metered by its spool, bleeds a fixed pump's
+		// surplus to tank at the load's pressure; a tandem or closed
+		// center shifts fully and the surplus passes the relief (common
+		// practice, as hydro/pump's Compatibility judges it).
 		return operating{mode: "working", point: pt, bleed: pt.Flow - ph.demand, use: drive.Working}, nil
 	}
 	if model.Control == pump.NoControl {

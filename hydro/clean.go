@@ -54,9 +54,7 @@ func (z *sizer) cleanliness(ml mainLines, nuRun, nuCold units.KinematicViscosity
 }
 
 // ingress returns the particles entering per minute at ≥4, ≥6, ≥14 µm(c):
-// the spec's, or worked back from a sample. The steady state C = R/(Q·(1 −
-// 1/β)) is linear in R, so R = C / SteadyState(1, Q, β) with the family's
-// own balance.
+// the spec's, or worked back from a sample (contamination.IngressFrom).
 func (z *sizer) ingress() ([3]float64, bool, error) {
 	cl := z.spec.Cleanliness
 	switch {
@@ -65,11 +63,10 @@ func (z *sizer) ingress() ([3]float64, bool, error) {
 	case cl.Sample != nil:
 		var r [3]float64
 		for i, c := range cl.Sample.PerML {
-			per, err := contamination.SteadyState(1, cl.Sample.Flow, cl.Sample.Beta[i])
-			if err != nil {
-				return r, false, err
+			var err error
+			if r[i], err = contamination.IngressFrom(c, cl.Sample.Flow, cl.Sample.Beta[i]); err != nil {
+				return [3]float64{}, false, err
 			}
-			r[i] = c / per
 		}
 		return r, true, nil
 	}
@@ -97,6 +94,7 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 			b = 1000
 		}
 		r.Required[i] = b
+		r.RequiredRule = betaRule
 		if b > beta {
 			beta = 1000
 		}
@@ -127,6 +125,8 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 	r.Held, r.Meets = code, cmp.Meets
 	return contamination.Rating{Size: x, Beta: beta}.String(), beta, fs.Merge(cmp.Findings...), nil
 }
+
+var betaRule = components.PhysicsRule("particle balance of a full-flow filter: β = 1/(1 − R/(Q·C)) (hydro/contamination)")
 
 // belowRatingBeta is the β credited to an element below its rated size: 2,
 // half the particles caught (our choice, conservative: makers' β curves
@@ -194,8 +194,10 @@ func (z *sizer) filterCheck(f filterPlace, rating string, nuRun, nuCold units.Ki
 		if err != nil {
 			return r, nil, err
 		}
+		// The bypass setting is the sizer's figure, not the caller's.
 		*c.out = b.Setting
-		fs = fs.Merge(b.Findings...)
+		c.out.Rule = bypassRule
+		fs = fs.Merge(ours(b.Findings, b.Setting.Rule, bypassRule)...)
 	}
 	return r, fs, nil
 }

@@ -5,8 +5,8 @@ import (
 	"strconv"
 	"time"
 
-	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/hydro/actuator"
+	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -19,13 +19,16 @@ type act struct {
 	// Set by each pass.
 	cyl       actuator.Cylinder
 	motor     actuator.Motor
-	size      actuator.CylinderSize // the governing cylinder sizing
+	size      actuator.CylinderSize // the governing cylinder sizing, without its findings
+	fit       fitted                // the governing sizing's duty, for its findings
+	chosen    chosenSeries          // the chosen bore and rod as series
 	msize     actuator.MotorSize    // the governing motor sizing
 	governing string                // the phase that set the size
 	ok        bool                  // a standard size was found
 	valve     int                   // index into valveSizes, −1 when none is large enough
 	lineA     *lineRun              // work line to the cap side (or motor port A)
 	lineB     *lineRun              // work line to the annulus side (or port B)
+	paths     branches              // the paths through the valve and work lines
 	holder    *holder               // the counterbalance valve fitted, if any
 }
 
@@ -44,17 +47,27 @@ type mv struct {
 
 	// Set by each pass.
 	forces     actuator.LoadForces
-	port       units.Pressure      // inlet port pressure
-	back       units.Pressure      // outlet port pressure: the return path's drop
-	flow       units.Flow          // pump flow the move takes
-	capFlow    units.Flow          // flow into the inlet port (the cap flow of a regenerative extend)
-	ret        units.Flow          // flow out of the outlet port to the return line
-	supplyDrop units.Pressure      // valve and work line on the way in
-	returnDrop units.Pressure      // work line and valve on the way out (the return line's share is in back too)
-	findings   components.Findings // the family's findings for this move
+	port       units.Pressure        // inlet port pressure
+	back       units.Pressure        // outlet port pressure: the return path's drop
+	flow       units.Flow            // pump flow the move takes
+	capFlow    units.Flow            // flow into the inlet port (the cap flow of a regenerative extend)
+	ret        units.Flow            // flow out of the outlet port to the return line
+	supplyDrop units.Pressure        // valve and work line on the way in
+	returnDrop units.Pressure        // work line and valve on the way out (the return line's share is in back too)
+	holding    *valve.Counterbalance // the load-holding valve on a move the load drives: its pilot and throttling
+	fit        fitted                // the family's sizing of the move on the chosen cylinder, for its findings
 }
 
 func (m *mv) hold() bool { return m.spec.Direction == "hold" }
+
+// outFlow is the flow out of the outlet port: to the return line, or on a
+// regenerative extend across to the cap side.
+func (m *mv) outFlow() units.Flow {
+	if m.spec.Regenerative {
+		return m.capFlow - m.flow
+	}
+	return m.ret
+}
 
 // overruns reports a cylinder move whose load drives it (its total force
 // is below 0): the pump only fills the inlet; a counterbalance valve holds

@@ -89,14 +89,20 @@ func encodeValue(b *bytes.Buffer, v reflect.Value, path string) error {
 	return nil
 }
 
-// encodeStruct writes the fields of v that are not zero, by JSON name.
+// valueTy is the interface of the report's Value types, whose number is
+// written even when it is zero: it has a rule, so it was worked out.
+var valueTy = reflect.TypeFor[interface{ ruled() }]()
+
+// encodeStruct writes the fields of v that are not zero, by JSON name, and
+// a Value's number always.
 func encodeStruct(b *bytes.Buffer, v reflect.Value, path string) error {
 	b.WriteByte('{')
 	first := true
+	ruled := v.Type().Implements(valueTy)
 	for i := range v.NumField() {
 		name := jsonName(v.Type().Field(i))
 		f := v.Field(i)
-		if name == "" || f.IsZero() {
+		if name == "" || f.IsZero() && !(ruled && name == "value") {
 			continue
 		}
 		if !first {

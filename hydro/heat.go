@@ -82,12 +82,20 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 		return loads, 0, nil
 	}
 	if ph.working() {
-		q := min(ph.demand, op.point.Flow)
-		if z.spec.Circuit.Accumulator.Use == "cycle" {
-			q = ph.demand // the flow controls meter the accumulator's flow too
+		// The share of each move's flow that passes its valve: all of it,
+		// or when the pump falls short the pump's share (an accumulator
+		// that supplements the pump makes up the rest through the valves).
+		share := 1.0
+		if ph.demand > op.point.Flow && z.spec.Circuit.Accumulator.Use != "cycle" {
+			share = float64(op.point.Flow / ph.demand)
 		}
-		if err := add(thermal.Throttling("flow control", op.throttle, q)); err != nil {
-			return nil, 0, err
+		for _, m := range ph.moves {
+			// Each valve throttles from what the highest load leaves at
+			// the valves down to its own actuator's pressure.
+			dp := op.throttle + ph.load - (m.port + m.supplyDrop)
+			if err := add(thermal.Throttling(m.act.spec.Name+" flow control", max(dp, 0), m.flow*units.Flow(share))); err != nil {
+				return nil, 0, err
+			}
 		}
 		if err := add(thermal.LineLoss("pressure line", ph.lineDrop, ph.demand)); err != nil {
 			return nil, 0, err
@@ -113,26 +121,25 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 }
 
 // moveLoads adds a move's branch drops and its actuator's own losses; for
-// a load that drives its actuator, the load's own power F·v, all of which
-// the counterbalance valve and the return path turn into heat, which it
+// a load that drives its actuator, the load's own power F·v, which the
+// counterbalance valve and the outlet path turn into heat, which it
 // returns.
 func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Power, error) {
 	name := m.act.spec.Name
-	if m.overruns() {
-		// The pump pays for its own flow's drop; the load pays for the rest.
-		if err := add(thermal.LineLoss(name+" valve and lines in", m.supplyDrop, m.flow)); err != nil {
-			return 0, err
-		}
-		p := (-m.forces.Total()).TimesVelocity(m.speed)
-		if h := m.act.holder; h != nil && h.lowering == m {
-			return p, add(thermal.Throttling(name+" counterbalance valve", h.lower.Throttled, m.ret))
-		}
-		return p, add(thermal.Other(name+" lowered load", p, components.PhysicsRule("P = F·v of the load driving the actuator")))
-	}
 	if err := add(thermal.LineLoss(name+" valve and lines in", m.supplyDrop, m.capFlow)); err != nil {
 		return 0, err
 	}
-	if err := add(thermal.LineLoss(name+" valve and lines out", m.returnDrop, m.ret)); err != nil {
+	if m.overruns() {
+		p := (-m.forces.Total()).TimesVelocity(m.speed)
+		if m.holding == nil {
+			return p, add(thermal.Other(name+" lowered load", p, components.PhysicsRule("P = F·v of the load driving the actuator")))
+		}
+		if err := add(thermal.LineLoss(name+" valve and lines out", m.returnDrop, m.outFlow())); err != nil {
+			return 0, err
+		}
+		return p, add(thermal.Throttling(name+" counterbalance valve", m.holding.Throttled, m.outFlow()))
+	}
+	if err := add(thermal.LineLoss(name+" valve and lines out", m.returnDrop, m.outFlow())); err != nil {
 		return 0, err
 	}
 	if m.hold() || m.port <= 0 || m.capFlow <= 0 {
@@ -142,7 +149,9 @@ func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Pow
 		if m.forces.Total() <= 0 {
 			return 0, nil // no load: the port pressure only pushes the outlet oil out
 		}
-		return 0, add(thermal.MotorLoss(name+" seal friction", m.port, m.capFlow, m.act.size.SealEfficiency))
+		// (1 − η) of the pressure's force on the pump's flow: the cap flow,
+		// or on a regenerative extend the rod section's (RegenerativeFor).
+		return 0, add(thermal.MotorLoss(name+" seal friction", m.port, m.flow, m.act.size.SealEfficiency))
 	}
 	return 0, add(thermal.MotorLoss(name+" motor losses", m.port-m.back, m.capFlow, motorVolumetric*motorMechanical))
 }

@@ -2,6 +2,7 @@ package hydro
 
 import (
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/hydro/actuator"
 	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -40,8 +41,11 @@ func (a *act) holds() (suspended, overrunning bool) {
 // fitHolder sizes the counterbalance valve of cylinder a
 // (valve.CounterbalanceSetting): its load pressure is the highest the load
 // puts on the held side — on the outlet of a move the load drives, or on the
-// inlet of a move that raises it, held still — and the pilot pressure that
-// opens it becomes the inlet pressure of the move the load drives.
+// inlet of a move or hold that raises it, held still — and the pilot
+// pressure that opens it becomes the inlet pressure of the move the load
+// drives. On the held side the process force counts with the weight: a
+// load the spec gives as a force (a log on a crane's boom) falls as the
+// weight does when pressure is lost, so the valve must hold it too.
 func (z *sizer) fitHolder(a *act) error {
 	a.holder = nil
 	s, o := a.holds()
@@ -57,11 +61,11 @@ func (z *sizer) fitHolder(a *act) error {
 				return err
 			}
 			h.load = max(h.load, p)
-			if h.lowering == nil || m.ret > h.lowering.ret {
+			if h.lowering == nil || m.outFlow() > h.lowering.outFlow() {
 				h.lowering = m
 			}
-		case !m.hold() && m.forces.Gravity > m.forces.Friction:
-			p, err := (m.forces.Gravity - m.forces.Friction).PerArea(a.cyl.Area(m.dir))
+		case m.forces.Gravity > m.forces.Friction:
+			p, err := heldPressure(a.cyl, m)
 			if err != nil {
 				return err
 			}
@@ -77,29 +81,70 @@ func (z *sizer) fitHolder(a *act) error {
 		if err != nil {
 			return err
 		}
-		need.Back, need.Coupling, need.Flow = m.back, c, m.ret
+		need.Back, need.Coupling, need.Flow = m.back, c, m.outFlow()
 	}
 	cb, err := valve.CounterbalanceSetting(need)
 	if err != nil {
 		return err
 	}
 	h.cb, h.lower = cb, cb
+	for _, m := range a.moves {
+		if m.overruns() {
+			if err := lower(a, m, cb.Setting); err != nil {
+				return err
+			}
+		}
+	}
 	if m := h.lowering; m != nil {
-		// The move's own load, at the same setting: what opens the valve and
-		// what it throttles while this move runs.
-		dyn, err := (-m.forces.Total()).PerArea(a.cyl.OutletArea(m.dir))
-		if err != nil {
-			return err
-		}
-		ratio := float64(cb.Setting / dyn)
-		need.Load, need.Ratio = dyn, &ratio
-		if h.lower, err = valve.CounterbalanceSetting(need); err != nil {
-			return err
-		}
-		m.port = h.lower.Pilot // the pump must open the valve to lower the load
+		h.lower = *m.holding
 	}
 	a.holder = h
 	return nil
+}
+
+// lower works out the counterbalance valve set at setting on move m, which
+// the load drives: the move's own load at the same setting gives the pilot
+// pressure that opens the valve, which the pump must supply at the inlet
+// port, and the drop it throttles the outlet oil across, down to the
+// pressure past the valve (the return path's, or on a regenerative extend
+// the cap side's).
+func lower(a *act, m *mv, setting units.Pressure) error {
+	dyn, err := (-m.forces.Total()).PerArea(a.cyl.OutletArea(m.dir))
+	if err != nil {
+		return err
+	}
+	c, err := valve.Coupling(a.cyl, m.dir)
+	if err != nil {
+		return err
+	}
+	if dyn >= setting {
+		dyn = setting * (1 - 1e-12) // the valve set for the heaviest held load already: its own load is no more
+	}
+	need := valve.CounterbalanceNeed{Load: dyn, Setting: setting, PilotRatio: pilotRatio, Back: m.back, Coupling: c, Flow: m.outFlow()}
+	if m.spec.Regenerative {
+		need.Back, need.Joined = m.supplyDrop+m.returnDrop, true
+	}
+	cb, err := valve.CounterbalanceSetting(need)
+	if err != nil {
+		return err
+	}
+	m.holding, m.port = &cb, cb.Pilot
+	if m.spec.Regenerative {
+		m.back = m.port + need.Back
+	}
+	return nil
+}
+
+// heldPressure is the pressure a move that raises the load (or a hold
+// against it) puts on the inlet side when it stops: its process force and
+// the weight along the path, less the guide friction while it moves (none
+// credited to a hold, which has no motion to set its direction).
+func heldPressure(c actuator.Cylinder, m *mv) (units.Pressure, error) {
+	f := m.forces.Process + m.forces.Gravity
+	if !m.hold() {
+		f -= m.forces.Friction
+	}
+	return f.PerArea(c.Area(m.dir))
 }
 
 // holdingResult reports the load-holding valve of an actuator with what

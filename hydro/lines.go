@@ -23,10 +23,42 @@ type lineRun struct {
 	size     string
 	inner    units.Length // the chosen bore; 0 when none is large enough
 	findings components.Findings
+	els      []line.Element // the line's pipe and fittings, for the drops
+
+	chosen    bool     // the line has been chosen for need
+	chosenFor lineNeed // the need of the last choice
 }
 
-// choose picks the tube or hose for the line's flow.
-func (z *sizer) choose(l *lineRun) error {
+// lineNeed is what a line's choice depends on besides its fixed route and
+// limit: the flow and the pressure its wall must hold.
+type lineNeed struct {
+	flow units.Flow
+	hold units.Pressure
+}
+
+// choose picks the tube or hose for the line's flow and builds its
+// elements; it reports whether the elements changed. A line whose need is
+// the same as at its last choice keeps that choice (the choice depends on
+// nothing else), so the passes do not repeat it.
+func (z *sizer) choose(l *lineRun) (bool, error) {
+	need := lineNeed{l.flow, l.hold}
+	if l.chosen && l.chosenFor == need {
+		return false, nil
+	}
+	first, inner, size := !l.chosen, l.inner, l.size
+	if err := z.chooseFor(l); err != nil {
+		return false, err
+	}
+	l.chosen, l.chosenFor = true, need
+	if !first && l.inner == inner && l.size == size {
+		return false, nil
+	}
+	l.els = l.elements()
+	return true, nil
+}
+
+// chooseFor picks the tube or hose for the line's flow.
+func (z *sizer) chooseFor(l *lineRun) error {
 	l.inner, l.size, l.findings = 0, "", nil
 	if l.flow <= 0 {
 		return nil
@@ -103,12 +135,12 @@ func (l *lineRun) elements() []line.Element {
 }
 
 // drop is the pressure drop of a path of elements at flow q with the oil of
-// the pass; zero for no flow or no elements.
-func (z *sizer) drop(name string, els []line.Element, q units.Flow) (line.PathDrop, error) {
+// the pass (line.Path.TotalDrop); zero for no flow or no elements.
+func (z *sizer) drop(els []line.Element, q units.Flow) (units.Pressure, error) {
 	if q <= 0 || len(els) == 0 {
-		return line.PathDrop{Name: name}, nil
+		return 0, nil
 	}
-	return line.Path{Name: name, Elements: els}.Drop(q, z.oil)
+	return line.Path{Elements: els}.TotalDrop(q, z.oil)
 }
 
 // valveElement is the directional valve of size i as a rated element, one

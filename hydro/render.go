@@ -7,6 +7,7 @@ import (
 	"unicode/utf8"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/hydro/thermal"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -356,22 +357,35 @@ func (r Report) heatSection(sys units.System) section {
 	s := section{title: "Heat balance"}
 	var rows [][]string
 	for _, i := range h.Items {
-		rows = append(rows, []string{i.Source, q(sys, i.Heat.Value)})
+		src := i.Source
+		if src == "motor" {
+			src = "actuators" // hydro/thermal's motor: seal friction and hydraulic motors' losses
+		}
+		rows = append(rows, []string{src, q(sys, i.Heat.Value)})
 	}
 	rows = append(rows, []string{"total", q(sys, h.Load.Value)})
 	s.table([]string{"heat from", "mean over the cycle"}, rows, "itemised by hydro/thermal, time-weighted over the cycle and the idle time")
-	pairs := [][3]string{vq(sys, "mean shaft input", h.Input),
+	pairs := [][3]string{vq(sys, "mean input, shaft and loads lowered", h.Input),
 		{"reservoir", choice(sys, h.Reservoir), rule(h.Reservoir.Rule)},
 		vq(sys, "wetted area", h.Area), vq(sys, "shed by the tank at the highest oil temperature", h.Dissipation),
 		vq(sys, "steady oil temperature without a cooler", h.Steady), vq(sys, "running oil temperature", h.Running)}
 	if h.Cooler.Value > 0 {
 		pairs = append(pairs, vq(sys, "cooler duty", h.Cooler),
-			[3]string{"cooler rating", strconv.FormatFloat(h.CoolerRate.Value, 'g', 4, 64) + " W/K of entering temperature difference", rule(h.CoolerRate.Rule)})
+			[3]string{"cooler rating", coolerRate(sys, h.CoolerRate.Value) + " of entering temperature difference", rule(h.CoolerRate.Rule)})
 	} else {
 		pairs = append(pairs, [3]string{"cooler", "none needed", ""})
 	}
 	s.kv(pairs...)
 	return s
+}
+
+// coolerRate writes a cooler's rating, w W/K, in W/K, or in BTU/(h·°F)
+// for US customary output.
+func coolerRate(sys units.System, w float64) string {
+	if sys.Name() == units.USCustomary().Name() {
+		return strconv.FormatFloat(thermal.Conductance(w).BTUPerHourFahrenheit(), 'g', 4, 64) + " BTU/(h·°F)"
+	}
+	return strconv.FormatFloat(w, 'g', 4, 64) + " W/K"
 }
 
 func (r Report) fluidSection(sys units.System) section {
@@ -402,7 +416,7 @@ func (r Report) cleanSection(sys units.System) section {
 		for i, b := range c.Required {
 			beta[i] = strconv.FormatFloat(b, 'g', 3, 64)
 		}
-		pairs = append(pairs, [3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), "particle balance of a full-flow filter"},
+		pairs = append(pairs, [3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), rule(c.RequiredRule)},
 			[3]string{"code the filtration holds", c.Held.String() + ", " + verdict, "hydro/contamination steady state"})
 	}
 	s.kv(pairs...)

@@ -18,6 +18,8 @@ type Value[T ~float64] struct {
 	Rule  components.Rule `json:"rule"`
 }
 
+func (Value[T]) ruled() {}
+
 // Report is what [Size] returns: the whole machine sized, every number
 // with its unit and the rule it came from, in the order an engineer works.
 // It marshals to JSON with the field names given on each field (stable
@@ -237,7 +239,7 @@ type AccumulatorResult struct {
 type HeatResult struct {
 	Items       []HeatItem                          `json:"items"` // the mean heat by source
 	Load        Value[units.Power]                  `json:"load"`  // mean heat into the oil
-	Input       Value[units.Power]                  `json:"input"` // mean shaft input
+	Input       Value[units.Power]                  `json:"input"` // mean input: the pump's shaft and the loads lowered
 	Reservoir   components.Choice[units.Volume]     `json:"reservoir"`
 	Area        Value[units.Area]                   `json:"area"`        // wetted area of the tank
 	Dissipation Value[units.Power]                  `json:"dissipation"` // shed by the tank at the highest oil temperature
@@ -250,6 +252,9 @@ type HeatResult struct {
 
 // HeatItem is the mean heat of one source.
 type HeatItem struct {
+	// Source is hydro/thermal's name of the source: "pump", "motor" (the
+	// actuators' own losses: cylinder seal friction, hydraulic motors),
+	// "throttling", "relief", "standby", "lines" or "other".
 	Source string             `json:"source"`
 	Heat   Value[units.Power] `json:"heat"`
 }
@@ -267,13 +272,14 @@ type FluidResult struct {
 
 // CleanlinessResult is the cleanliness plan.
 type CleanlinessResult struct {
-	Target   contamination.Code `json:"target"`
-	Basis    string             `json:"basis"` // the component that sets it
-	Rule     components.Rule    `json:"rule"`
-	Filters  []FilterResult     `json:"filters"`
-	Held     contamination.Code `json:"held"`          // the code the filtration holds (with a known ingress)
-	Meets    bool               `json:"meets"`         //
-	Required [3]float64         `json:"required_beta"` // β needed at ≥4, ≥6, ≥14 µm(c)
+	Target       contamination.Code `json:"target"`
+	Basis        string             `json:"basis"` // the component that sets it
+	Rule         components.Rule    `json:"rule"`
+	Filters      []FilterResult     `json:"filters"`
+	Held         contamination.Code `json:"held"`               // the code the filtration holds (with a known ingress)
+	Meets        bool               `json:"meets"`              //
+	Required     [3]float64         `json:"required_beta"`      // β needed at ≥4, ≥6, ≥14 µm(c)
+	RequiredRule components.Rule    `json:"required_beta_rule"` // the rule of Required
 }
 
 // FilterResult is one filter of the plan.
@@ -298,7 +304,7 @@ type BillItem struct {
 // reads back to the identical value), durations in seconds ("2.5 s"),
 // choices, checks and findings in the components vocabulary's own JSON, and
 // fields at their zero value (a number with no rule, an empty list) left
-// out.
+// out; a number with its rule is written even when it is zero ("0 bar").
 func (r Report) MarshalJSON() ([]byte, error) { return encodeJSON(reflect.ValueOf(r)) }
 
 // MarshalJSON writes the comparison as Report.MarshalJSON writes a report.

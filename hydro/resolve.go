@@ -42,6 +42,9 @@ type sizer struct {
 	reliefP  units.Pressure
 	pumpP    units.Pressure // highest working pump pressure
 	delivery units.Flow     // what the pump delivers
+
+	centerValve int            // the main valve the center path was built for
+	centerEls   []line.Element // the main valve's P→T path, for an unloading center
 }
 
 // newSizer resolves a validated spec at working pressure p.

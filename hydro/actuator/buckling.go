@@ -308,36 +308,48 @@ type RodChoice struct {
 // carries a warning. Errors are those of [Column.Check].
 func (c Column) MinimumRod(rods components.Series[units.Length]) (RodChoice, error) {
 	const fn = "actuator.Column.MinimumRod"
-	if err := c.Cylinder.validate(fn); err != nil {
-		return RodChoice{}, prefixed(err, "Column.")
-	}
-	if err := c.validateSetup(fn, "Column."); err != nil {
-		return RodChoice{}, err
-	}
-	rods = rodsOr(rods)
-	least := c.leastRod()
-	if err := validate.Result(fn, "least rod", least); err != nil {
-		return RodChoice{}, err
-	}
-	ch, err := rods.Select(least)
+	r, none, err := c.minimumRod(fn, rods)
 	if err != nil {
-		return RodChoice{}, validate.Renamed(err, fn, nil)
+		return RodChoice{}, err
 	}
-	r := RodChoice{Rod: ch}
-	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
-		r.Rod.Chosen = 0
+	if none {
 		_, _, _, _, n, nr := c.setup()
 		r.Findings = components.Findings{components.NewFinding(components.Warning, components.Structural,
 			"actuator.buckling-no-rod", nr,
 			"no standard rod below the %v bore reaches a buckling safety factor of %v (at least %v is needed); shorten the free length, stiffen the mounting or choose a larger bore",
-			c.Cylinder.Bore, n, least)}
-		return r, nil
+			c.Cylinder.Bore, n, r.Rod.Required)}
+	}
+	return r, nil
+}
+
+// minimumRod is MinimumRod for fn without the finding; none reports that
+// no standard rod below the bore passes (the choice's Chosen is then 0).
+func (c Column) minimumRod(fn string, rods components.Series[units.Length]) (r RodChoice, none bool, err error) {
+	if err := c.Cylinder.validate(fn); err != nil {
+		return RodChoice{}, false, prefixed(err, "Column.")
+	}
+	if err := c.validateSetup(fn, "Column."); err != nil {
+		return RodChoice{}, false, err
+	}
+	rods = rodsOr(rods)
+	least := c.leastRod()
+	if err := validate.Result(fn, "least rod", least); err != nil {
+		return RodChoice{}, false, err
+	}
+	ch, err := rods.Select(least)
+	if err != nil {
+		return RodChoice{}, false, validate.Renamed(err, fn, nil)
+	}
+	r = RodChoice{Rod: ch}
+	if !ch.OK() || ch.Chosen >= c.Cylinder.Bore {
+		r.Rod.Chosen = 0
+		return r, true, nil
 	}
 	c.Cylinder.Rod = ch.Chosen
 	if r.Check, err = c.checked(fn); err != nil {
-		return RodChoice{}, err
+		return RodChoice{}, false, err
 	}
-	return r, nil
+	return r, false, nil
 }
 
 // leastRod returns the rod diameter whose critical load is exactly the

@@ -193,6 +193,54 @@ func TestRegenerative(t *testing.T) {
 	checktest.RangeError(t, err, "Cylinder.Action")
 }
 
+// TestRegenerativeFor: the pump flow and inlet pressure a regenerative
+// extend needs, the inverse of TestRegenerative's v = Q/A_rod, F = p·A_rod
+// (Esposito, Fluid Power with Applications, 7th ed., chapter 9, from
+// memory), with the annulus oil Δp above the cap pressure on its way
+// across and seal friction taking 1 − η of the pressure's force, as
+// Duty.Size's p = (F + p_back·A_out)/(η·A_in) takes it: checked against
+// the piston's force balance written out with both areas, the net force
+// p·A_cap − (p + Δp)·A_ann = p·A_rod − Δp·A_ann, so η·p·A_rod − Δp·A_ann
+// = F; not against the formula.
+func TestRegenerativeFor(t *testing.T) {
+	c := Cylinder{Bore: 160 * mm, Rod: 125 * mm, Stroke: 1}
+	v, f, dp, eta := 0.15*units.MetrePerSecond, 20*units.Kilonewton, 3*units.Bar, 0.9
+	r, err := c.RegenerativeFor(v, f, dp, eta)
+	if err != nil {
+		t.Fatal(err)
+	}
+	a1, a2 := units.CircleArea(160*mm), units.CircleArea(160*mm)-units.CircleArea(125*mm)
+	net := float64(r.Pressure)*float64(a1) - float64(r.Pressure+dp)*float64(a2) // the piston's net force
+	if !checktest.Close(eta*(net+float64(dp)*float64(a2))-float64(dp)*float64(a2), float64(f), 1e-12) {
+		t.Errorf("p = %v: η·p·A_rod − Δp·A_ann = %v N, want F = %v", r.Pressure,
+			eta*(net+float64(dp)*float64(a2))-float64(dp)*float64(a2), f)
+	}
+	back, err := c.Regenerative(r.Flow, r.Pressure)
+	if err != nil || !checktest.Close(back.Speed, v, 1e-12) || !checktest.Close(r.CapFlow, back.CapFlow, 1e-12) ||
+		!checktest.Close(r.RodFlow, back.RodFlow, 1e-12) {
+		t.Errorf("flows %+v; Regenerative at that flow gives %+v (%v)", r, back, err)
+	}
+	// No load, no crossing drop: no pressure; no speed: no flow.
+	if r, err := c.RegenerativeFor(0, 0, 0, 1); err != nil || r != (RegenerativeNeed{}) {
+		t.Errorf("still and unloaded: %+v, %v", r, err)
+	}
+	for _, bad := range []struct {
+		param string
+		err   error
+	}{
+		{"v", second(c.RegenerativeFor(-1, f, dp, eta))},
+		{"f", second(c.RegenerativeFor(v, units.Force(math.NaN()), dp, eta))},
+		{"dp", second(c.RegenerativeFor(v, f, -1, eta))},
+		{"eta", second(c.RegenerativeFor(v, f, dp, 0))},
+	} {
+		checktest.RangeErrorIn(t, bad.err, "actuator.Cylinder.RegenerativeFor", bad.param)
+	}
+	d := c
+	d.Ends = DoubleRod
+	_, err = d.RegenerativeFor(v, f, dp, eta)
+	checktest.RangeErrorIn(t, err, "actuator.Cylinder.RegenerativeFor", "Cylinder.Ends")
+}
+
 // TestIntensification: the force balance p·A_in = p_out·A_out + F_resist
 // [X]. A 2:1 cylinder at 200 bar against a blocked annulus holds 400 bar; a
 // resisting load lowers it, an overrunning load raises it, and a load more

@@ -1,6 +1,8 @@
 package actuator
 
 import (
+	"math"
+
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -28,16 +30,8 @@ type Regeneration struct {
 // the field.
 func (c Cylinder) Regenerative(q units.Flow, p units.Pressure) (Regeneration, error) {
 	const fn = "actuator.Cylinder.Regenerative"
-	if err := c.validate(fn); err != nil {
+	if err := c.regenerable(fn); err != nil {
 		return Regeneration{}, err
-	}
-	if c.Ends != SingleRod {
-		return Regeneration{}, &units.RangeError{Func: fn, Param: "Cylinder.Ends", Value: "DoubleRod",
-			Valid: "SingleRod (a double-rod cylinder has no net rod area to regenerate on)"}
-	}
-	if c.Action != DoubleActing {
-		return Regeneration{}, &units.RangeError{Func: fn, Param: "Cylinder.Action", Value: "SingleActing",
-			Valid: "DoubleActing (a single-acting cylinder has no annulus oil to return)"}
 	}
 	if err := validate.Positive(fn, "q", q); err != nil {
 		return Regeneration{}, err
@@ -54,6 +48,74 @@ func (c Cylinder) Regenerative(q units.Flow, p units.Pressure) (Regeneration, er
 	if err := finite(fn, output{"Force", float64(r.Force)}, output{"CapFlow", float64(r.CapFlow)},
 		output{"RodFlow", float64(r.RodFlow)}); err != nil {
 		return Regeneration{}, err
+	}
+	return r, nil
+}
+
+// regenerable checks that c can extend regeneratively: a valid
+// single-rod, double-acting cylinder.
+func (c Cylinder) regenerable(fn string) error {
+	if err := c.validate(fn); err != nil {
+		return err
+	}
+	if c.Ends != SingleRod {
+		return &units.RangeError{Func: fn, Param: "Cylinder.Ends", Value: "DoubleRod",
+			Valid: "SingleRod (a double-rod cylinder has no net rod area to regenerate on)"}
+	}
+	if c.Action != DoubleActing {
+		return &units.RangeError{Func: fn, Param: "Cylinder.Action", Value: "SingleActing",
+			Valid: "DoubleActing (a single-acting cylinder has no annulus oil to return)"}
+	}
+	return nil
+}
+
+// RegenerativeNeed is what a regenerative extend stroke needs to move a
+// load at a speed: see [Cylinder.RegenerativeFor].
+type RegenerativeNeed struct {
+	Flow     units.Flow     // pump flow, v·A_rod
+	CapFlow  units.Flow     // flow into the cap side, v·A₁
+	RodFlow  units.Flow     // flow out of the annulus into the cap side, v·A₂
+	Pressure units.Pressure // cap (inlet) pressure for the load
+}
+
+// RegenerativeFor returns the pump flow and inlet pressure a regenerative
+// extend stroke needs to move load f (the force opposing the stroke, ≥ 0)
+// at speed v (≥ 0), with seal efficiency eta (in (0, 1]) and the annulus
+// oil reaching the cap side dp (≥ 0) above the cap pressure, the drop of
+// its way across (line, valve):
+//
+//	Q = v·A_rod,  Q_cap = v·A₁,  Q_rod = v·A₂,  p = (F + Δp·A₂)/(η·A_rod)
+//
+// from the piston's balance p·A₁ − (p + Δp)·A₂ = p·A_rod − Δp·A₂, seal
+// friction taking 1 − η of the pressure's force as [Duty.Size] takes it
+// (p = (F + p_back·A_out)/(η·A_in)). With Δp = 0 and η = 1 it is the
+// inverse of [Cylinder.Regenerative]. A load that drives the stroke
+// (F < 0) is the load-holding valve's to meter, not this; the cylinder
+// must be single-rod and double-acting. Errors match units.ErrRange and
+// name the argument or field.
+func (c Cylinder) RegenerativeFor(v units.Velocity, f units.Force, dp units.Pressure, eta float64) (RegenerativeNeed, error) {
+	const fn = "actuator.Cylinder.RegenerativeFor"
+	if err := c.regenerable(fn); err != nil {
+		return RegenerativeNeed{}, err
+	}
+	if err := validate.NonNegative(fn, "v", v); err != nil {
+		return RegenerativeNeed{}, err
+	}
+	if err := validate.NonNegative(fn, "f", f); err != nil {
+		return RegenerativeNeed{}, err
+	}
+	if err := validate.NonNegative(fn, "dp", dp); err != nil {
+		return RegenerativeNeed{}, err
+	}
+	if err := validate.InRange(fn, "eta", eta, math.SmallestNonzeroFloat64, 1); err != nil {
+		return RegenerativeNeed{}, err
+	}
+	rod := c.RodArea()
+	r := RegenerativeNeed{Flow: v.TimesArea(rod), CapFlow: v.TimesArea(c.CapArea()), RodFlow: v.TimesArea(c.AnnulusArea()),
+		Pressure: units.Pressure((float64(f) + float64(dp)*float64(c.AnnulusArea())) / (eta * float64(rod)))}
+	if err := finite(fn, output{"Flow", float64(r.Flow)}, output{"CapFlow", float64(r.CapFlow)},
+		output{"RodFlow", float64(r.RodFlow)}, output{"Pressure", float64(r.Pressure)}); err != nil {
+		return RegenerativeNeed{}, err
 	}
 	return r, nil
 }

@@ -302,45 +302,72 @@ type CylinderSize struct {
 // SealEfficiency in (0, 1] or 0; AreaRatio above 1 (up to 100) or 0; the
 // total force > 0; the back pressure below what leaves a net force.
 func (d Duty) Size() (CylinderSize, error) {
-	const fn = "actuator.Duty.Size"
-	if err := d.validate(fn); err != nil {
+	r, last, err := d.size("actuator.Duty.Size")
+	if err != nil {
 		return CylinderSize{}, err
+	}
+	var why components.Findings
+	if r.Bore.Chosen == 0 {
+		why = last.findings(rodsOr(d.Rods))
+	}
+	r.Findings = d.findings(r, boresOr(d.Bores), why)
+	return r, nil
+}
+
+// Fit sizes the cylinder as [Duty.Size] does and returns the same result
+// without its findings (Findings is nil), with the same errors, naming
+// Fit. It is for a loop that sizes a duty again and again, as a coupled
+// sizing does, and takes the findings from one call of Size at the end.
+// It allocates nothing but the buckling check, when Duty.Buckling is set.
+func (d Duty) Fit() (CylinderSize, error) {
+	r, _, err := d.size("actuator.Duty.Fit")
+	if err != nil {
+		return CylinderSize{}, err
+	}
+	return r, nil
+}
+
+// size sizes the cylinder for fn without the findings; last says why the
+// last bore tried had no rod.
+func (d Duty) size(fn string) (CylinderSize, noRod, error) {
+	if err := d.validate(fn); err != nil {
+		return CylinderSize{}, noRod{}, err
 	}
 	forces, err := d.loads(fn)
 	if err != nil {
-		return CylinderSize{}, err
+		return CylinderSize{}, noRod{}, err
 	}
 	r := CylinderSize{Forces: forces}
 	r.SealEfficiency, r.SealRule = d.efficiency()
 	r.AreaRatio, r.AreaRatioRule = d.ratio()
 	if d.Buckling != nil {
 		if err := d.Buckling.validateSetup(fn, "Duty.Buckling."); err != nil {
-			return CylinderSize{}, err
+			return CylinderSize{}, noRod{}, err
 		}
 	}
 	total := r.Forces.Total()
 	minBore, err := d.minimumBore(fn, total)
 	if err != nil {
-		return CylinderSize{}, err
+		return CylinderSize{}, noRod{}, err
 	}
 	bores, rods := boresOr(d.Bores), rodsOr(d.Rods)
 	r.Bore = components.Choice[units.Length]{Required: minBore, Series: bores.Name(), Rule: bores.Rule()}
 	found, tried := false, false
-	var why components.Findings // why the last bore tried had no rod
+	var last noRod // why the last bore tried had no rod
 	for b := range bores.All() {
 		if b < minBore {
 			continue
 		}
 		f, ok := d.tryBore(b, rods, r.AreaRatio)
 		if !ok {
-			r.Rod, why = f.rod, f.why
+			r.Rod, last = f.rod, f.none
 			continue
 		}
 		p, err := d.needs(f.cyl, total, r.SealEfficiency)
 		if err != nil {
-			return CylinderSize{}, validate.Renamed(err, fn, nil)
+			return CylinderSize{}, noRod{}, validate.Renamed(err, fn, nil)
 		}
-		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling, why = b, f.rod, f.cyl, f.bk, nil
+		r.Bore.Chosen, r.Rod, r.Cylinder, r.Buckling, last = b, f.rod, f.cyl, f.bk, noRod{}
 		r.Pressure = components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
 		tried = true
 		if found = r.Pressure.OK(); found {
@@ -358,11 +385,10 @@ func (d Duty) Size() (CylinderSize, error) {
 			r.ReturnFlow = d.Speed.TimesArea(r.Cylinder.OutletArea(d.Direction))
 		}
 		if err := finite(fn, output{"Flow", float64(r.Flow)}, output{"ReturnFlow", float64(r.ReturnFlow)}); err != nil {
-			return CylinderSize{}, err
+			return CylinderSize{}, noRod{}, err
 		}
 	}
-	r.Findings = d.findings(r, bores, why)
-	return r, nil
+	return r, last, nil
 }
 
 // needs returns the inlet pressure cylinder c needs for total force f with
@@ -388,38 +414,61 @@ func (d Duty) largestNeeds(bore units.Length, phi float64, f units.Force, eta fl
 	return components.Within(p, d.Pressure, components.CallerRule("Duty.Pressure"))
 }
 
-// fit is a bore with the rod chosen for it: the cylinder, the rod choice,
-// the buckling check when one was asked for, and, when no rod fits the
-// bore, the findings that say why.
-type fit struct {
-	cyl Cylinder
-	rod components.Choice[units.Length]
-	bk  *BucklingCheck
-	why components.Findings
+// boreFit is a bore with the rod chosen for it: the cylinder, the rod
+// choice, the buckling check when one was asked for, and, when no rod fits
+// the bore, why.
+type boreFit struct {
+	cyl  Cylinder
+	rod  components.Choice[units.Length]
+	bk   *BucklingCheck
+	none noRod
+}
+
+// noRod is why a bore had no rod, for its findings: the column, when every
+// standard rod below the bore buckles in it. The zero noRod has no
+// findings.
+type noRod struct {
+	col     Column
+	buckles bool
+}
+
+// findings returns the buckling warning of a bore whose rods all buckle
+// (Column.MinimumRod's), or nil.
+func (n noRod) findings(rods components.Series[units.Length]) components.Findings {
+	if !n.buckles {
+		return nil
+	}
+	rc, err := n.col.MinimumRod(rods)
+	if err != nil {
+		return nil
+	}
+	return rc.Findings
 }
 
 // tryBore picks the rod for bore b: the smallest standard rod giving at
 // least area ratio phi and, when d.Buckling is set, passing the buckling
 // check. ok is false when no standard rod below the bore does; the fit's
 // rod then has Chosen 0.
-func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (fit, bool) {
+func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (boreFit, bool) {
 	c := Cylinder{Bore: b, Stroke: d.Stroke, Ends: d.Ends, Action: d.Action}
 	least := b * units.Length(math.Sqrt(1-1/phi))
 	rod, err := rods.Select(least)
 	if err != nil || !rod.OK() || rod.Chosen >= b {
 		rod.Chosen = 0
-		return fit{rod: rod}, false
+		return boreFit{rod: rod}, false
 	}
 	c.Rod = rod.Chosen
 	if d.Buckling == nil {
-		return fit{cyl: c, rod: rod}, true
+		return boreFit{cyl: c, rod: rod}, true
 	}
 	col := *d.Buckling
 	col.Cylinder = c
-	bk, err := col.MinimumRod(rods)
-	if err != nil || !bk.Rod.OK() || bk.Rod.Chosen >= b {
-		bk.Rod.Chosen = 0
-		return fit{rod: bk.Rod, why: bk.Findings}, false
+	bk, none, err := col.minimumRod("actuator.Column.MinimumRod", rods)
+	if err != nil {
+		return boreFit{}, false
+	}
+	if none {
+		return boreFit{rod: bk.Rod, none: noRod{col: col, buckles: true}}, false
 	}
 	if bk.Rod.Chosen > rod.Chosen {
 		rod = bk.Rod
@@ -429,9 +478,9 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 	chk, err := col.Check()
 	if err != nil {
 		rod.Chosen = 0
-		return fit{rod: rod}, false
+		return boreFit{rod: rod}, false
 	}
-	return fit{cyl: c, rod: rod, bk: &chk}, true
+	return boreFit{cyl: c, rod: rod, bk: &chk}, true
 }
 
 // findings gathers the cautions and design notes of a sizing; why says why

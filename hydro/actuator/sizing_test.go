@@ -5,6 +5,7 @@ import (
 	"testing"
 	"time"
 
+	"github.com/google/go-cmp/cmp"
 	"github.com/hydrosize/hydrosize/components"
 	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
@@ -373,4 +374,88 @@ func TestSizeLandsOnISO3320(t *testing.T) {
 // p_b·A_out, written out here from the areas (the force balance [X]).
 func delivered(c Cylinder, dir Direction, p, back units.Pressure, eta float64) units.Force {
 	return p.TimesArea(c.Area(dir))*units.Force(eta) - back.TimesArea(c.OutletArea(dir))
+}
+
+// TestFitIsSizeWithoutFindings: Fit gives Size's result, field for field,
+// with no findings, for duties that land on a preferred and a second-choice
+// bore, need a thicker rod for buckling, find no rod that does not buckle,
+// are beyond every standard size and pull against a back pressure; and its
+// errors are Size's, naming Fit.
+func TestFitIsSizeWithoutFindings(t *testing.T) {
+	col := balerColumn()
+	long := balerColumn()
+	long.Retracted = 20 * units.Metre
+	press := pressDuty()
+	second := pressDuty()
+	second.Force = 100 * units.Bar.TimesArea(units.CircleArea(140*mm)) * DefaultSealEfficiency * 0.999
+	second.Pressure, second.Mass = 100*units.Bar, 0
+	buckles := Duty{Force: 150 * units.Kilonewton, Pressure: 230 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	noRod := buckles
+	noRod.Buckling = &long
+	beyond := pressDuty()
+	beyond.Force = 80000 * units.Kilonewton
+	pull := pressDuty()
+	pull.Direction, pull.BackPressure, pull.Mass, pull.InclineDegrees = Retract, 12*units.Bar, 2000, 60
+	for name, d := range map[string]Duty{"preferred": press, "second choice": second, "buckling": buckles,
+		"no rod": noRod, "beyond": beyond, "pull": pull} {
+		want, err := d.Size()
+		if err != nil {
+			t.Fatalf("%s: %v", name, err)
+		}
+		if name != "preferred" && name != "buckling" && len(want.Findings) == 0 {
+			t.Errorf("%s: Size has no findings; the case tests nothing", name)
+		}
+		got, err := d.Fit()
+		if err != nil || got.Findings != nil {
+			t.Errorf("%s: Fit error %v, findings %v; want none", name, err, got.Findings)
+		}
+		want.Findings = nil
+		if diff := cmp.Diff(want, got); diff != "" {
+			t.Errorf("%s: Fit differs from Size (-Size +Fit):\n%s", name, diff)
+		}
+	}
+	bad := pressDuty()
+	bad.Stroke = 0
+	r, err := bad.Fit()
+	checktest.RangeErrorIn(t, err, "actuator.Duty.Fit", "Duty.Stroke")
+	if !cmp.Equal(r, CylinderSize{}) {
+		t.Errorf("Fit beside an error = %+v; want the zero CylinderSize", r)
+	}
+}
+
+func TestFitAllocations(t *testing.T) {
+	d := pressDuty()
+	if n := testing.AllocsPerRun(100, func() { _, _ = d.Fit() }); n != 0 {
+		t.Errorf("Fit allocates %v times; want 0", n)
+	}
+	col := balerColumn()
+	d = Duty{Force: 150 * units.Kilonewton, Pressure: 230 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	if n := testing.AllocsPerRun(100, func() { _, _ = d.Fit() }); n != 1 {
+		t.Errorf("Fit with buckling allocates %v times; want 1, the check it points to", n)
+	}
+}
+
+// BenchmarkDutyFit sizes the baler's press stroke with its buckling check,
+// without the findings.
+func BenchmarkDutyFit(b *testing.B) {
+	col := balerColumn()
+	d := Duty{Force: 150 * units.Kilonewton, Pressure: 230 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := d.Fit(); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkDutySizeBuckling is the same with the findings.
+func BenchmarkDutySizeBuckling(b *testing.B) {
+	col := balerColumn()
+	d := Duty{Force: 150 * units.Kilonewton, Pressure: 230 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := d.Size(); err != nil {
+			b.Fatal(err)
+		}
+	}
 }

@@ -49,6 +49,39 @@ func SteadyState(perMinute float64, q units.Flow, beta float64) (float64, error)
 	return c, nil
 }
 
+// IngressFrom returns the ingress, particles ≥x per minute, that a steady
+// concentration of perML particles ≥x per mL implies with flow q through a
+// full-flow filter of beta ratio beta (at size x): R = Q·C·(1 − 1/β), Q in
+// mL/min, the steady state of the population balance (package
+// documentation) solved for the ingress, SteadyState's inverse. Use it to
+// work the ingress back from a sample of a machine like the one being
+// sized, with the filter that held it there. perML must be finite and
+// ≥ 0, q finite and > 0, beta finite and > 1 (a filter that catches
+// nothing holds no steady state to work back from); errors match
+// units.ErrRange.
+func IngressFrom(perML float64, q units.Flow, beta float64) (float64, error) {
+	const fn = "contamination.IngressFrom"
+	if err := validate.NonNegative(fn, "perML", perML); err != nil {
+		return 0, err
+	}
+	if err := validate.Positive(fn, "q", q); err != nil {
+		return 0, err
+	}
+	if err := validate.Above(fn, "beta", beta, 1); err != nil {
+		return 0, err
+	}
+	r := mulDiv(perML, float64(q), 1-1/beta, millilitrePerMinute, 1, 1)
+	if err := validate.Result(fn, "ingress", r); err != nil {
+		return 0, err
+	}
+	if perML > 0 {
+		if err := validate.PositiveResult(fn, "ingress", r); err != nil {
+			return 0, err
+		}
+	}
+	return r, nil
+}
+
 // RequiredBeta returns the least beta ratio (at size x) that holds a
 // concentration of perML particles ≥x per mL for an ingress of perMinute
 // particles ≥x per minute and flow q through a full-flow filter:

@@ -237,3 +237,33 @@ func TestBetaForTarget(t *testing.T) {
 		t.Errorf("unreachable target: err = %v", err)
 	}
 }
+
+// TestIngressFrom: the ingress worked back from a steady sample, R =
+// Q·C·(1 − 1/β), the balance dN/dt = R − Q·C·(1 − 1/β) at rest [X]. By
+// hand: 50.2513 per mL held at 90 000 mL/min through β = 200 takes
+// 90 000 × 50.2513 × 0.995 = 4.5 × 10⁶ per minute, TestBalanceDimensions'
+// ingress; and SteadyState of the ingress found gives the sample back.
+func TestIngressFrom(t *testing.T) {
+	q := 90 * units.LitrePerMinute
+	r, err := IngressFrom(50.25125628140704, q, 200)
+	if err != nil || math.Abs(r-4.5e6) > 1e-6 {
+		t.Errorf("IngressFrom = %.10g, %v; hand value 4.5e6", r, err)
+	}
+	for _, c := range []struct{ perML, beta float64 }{{3000, 2}, {0.02, 1000}, {1e6, 1.0001}, {0, 75}} {
+		r, err := IngressFrom(c.perML, q, c.beta)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if back, err := SteadyState(r, q, c.beta); err != nil || math.Abs(back-c.perML) > 1e-12*c.perML {
+			t.Errorf("SteadyState(IngressFrom(%v)) = %v, %v", c.perML, back, err)
+		}
+	}
+	for param, f := range map[string]func() (float64, error){
+		"perML": func() (float64, error) { return IngressFrom(-1, q, 200) },
+		"q":     func() (float64, error) { return IngressFrom(10, 0, 200) },
+		"beta":  func() (float64, error) { return IngressFrom(10, q, 1) },
+	} {
+		_, err := f()
+		checktest.RangeErrorIn(t, err, "contamination.IngressFrom", param)
+	}
+}

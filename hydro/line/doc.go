@@ -19,7 +19,9 @@
 // A Path is a list of elements — Pipe, Fitting, Rated — that one flow
 // passes through. Path.Drop gives each element's drop, Reynolds number and
 // regime, the gauge pressure at each inlet, the total, and checks of each
-// rated component's pressure rating and bypass setting. ColdStart runs the
+// rated component's pressure rating and bypass setting; Path.TotalDrop gives
+// the total alone, without allocating, for a loop that needs no more.
+// ColdStart runs the
 // same path at the minimum start temperature beside the running one. Oil
 // properties come from package fluid at the oil temperature (OilAt).
 //

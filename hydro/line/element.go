@@ -170,6 +170,14 @@ func (l Law) String() string {
 	return "Law(invalid)"
 }
 
+// rule is the rule of a Rated element's drop scaled by the law.
+func (l Law) rule() components.Rule {
+	if l == Viscous {
+		return components.CallerRule("Rated.Drop at Rated.Flow, scaled by the viscous law")
+	}
+	return components.CallerRule("Rated.Drop at Rated.Flow, scaled by the orifice law")
+}
+
 // Rated is a component known by one point of its data sheet's Δp–Q curve
 // (a directional valve, a filter, a cooler, a check valve): drop Drop at
 // flow Flow, with the test fluid's viscosity and density where the data
@@ -213,8 +221,7 @@ func (r Rated) loss(q units.Flow, o Oil) (ElementDrop, error) {
 			scale *= float64(o.Density / r.Density)
 		}
 	}
-	d := ElementDrop{Name: r.Name, Drop: r.Drop * units.Pressure(scale),
-		Rule: components.CallerRule("Rated.Drop at Rated.Flow, scaled by the " + r.Law.String() + " law")}
+	d := ElementDrop{Name: r.Name, Drop: r.Drop * units.Pressure(scale), Rule: r.Law.rule()}
 	if err := validate.Result(fn, "drop", d.Drop); err != nil {
 		return ElementDrop{}, err
 	}

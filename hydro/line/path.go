@@ -59,41 +59,21 @@ func (d PathDrop) Power() units.Power { return d.Total.TimesFlow(d.Flow) }
 // Elements[i] and matches units.ErrRange.
 func (p Path) Drop(q units.Flow, o Oil) (PathDrop, error) {
 	const fn = "line.Path.Drop"
-	if err := validate.Positive(fn, "q", q); err != nil {
+	if err := p.check(fn, q, o); err != nil {
 		return PathDrop{}, err
-	}
-	if err := o.check(fn); err != nil {
-		return PathDrop{}, err
-	}
-	if err := validate.NonNegative(fn, "Outlet", p.Outlet); err != nil {
-		return PathDrop{}, err
-	}
-	if len(p.Elements) == 0 {
-		return PathDrop{}, validate.Fail(fn, "Elements", 0.0, "at least one element")
 	}
 	out := PathDrop{Name: p.Name, Flow: q, Oil: o, Elements: make([]ElementDrop, len(p.Elements))}
 	own := make([]units.Pressure, len(p.Elements))
-	for i, e := range p.Elements {
-		if e == nil {
-			return PathDrop{}, validate.Fail(fn, "Elements["+strconv.Itoa(i)+"]", 0.0, "a Pipe, Fitting or Rated element, not nil")
-		}
-		d, err := e.loss(q, o)
-		if err != nil {
-			return PathDrop{}, nameElement(err, i)
-		}
+	total, err := p.sum(fn, q, o, func(i int, d ElementDrop, ownDrop units.Pressure) {
 		if d.Name == "" {
 			d.Name = "element " + strconv.Itoa(i+1)
 		}
-		own[i] = d.Drop
-		if r, ok := e.(Rated); ok {
-			d.Drop, d.Bypassed = capped(d.Drop, r.Bypass)
-		}
-		out.Elements[i] = d
-		out.Total += d.Drop
-	}
-	if err := validate.Result(fn, "Total", out.Total); err != nil {
+		out.Elements[i], own[i] = d, ownDrop
+	})
+	if err != nil {
 		return PathDrop{}, err
 	}
+	out.Total = total
 	at := p.Outlet
 	for i := len(out.Elements) - 1; i >= 0; i-- {
 		at += out.Elements[i].Drop
@@ -105,10 +85,68 @@ func (p Path) Drop(q units.Flow, o Oil) (PathDrop, error) {
 	return out, nil
 }
 
-// nameElement names Path.Drop in a range error and prefixes its parameter
-// with Elements[i].
-func nameElement(err error, i int) error {
-	return validate.Renamed(err, "line.Path.Drop", validate.Fields("Elements["+strconv.Itoa(i)+"].", nil))
+// TotalDrop returns the path's total drop at flow q with oil state o: the
+// Total that [Path.Drop] returns, from the same element drops in the same
+// order (a Rated element taken at most at its Bypass setting), with the
+// same errors, but without the element breakdown, checks or findings. It
+// allocates nothing, for a sizing loop that needs only the total.
+func (p Path) TotalDrop(q units.Flow, o Oil) (units.Pressure, error) {
+	const fn = "line.Path.TotalDrop"
+	if err := p.check(fn, q, o); err != nil {
+		return 0, err
+	}
+	return p.sum(fn, q, o, nil)
+}
+
+// check validates the flow, the oil and the path for fn.
+func (p Path) check(fn string, q units.Flow, o Oil) error {
+	if err := validate.Positive(fn, "q", q); err != nil {
+		return err
+	}
+	if err := o.check(fn); err != nil {
+		return err
+	}
+	if err := validate.NonNegative(fn, "Outlet", p.Outlet); err != nil {
+		return err
+	}
+	if len(p.Elements) == 0 {
+		return validate.Fail(fn, "Elements", 0.0, "at least one element")
+	}
+	return nil
+}
+
+// sum adds up the elements' drops at flow q, each Rated element's capped at
+// its bypass setting, and hands each element's drop (with its own drop
+// before the cap) to each when each is not nil.
+func (p Path) sum(fn string, q units.Flow, o Oil, each func(i int, d ElementDrop, own units.Pressure)) (units.Pressure, error) {
+	var total units.Pressure
+	for i, e := range p.Elements {
+		if e == nil {
+			return 0, validate.Fail(fn, "Elements["+strconv.Itoa(i)+"]", 0.0, "a Pipe, Fitting or Rated element, not nil")
+		}
+		d, err := e.loss(q, o)
+		if err != nil {
+			return 0, nameElement(fn, err, i)
+		}
+		own := d.Drop
+		if r, ok := e.(Rated); ok {
+			d.Drop, d.Bypassed = capped(d.Drop, r.Bypass)
+		}
+		if each != nil {
+			each(i, d, own)
+		}
+		total += d.Drop
+	}
+	if err := validate.Result(fn, "Total", total); err != nil {
+		return 0, err
+	}
+	return total, nil
+}
+
+// nameElement names fn in a range error and prefixes its parameter with
+// Elements[i].
+func nameElement(fn string, err error, i int) error {
+	return validate.Renamed(err, fn, validate.Fields("Elements["+strconv.Itoa(i)+"].", nil))
 }
 
 // assess adds the checks and findings of one element.

@@ -209,22 +209,69 @@ func TestPathBadInput(t *testing.T) {
 			t.Errorf("%s: non-zero result beside the error", c.name)
 		}
 		wantRangeErrorIn(t, c.name, err, "line.Path.Drop", c.param)
+		total, err := c.p.TotalDrop(c.q, c.o)
+		if total != 0 {
+			t.Errorf("%s: TotalDrop %v beside the error", c.name, total)
+		}
+		wantRangeErrorIn(t, c.name+" total", err, "line.Path.TotalDrop", c.param)
 	}
 }
 
-// BenchmarkPathDrop takes the budget of a four-element return path.
-func BenchmarkPathDrop(b *testing.B) {
+// returnPath is a four-element return path: tube, elbows, a filter with a
+// bypass and a rating, and the tank inlet.
+func returnPath() Path {
 	mm := units.Millimetre
-	p := Path{Name: "return", Elements: []Element{
+	return Path{Name: "return", Elements: []Element{
 		Pipe{Name: "tube", Length: 6, Bore: 19 * mm, Roughness: DrawnTubing},
 		Fitting{Name: "elbows", Kind: Elbow90, Bore: 19 * mm, Count: 3},
 		Rated{Name: "filter", Drop: 0.5 * units.Bar, Flow: 60 * units.LitrePerMinute, Law: Viscous,
 			Viscosity: 32 * units.SquareMillimetrePerSecond, Bypass: 2.5 * units.Bar, Rating: 10 * units.Bar},
 		Fitting{Name: "exit", Kind: Exit, Bore: 19 * mm},
 	}}
+}
+
+// TestTotalDropIsDropTotal: TotalDrop gives Drop's Total bit for bit, in
+// laminar, transitional and turbulent flow, with the filter below and above
+// its bypass setting and with a square-law valve.
+func TestTotalDropIsDropTotal(t *testing.T) {
+	p := returnPath()
+	p.Elements = append(p.Elements, Rated{Name: "valve", Drop: 4 * units.Bar, Flow: 100 * units.LitrePerMinute})
+	for _, q := range []units.Flow{0.5 * units.LitrePerMinute, 20 * units.LitrePerMinute, 60 * units.LitrePerMinute, 400 * units.LitrePerMinute} {
+		d, err := p.Drop(q, vg46At50)
+		if err != nil {
+			t.Fatal(err)
+		}
+		total, err := p.TotalDrop(q, vg46At50)
+		if err != nil || total != d.Total {
+			t.Errorf("at %v: TotalDrop = %v, %v; Drop's Total %v", q, total, err, d.Total)
+		}
+	}
+}
+
+func TestTotalDropAllocations(t *testing.T) {
+	p := returnPath()
+	if n := testing.AllocsPerRun(100, func() { _, _ = p.TotalDrop(60*units.LitrePerMinute, vg46At50) }); n != 0 {
+		t.Errorf("TotalDrop allocates %v times; want 0", n)
+	}
+}
+
+// BenchmarkPathDrop takes the budget of a four-element return path.
+func BenchmarkPathDrop(b *testing.B) {
+	p := returnPath()
 	b.ReportAllocs()
 	for b.Loop() {
 		if _, err := p.Drop(60*units.LitrePerMinute, vg46At50); err != nil {
+			b.Fatal(err)
+		}
+	}
+}
+
+// BenchmarkPathTotalDrop takes only the total of the same path.
+func BenchmarkPathTotalDrop(b *testing.B) {
+	p := returnPath()
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := p.TotalDrop(60*units.LitrePerMinute, vg46At50); err != nil {
 			b.Fatal(err)
 		}
 	}

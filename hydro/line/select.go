@@ -29,8 +29,27 @@ type TubeChoice struct {
 	Findings components.Findings
 }
 
-// tubes is where the tube series comes from.
-func tubes(class components.TubeClass) []components.Tube { return components.MetricTubes(class) }
+// tubeSeries are the tubes of each class, ascending, copied once at start-up
+// from components.MetricTubes (which gives a fresh copy per call) and never
+// written.
+var tubeSeries = [...][]components.Tube{
+	components.LightTube: components.MetricTubes(components.LightTube),
+	components.HeavyTube: components.MetricTubes(components.HeavyTube),
+}
+
+// tubes returns the tubes of a class, nil for an unknown class, with the
+// series' name and rule.
+func tubes(class components.TubeClass) ([]components.Tube, string, components.Rule) {
+	switch class {
+	case components.LightTube:
+		return tubeSeries[class], "ISO 8434-1 L-series tube",
+			components.StandardRule("ISO 8434-1 L series outside diameters; walls common practice")
+	case components.HeavyTube:
+		return tubeSeries[class], "ISO 8434-1 S-series tube",
+			components.StandardRule("ISO 8434-1 S series outside diameters; walls common practice")
+	}
+	return nil, "", components.Rule{}
+}
 
 // SelectTube returns the first tube of the class, in the order of
 // components.MetricTubes (ascending inside diameter), whose bore is at
@@ -38,7 +57,8 @@ func tubes(class components.TubeClass) []components.Tube { return components.Met
 // rating (Barlow on the outside diameter) reaches Pressure. When no tube of
 // the class meets the need, the choice comes back with no tube (Bore.OK()
 // false) and a finding. Flow and Limit.Max must be finite and > 0; with
-// Pressure set, Strength and Safety as Barlow needs them.
+// Pressure set, Strength and Safety as Barlow needs them. A need that a
+// tube meets allocates nothing.
 func SelectTube(n TubeNeed) (TubeChoice, error) {
 	const fn = "line.SelectTube"
 	d, err := minBore(fn, n.Flow, n.Limit)
@@ -48,13 +68,11 @@ func SelectTube(n TubeNeed) (TubeChoice, error) {
 	if err := validate.NonNegative(fn, "Pressure", n.Pressure); err != nil {
 		return TubeChoice{}, err
 	}
-	list := tubes(n.Class)
+	list, series, rule := tubes(n.Class)
 	if list == nil {
 		return TubeChoice{}, validate.Fail(fn, "Class", float64(n.Class), "LightTube or HeavyTube")
 	}
-	series := "ISO 8434-1 " + n.Class.String() + "-series tube"
-	c := TubeChoice{Bore: components.Choice[units.Length]{Required: d, Series: series,
-		Rule: components.StandardRule("ISO 8434-1 " + n.Class.String() + " series outside diameters; walls common practice")}}
+	c := TubeChoice{Bore: components.Choice[units.Length]{Required: d, Series: series, Rule: rule}}
 	for _, t := range list {
 		if t.ID() < d {
 			continue

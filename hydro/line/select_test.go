@@ -85,3 +85,31 @@ func TestSelectBadInput(t *testing.T) {
 	wantRangeErrorIn(t, "strength", bad(func(n *TubeNeed) { n.Pressure = 1e7; n.Safety = 4 }), "line.SelectTube", "Strength")
 	wantRangeErrorIn(t, "safety", bad(func(n *TubeNeed) { n.Pressure = 1e7; n.Strength = 4e8 }), "line.SelectTube", "Safety")
 }
+
+// pressureTubeNeed is 95 L/min in a pressure line holding 220 bar, in
+// S-series tube of 340 MPa steel at safety factor 4: a need a tube meets,
+// so the choice has no findings.
+func pressureTubeNeed() TubeNeed {
+	return TubeNeed{Flow: 95 * units.LitrePerMinute, Limit: PressureLine.Limit(), Class: components.HeavyTube,
+		Pressure: 220 * units.Bar, Strength: 340 * units.Megapascal, Safety: 4}
+}
+
+func TestSelectTubeAllocations(t *testing.T) {
+	n := pressureTubeNeed()
+	if c, err := SelectTube(n); err != nil || !c.Bore.OK() || len(c.Findings) != 0 {
+		t.Fatalf("SelectTube = %v, %v; want a tube without findings", c, err)
+	}
+	if a := testing.AllocsPerRun(100, func() { _, _ = SelectTube(n) }); a != 0 {
+		t.Errorf("SelectTube allocates %v times for a need a tube meets; want 0", a)
+	}
+}
+
+func BenchmarkSelectTube(b *testing.B) {
+	n := pressureTubeNeed()
+	b.ReportAllocs()
+	for b.Loop() {
+		if _, err := SelectTube(n); err != nil {
+			b.Fatal(err)
+		}
+	}
+}

@@ -88,11 +88,19 @@ func Barlow(od, wall units.Length, strength units.Pressure, safety float64, basi
 	}
 	burst := units.Pressure(2 * float64(strength) * float64(wall/d))
 	r := WallRating{Working: burst / units.Pressure(safety), Burst: burst, Diameter: d, Basis: basis, Safety: safety,
-		Rule: components.PhysicsRule("Barlow, p = 2·S·t/(D·SF) on the " + basis.String())}
+		Rule: barlowRule(basis)}
 	if err := validate.Result(fn, "burst", r.Burst); err != nil {
 		return WallRating{}, err
 	}
 	return r, nil
+}
+
+// barlowRule is the rule of Barlow's formula on the diameter basis names.
+func barlowRule(basis Basis) components.Rule {
+	if basis == InsideDiameter {
+		return components.PhysicsRule("Barlow, p = 2·S·t/(D·SF) on the inside diameter")
+	}
+	return components.PhysicsRule("Barlow, p = 2·S·t/(D·SF) on the outside diameter")
 }
 
 // HoseDesignFactor is the ratio of minimum burst pressure to maximum working

@@ -45,8 +45,9 @@ var heatRule = components.PhysicsRule("energy balance: throttled flow turns Δp�
 // feeds and returns findings, not a verdict: what happens with every valve
 // centred (deadhead over the relief, flow to tank at low pressure, standby
 // on the compensator, a regenerative creep) and while the actuators move
-// (surplus flow over the relief, throttling from the compensator or the
-// load-sensing pressure, starving of the heavier loads, saturation), each
+// (surplus flow over the relief, or bled through an open center metered
+// by its spool; throttling from the compensator or the load-sensing
+// pressure, starving of the heavier loads, saturation), each
 // quoting the flows and pressures involved and the heat it costs. Heat
 // figures are the throttled hydraulic power Δp·Q (plus, where the whole
 // shaft power ends as heat, the pump's own losses); line and valve losses
@@ -298,8 +299,13 @@ func (p Pump) alone(c Circuit, d Demand) (components.Finding, bool, error) {
 
 // surplus is a full-stroke pump feeding one demand: what the demand does
 // not take passes the relief, so the pump runs at the relief pressure and
-// the demand's valve throttles from there.
+// the demand's valve throttles from there; or, through an open center
+// metered by its spool (bleedsOff), it bleeds to tank at the load's
+// pressure.
 func (p Pump) surplus(c Circuit, d Demand) (components.Finding, bool, error) {
+	if bleedsOff(c) {
+		return p.bleed(d)
+	}
 	pt, err := p.At(c.Relief)
 	if err != nil {
 		return components.Finding{}, false, err
@@ -316,6 +322,35 @@ func (p Pump) surplus(c Circuit, d Demand) (components.Finding, bool, error) {
 	return components.NewFinding(components.Caution, components.HotSurface, "pump.surplus", heatRule,
 		"while %v moves at %v it takes %v of the pump's %v: the other %v passes the relief at %v, and with the valve throttling the rest that is %v of heat",
 		d.Name, d.Pressure, d.Flow, pt.Flow, pt.Flow-d.Flow, c.Relief, heat), true, nil
+}
+
+// bleedsOff reports a circuit whose valves meter a fixed pump by bleeding
+// its surplus through an open center: the spool of an open-center valve,
+// the mobile kind, is moved part way, and the center passage it leaves
+// open takes what the actuator does not, at about the load's pressure
+// (common practice). A tandem or closed center shifts fully, and the
+// surplus passes the relief.
+func bleedsOff(c Circuit) bool { return c.Center == valve.OpenCenter }
+
+// bleed is one demand metered by bleed-off: the pump runs at the load's
+// pressure and the surplus passes to tank at it.
+func (p Pump) bleed(d Demand) (components.Finding, bool, error) {
+	pt, err := p.At(d.Pressure)
+	if err != nil {
+		return components.Finding{}, false, err
+	}
+	switch {
+	case d.Flow > pt.Flow:
+		return components.NewFinding(components.Notice, components.NoHazard, "pump.short",
+			components.PhysicsRule("flow continuity"),
+			"%v asks %v, more than the pump's %v: it moves slower", d.Name, d.Flow, pt.Flow), true, nil
+	case d.Flow == pt.Flow:
+		return components.Finding{}, false, nil
+	}
+	heat := d.Pressure.TimesFlow(pt.Flow - d.Flow)
+	return components.NewFinding(components.Caution, components.HotSurface, "pump.bleed-off", heatRule,
+		"while %v moves at %v it takes %v of the pump's %v: the other %v bleeds to tank through the open center at about that pressure, %v of heat",
+		d.Name, d.Pressure, d.Flow, pt.Flow, pt.Flow-d.Flow, heat), true, nil
 }
 
 // inSeries is valves in series moving together: the loads add up. Stalled,
@@ -385,7 +420,7 @@ func (p Pump) sharing(c Circuit) (components.Findings, error) {
 			"together the actuators ask %v, more than the %v the pump gives at %v: they slow down, and without flow-sharing valves %v, the highest load, slows or stops first",
 			want, most, supply, hi.Name))
 	}
-	if fixed && want < most {
+	if fixed && want < most && !bleedsOff(c) {
 		supply = c.Relief // the surplus lifts the pump to the relief
 	}
 	share := 1.0 // the fraction of its ask each actuator gets
@@ -397,7 +432,7 @@ func (p Pump) sharing(c Circuit) (components.Findings, error) {
 		heat += (supply - d.Pressure).TimesFlow(units.Flow(share * float64(d.Flow)))
 	}
 	if fixed && want < most {
-		heat += c.Relief.TimesFlow(most - want)
+		heat += supply.TimesFlow(most - want) // over the relief, or bled through an open center at the highest load
 	}
 	fs = append(fs, components.NewFinding(components.Notice, components.NoHazard, "pump.sharing-heat", heatRule,
 		"sharing one pump, the valves throttle every actuator down from the %v supply to its own load: %v of heat while they move together",

@@ -112,6 +112,31 @@ func TestCompatibilitySurplus(t *testing.T) {
 	checktest.Near(t, "load-sensing metering heat", power(t, finding(t, fs, "pump.metering")), 20e5*40.0/60000, 1e-13)
 }
 
+// The same clamp on an open-center valve, metered by its spool as mobile
+// valves are: the center stays partly open and bleeds the surplus
+// 21.9875 L/min to tank at about the load's 120 bar, so the pump runs at
+// 120 bar, not at the relief: 120 bar × 21.9875 L/min = 4397.5 W of heat
+// (energy balance, Δp·Q). Moving together, the slew and boom of the
+// sharing test bleed the surplus at the boom's 160 bar.
+func TestCompatibilityBleedOff(t *testing.T) {
+	clamp := Demand{Name: "clamp", Pressure: 120 * units.Bar, Flow: 40 * units.LitrePerMinute}
+	fs, err := baler().Compatibility(Circuit{Center: valve.OpenCenter, Relief: 210 * units.Bar, CenterDrop: 5 * units.Bar,
+		Demands: []Demand{clamp}})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(fs.Topic("pump.surplus")) != 0 {
+		t.Errorf("an open center sends no surplus over the relief: %v", fs)
+	}
+	checktest.Near(t, "bleed-off heat", power(t, finding(t, fs, "pump.bleed-off")), 120e5*21.9875/60000, 1e-13)
+	slew := Demand{Name: "slew", Pressure: 80 * units.Bar, Flow: 20 * units.LitrePerMinute}
+	boom := Demand{Name: "boom", Pressure: 160 * units.Bar, Flow: 35 * units.LitrePerMinute}
+	fs, _ = baler().Compatibility(Circuit{Center: valve.OpenCenter, Relief: 210 * units.Bar, CenterDrop: 5 * units.Bar,
+		Demands: []Demand{slew, boom}, Together: true})
+	checktest.Near(t, "open-center sharing heat", power(t, finding(t, fs, "pump.sharing-heat")),
+		(80e5*20+0*35)/60000+160e5*(61.9875-55)/60000, 1e-13)
+}
+
 // A forestry crane on a load-sensing pump (demo data): slew 20 L/min at
 // 80 bar and boom 35 L/min at 160 bar together. The pump holds 160 + 20 =
 // 180 bar; the slew section throttles 100 bar and the boom section the

@@ -200,27 +200,19 @@ func Budget(phases []Phase) (HeatLoad, error) {
 	var heat, input units.Energy
 	var total time.Duration
 	for i, ph := range phases {
-		name := "phases[" + strconv.Itoa(i) + "]"
 		if ph.Duration <= 0 {
-			return HeatLoad{}, validate.Fail(fn, name+".Duration", ph.Duration.Seconds(), "> 0 s")
+			return HeatLoad{}, validate.Fail(fn, phaseField(i, "Duration"), ph.Duration.Seconds(), "> 0 s")
 		}
 		if ph.Duration > math.MaxInt64-total {
-			return HeatLoad{}, validate.Fail(fn, name+".Duration", ph.Duration.Seconds(), "short enough for a cycle of 292 years at most")
+			return HeatLoad{}, validate.Fail(fn, phaseField(i, "Duration"), ph.Duration.Seconds(), "short enough for a cycle of 292 years at most")
 		}
-		if err := validate.NonNegative(fn, name+".Input", ph.Input); err != nil {
-			return HeatLoad{}, err
+		if err := validate.NonNegative(fn, "Input", ph.Input); err != nil {
+			return HeatLoad{}, inPhase(err, fn, i, "")
 		}
 		var p, in units.Power
 		for j, l := range ph.Loads {
-			lname := name + ".Loads[" + strconv.Itoa(j) + "]"
-			if l.Source < FromPump || l.Source > FromOther {
-				return HeatLoad{}, validate.Fail(fn, lname+".Source", float64(l.Source), "one of the Source constants")
-			}
-			if err := validate.NonNegative(fn, lname+".Power", l.Power); err != nil {
-				return HeatLoad{}, err
-			}
-			if err := validate.NonNegative(fn, lname+".Input", l.Input); err != nil {
-				return HeatLoad{}, err
+			if err := l.check(fn); err != nil {
+				return HeatLoad{}, inPhase(err, fn, i, "Loads["+strconv.Itoa(j)+"].")
 			}
 			p += l.Power
 			in += l.Input
@@ -230,7 +222,7 @@ func Budget(phases []Phase) (HeatLoad, error) {
 			in = ph.Input
 		}
 		if in > 0 && p > in {
-			return HeatLoad{}, validate.Fail(fn, name+".Loads", p, "at most the phase's input power "+in.String())
+			return HeatLoad{}, validate.Fail(fn, phaseField(i, "Loads"), p, "at most the phase's input power "+in.String())
 		}
 		if p > out.Peak || i == 0 {
 			out.Peak, out.PeakPhase = p, ph.Name
@@ -241,6 +233,15 @@ func Budget(phases []Phase) (HeatLoad, error) {
 	}
 	secs := total.Seconds()
 	out.Mean, out.Input = units.Power(float64(heat)/secs), units.Power(float64(input)/secs)
+	n := 0
+	for _, e := range bySource {
+		if e > 0 {
+			n++
+		}
+	}
+	if n > 0 {
+		out.Sources = make([]SourceShare, 0, n)
+	}
 	for s := FromPump; s <= FromOther; s++ {
 		if bySource[s] > 0 {
 			out.Sources = append(out.Sources, SourceShare{s, units.Power(float64(bySource[s]) / secs)})
@@ -254,6 +255,30 @@ func Budget(phases []Phase) (HeatLoad, error) {
 	}
 	out.compare()
 	return out, nil
+}
+
+// phaseField names field of phases[i] in an error: "phases[2].Duration".
+// Budget builds the name only for an error, so a valid budget allocates
+// no names.
+func phaseField(i int, field string) string {
+	return "phases[" + strconv.Itoa(i) + "]." + field
+}
+
+// inPhase names fn in a range error and puts phases[i] and prefix before
+// its parameter.
+func inPhase(err error, fn string, i int, prefix string) error {
+	return validate.Renamed(err, fn, validate.Fields(phaseField(i, prefix), nil))
+}
+
+// check validates a load for fn: a known source, power and input ≥ 0.
+func (l Load) check(fn string) error {
+	if l.Source < FromPump || l.Source > FromOther {
+		return validate.Fail(fn, "Source", float64(l.Source), "one of the Source constants")
+	}
+	if err := validate.NonNegative(fn, "Power", l.Power); err != nil {
+		return err
+	}
+	return validate.NonNegative(fn, "Input", l.Input)
 }
 
 // compare fills the share-of-input guess and the notice beside it.

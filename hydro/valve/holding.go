@@ -41,6 +41,11 @@ type CounterbalanceNeed struct {
 	// Ratio is the setting over Load, from 1 to 10. Nil selects
 	// DefaultCounterbalanceRatio (1.3, common practice).
 	Ratio *float64
+	// Setting is the valve's setting when it is already chosen (for the
+	// heaviest load the valve holds), to find the pilot pressure and the
+	// throttling for this Load, a lighter one: finite and above Load, with
+	// Ratio nil. Zero sets it at Load × Ratio.
+	Setting units.Pressure
 	// PilotRatio is the valve's pilot ratio R: pilot area over the
 	// relief poppet's effective area (3:1, 4.5:1, 8:1 …), > 0.
 	PilotRatio float64
@@ -54,6 +59,11 @@ type CounterbalanceNeed struct {
 	// ([Coupling]): 1/φ, φ or 1 from the actuator, or 0 to leave it out
 	// (the common-practice form).
 	Coupling float64
+	// Joined marks a valve whose outlet is joined to its own pilot line,
+	// as on a regenerative extend where the annulus oil it passes joins
+	// the cap side's: the pressure past it is then the pilot pressure plus
+	// Back (the drops of the oil's way across).
+	Joined bool
 	// Flow is the flow through the valve while lowering, for the heat; zero
 	// leaves it out.
 	Flow units.Flow
@@ -72,15 +82,17 @@ type Counterbalance struct {
 	// Pilot is the pilot pressure at which the valve starts to open and the
 	// load to move:
 	//
-	//	p_x = (p_set + k·p_back − p_load) / (R + c)
+	//	p_x = (p_set + k·p_back − p_load) / (R + c − k·j)
 	//
-	// with k = 1 (k = 0 for a Vented valve) and c the Coupling. With c = 0
+	// with k = 1 (k = 0 for a Vented valve), c the Coupling, and j = 1 for
+	// a Joined valve (its outlet at p_x + p_back), 0 otherwise. With c = 0
 	// and no back pressure this is the common-practice
 	// (setting − load)/R.
 	Pilot     units.Pressure
 	PilotRule components.Rule
 	// Throttled is the drop the valve takes while lowering, from the held
-	// pressure p_load + c·p_x down to p_back, and Heat that drop times Flow.
+	// pressure p_load + c·p_x down to the pressure past it (p_back, or
+	// p_x + p_back when Joined), and Heat that drop times Flow.
 	Throttled units.Pressure
 	Heat      units.Power
 	Findings  components.Findings
@@ -88,8 +100,8 @@ type Counterbalance struct {
 
 // CounterbalanceSetting returns a counterbalance valve's setting,
 // p_set = ratio × p_load (1.3 unless the caller gives a ratio: common
-// practice), and the pilot pressure that opens it for its pilot ratio,
-// with back pressure and the actuator's coupling (see
+// practice) or the Setting given, and the pilot pressure that opens it for
+// its pilot ratio, with back pressure and the actuator's coupling (see
 // [Counterbalance.Pilot]; the form is a force balance, and valve makers'
 // own formulas differ: where the maker gives one, use it). A ratio below
 // 1.3 draws a Warning (hazard OverrunningLoad): the valve may not reseat,
@@ -115,19 +127,31 @@ func CounterbalanceSetting(n CounterbalanceNeed) (Counterbalance, error) {
 	if err := validate.NonNegative(fn, "Rating", n.Rating); err != nil {
 		return Counterbalance{}, err
 	}
-	ratio, rule, err := marginOf(fn, "Ratio", n.Ratio, 1, 10, DefaultCounterbalanceRatio,
-		components.PracticeRule("counterbalance set at least 1.3 × the load-induced pressure"))
+	ratio, rule, err := counterbalanceRatio(fn, n)
 	if err != nil {
 		return Counterbalance{}, err
 	}
 	cb := Counterbalance{Load: n.Load, Setting: units.Pressure(float64(n.Load) * ratio), Ratio: ratio, RatioRule: rule,
 		PilotRule: pilotRule()}
-	effective := cb.Setting
+	if n.Setting != 0 {
+		cb.Setting = n.Setting
+	}
+	effective, opening := cb.Setting, n.PilotRatio+n.Coupling
 	if !n.Vented {
 		effective += n.Back
+		if n.Joined {
+			opening-- // the pilot pressure past the poppet holds it shut as much
+		}
 	}
-	cb.Pilot = units.Pressure(float64(effective-n.Load) / (n.PilotRatio + n.Coupling))
-	cb.Throttled = n.Load + units.Pressure(n.Coupling*float64(cb.Pilot)) - n.Back
+	if !(opening > 0) {
+		return Counterbalance{}, validate.Fail(fn, "PilotRatio", n.PilotRatio, "above 1 − Coupling for a Joined valve: its pilot could never open it")
+	}
+	cb.Pilot = units.Pressure(float64(effective-n.Load) / opening)
+	past := n.Back
+	if n.Joined {
+		past += cb.Pilot
+	}
+	cb.Throttled = n.Load + units.Pressure(n.Coupling*float64(cb.Pilot)) - past
 	cb.Heat = cb.Throttled.TimesFlow(n.Flow)
 	if err := validate.Result(fn, "Heat", cb.Heat); err != nil {
 		return Counterbalance{}, err
@@ -144,6 +168,22 @@ func CounterbalanceSetting(n CounterbalanceNeed) (Counterbalance, error) {
 			cb.Setting, n.Rating))
 	}
 	return cb, nil
+}
+
+// counterbalanceRatio is the setting over the load: the caller's Ratio,
+// the default, or a given Setting over Load.
+func counterbalanceRatio(fn string, n CounterbalanceNeed) (float64, components.Rule, error) {
+	if n.Setting == 0 {
+		return marginOf(fn, "Ratio", n.Ratio, 1, 10, DefaultCounterbalanceRatio,
+			components.PracticeRule("counterbalance set at least 1.3 × the load-induced pressure"))
+	}
+	if n.Ratio != nil {
+		return 0, components.Rule{}, validate.Fail(fn, "Setting", n.Setting, "0 when Ratio is given: one way to set the valve")
+	}
+	if err := validate.Above(fn, "Setting", n.Setting, n.Load); err != nil {
+		return 0, components.Rule{}, err
+	}
+	return float64(n.Setting / n.Load), components.CallerRule("Setting"), nil
 }
 
 // PilotCheckNeed describes a pilot-operated check valve holding a load.

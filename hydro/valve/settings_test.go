@@ -124,6 +124,55 @@ func TestCounterbalanceCoupled(t *testing.T) {
 	}
 }
 
+// A valve already set for the heaviest load it holds opens for a lighter
+// one — the crane's empty boom coming down — at the same setting: the two
+// force balances of TestCounterbalanceCoupled hold with the given setting,
+// and the ratio reported is the setting over this load.
+func TestCounterbalanceAtSetting(t *testing.T) {
+	bar := units.Bar
+	const c = 0.6864
+	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 20 * bar, Setting: 195 * bar, PilotRatio: 4.5, Back: 5 * bar,
+		Coupling: c, Flow: 40 * units.LitrePerMinute})
+	if err != nil {
+		t.Fatal(err)
+	}
+	pcap := 20*bar + units.Pressure(c)*cb.Pilot
+	checktest.Near(t, "setting", cb.Setting, 195*bar, 0)
+	checktest.Near(t, "poppet balance", pcap+units.Pressure(4.5)*cb.Pilot, 195*bar+5*bar, 1e-15)
+	checktest.Near(t, "throttled drop", cb.Throttled, pcap-5*bar, 1e-15)
+	checktest.Near(t, "ratio", cb.Ratio, 195.0/20, 1e-15)
+	if cb.RatioRule.Kind != components.CallerValue || len(cb.Findings) != 0 {
+		t.Errorf("counterbalance %+v", cb)
+	}
+	for _, n := range []CounterbalanceNeed{
+		{Load: 20 * bar, Setting: 20 * bar, PilotRatio: 3},                   // opens on the load alone
+		{Load: 20 * bar, Setting: 195 * bar, Ratio: new(1.3), PilotRatio: 3}, // two settings
+		{Load: 20 * bar, Setting: units.Pressure(math.Inf(1)), PilotRatio: 3},
+	} {
+		_, err := CounterbalanceSetting(n)
+		checktest.RangeErrorIn(t, err, "valve.CounterbalanceSetting", "Setting")
+	}
+}
+
+// On a regenerative extend the annulus oil the valve passes joins the cap
+// side, so the pressure past the valve is the pilot pressure plus the
+// drops of the way across: the poppet balance of TestCounterbalanceCoupled
+// with p_back replaced by p_x + 3 bar.
+func TestCounterbalanceJoined(t *testing.T) {
+	bar := units.Bar
+	const c = 2.566 // φ of a 160 mm × 125 mm cylinder, valve on the annulus port
+	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 16 * bar, Setting: 29 * bar, PilotRatio: 3, Back: 3 * bar,
+		Coupling: c, Joined: true, Flow: 70 * units.LitrePerMinute})
+	if err != nil {
+		t.Fatal(err)
+	}
+	held, past := 16*bar+units.Pressure(c)*cb.Pilot, cb.Pilot+3*bar
+	checktest.Near(t, "poppet balance", held+3*cb.Pilot, 29*bar+past, 1e-15)
+	checktest.Near(t, "throttled drop", cb.Throttled, held-past, 1e-15)
+	_, err = CounterbalanceSetting(CounterbalanceNeed{Load: 16 * bar, PilotRatio: 0.5, Joined: true})
+	checktest.RangeErrorIn(t, err, "valve.CounterbalanceSetting", "PilotRatio")
+}
+
 func TestCounterbalanceFindings(t *testing.T) {
 	bar := units.Bar
 	cb, err := CounterbalanceSetting(CounterbalanceNeed{Load: 150 * bar, PilotRatio: 3, Ratio: new(1.1), Rating: 160 * bar})
