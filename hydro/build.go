@@ -54,12 +54,12 @@ func (z *sizer) report(res *result) (Report, error) {
 		r.Findings = components.Findings(nil).Merge(fs...).Sorted()
 		return r, nil
 	}
-	for i, ph := range z.phases {
-		r.Phases = append(r.Phases, z.phaseResult(ph, res.heats[i]))
-	}
-	if z.idle > 0 { // the idle time between cycles, last of the heats
-		h := res.heats[len(res.heats)-1]
-		r.Phases = append(r.Phases, z.phaseResult(&phase{name: h.name, time: h.time}, h))
+	for _, h := range res.heats { // the phases, the dwells after moves, the idle time
+		ph := h.ph
+		if ph == nil {
+			ph = &phase{name: h.name}
+		}
+		r.Phases = append(r.Phases, z.phaseResult(ph, h))
 	}
 	if r.Pump, f, err = z.pumpDetails(res); err != nil {
 		return Report{}, err
@@ -182,7 +182,7 @@ func (z *sizer) phaseResult(ph *phase, h phaseHeat) PhaseResult {
 	for _, l := range h.loads {
 		heat += l.Power
 	}
-	r := PhaseResult{Name: ph.name, Time: ph.time, Mode: op.mode,
+	r := PhaseResult{Name: h.name, Time: h.time, Mode: op.mode,
 		Demand:   Value[units.Flow]{ph.demand, sumRule},
 		Load:     Value[units.Pressure]{ph.load, pressureRule},
 		Pump:     Value[units.Pressure]{op.point.Pressure, opRule},

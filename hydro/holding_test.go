@@ -1,6 +1,7 @@
 package hydro
 
 import (
+	"math"
 	"strings"
 	"testing"
 
@@ -9,13 +10,24 @@ import (
 	"github.com/hydrosize/hydrosize/units"
 )
 
-// TestCounterbalanceHoldsEveryHeldLoad: the crane's boom lifts a log and
-// holds it while the crane slews; the counterbalance valve on its cap port
-// must hold the log too, not only the boom's own weight: set at least
-// 1.3 × the highest load-induced pressure on that side (common practice),
-// here the hold's force over the cap area.
+// TestCounterbalanceHoldsEveryHeldLoad: the crane's boom lifts a log
+// (12 000 lbf, given as the move's force) and the counterbalance valve on
+// its cap port holds it while the crane slews, not only the boom's own
+// weight (900 lb at 55°): set at least 1.3 × the highest load-induced
+// pressure on that side (common practice). A hold of the same load, the
+// boom's valve kept shifted, puts it there too.
 func TestCounterbalanceHoldsEveryHeldLoad(t *testing.T) {
-	r, err := Size(craneSpec(t))
+	hold := craneSpec(t)
+	ph := &hold.Cycle.Phases[1]
+	ph.Moves = append(ph.Moves, Move{Actuator: "boom", Direction: "hold", Force: 12000 * units.PoundForce})
+	for _, s := range []Spec{craneSpec(t), hold} {
+		counterbalanceHolds(t, s)
+	}
+}
+
+func counterbalanceHolds(t *testing.T, s Spec) {
+	t.Helper()
+	r, err := Size(s)
 	if err != nil {
 		t.Fatal(err)
 	}
@@ -24,15 +36,8 @@ func TestCounterbalanceHoldsEveryHeldLoad(t *testing.T) {
 		t.Fatal("the boom has no load-holding valve")
 	}
 	c := actuator.Cylinder{Bore: boom.Bore.Chosen, Rod: boom.Rod.Chosen}
-	var held units.Pressure
-	for _, m := range boom.Moves {
-		if m.Direction == "hold (extend)" {
-			held = units.Pressure(float64(m.Force.Value) / float64(c.CapArea()))
-		}
-	}
-	if held == 0 {
-		t.Fatal("no hold in the crane's cycle")
-	}
+	weight := 12000*units.PoundForce + (900 * units.PoundMass).TimesAcceleration(units.StandardGravity)*units.Force(math.Sin(55*math.Pi/180))
+	held := units.Pressure(float64(weight) / float64(c.CapArea()))
 	if boom.Holding.Load.Value < held*(1-1e-12) {
 		t.Errorf("held load %v, below the %v the hold puts on the cap side", boom.Holding.Load.Value, held)
 	}
