@@ -256,19 +256,37 @@ func (z *sizer) drops(ml *mainLines) error {
 func (z *sizer) loads() {
 	z.pumpP = 0
 	for _, ph := range z.phases {
-		ph.load = 0
-		for _, m := range ph.moves {
-			ph.load = max(ph.load, m.port+m.supplyDrop)
-		}
-		ph.pumpP = ph.load
-		if ph.working() {
-			ph.pumpP += ph.lineDrop
-		}
-		if z.kind.control == pump.LoadSensing && ph.load > 0 {
-			ph.pumpP += lsMargin // the pump holds its margin above the load it senses
-		}
+		z.load(ph)
 		z.pumpP = max(z.pumpP, ph.pumpP)
 	}
+}
+
+// load sets phase ph's load and pump pressure from its moves.
+func (z *sizer) load(ph *phase) {
+	ph.load = 0
+	for _, m := range ph.moves {
+		ph.load = max(ph.load, m.port+m.supplyDrop)
+	}
+	ph.pumpP = ph.load
+	if ph.working() {
+		ph.pumpP += ph.lineDrop
+	}
+	if z.kind.control == pump.LoadSensing && ph.load > 0 {
+		ph.pumpP += lsMargin // the pump holds its margin above the load it senses
+	}
+}
+
+// dwell is the dwell that follows the moves of phase ph, as a phase of its
+// own: the valves of the moves centred, the holds of ph still held.
+func (z *sizer) dwell(ph *phase) *phase {
+	d := &phase{name: ph.name + ", dwell", spec: Phase{Name: ph.name + ", dwell", Dwell: ph.spec.Dwell}, time: ph.spec.Dwell}
+	for _, m := range ph.moves {
+		if m.hold() {
+			d.moves = append(d.moves, m)
+		}
+	}
+	z.load(d)
+	return d
 }
 
 // peakDemand is the highest pump flow of the cycle.

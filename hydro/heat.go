@@ -14,6 +14,7 @@ import (
 // phaseHeat is one phase's working point and heat, for the drive and the
 // heat balance.
 type phaseHeat struct {
+	ph      *phase // the phase, a dwell after its moves, or nil for the idle time
 	name    string
 	time    time.Duration
 	op      operating
@@ -21,21 +22,33 @@ type phaseHeat struct {
 	driving units.Power // power of loads that drive their actuators, which ends as heat too
 }
 
-// heats works out every phase's working point and heat loads, with the idle
-// time between cycles as a last phase.
+// heats works out every phase's working point and heat loads, with the
+// dwell after a phase's moves as a phase of its own (the moves' valves
+// centred, its holds held) and the idle time between cycles as a last
+// phase.
 func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 	out := make([]phaseHeat, 0, len(z.phases)+1)
 	for _, ph := range z.phases {
-		op, err := z.operate(ph, model)
-		if err != nil {
-			return nil, err
+		parts := []*phase{ph}
+		if ph.working() && ph.spec.Dwell > 0 {
+			parts = append(parts, z.dwell(ph))
 		}
-		loads, driving, err := z.phaseLoads(ph, op, ph.loads[:0])
-		if err != nil {
-			return nil, err
+		for i, p := range parts {
+			op, err := z.operate(p, model)
+			if err != nil {
+				return nil, err
+			}
+			loads, driving, err := z.phaseLoads(p, op, p.loads[:0])
+			if err != nil {
+				return nil, err
+			}
+			p.loads = loads
+			t := p.time
+			if i == 0 && len(parts) > 1 {
+				t = ph.move
+			}
+			out = append(out, phaseHeat{ph: p, name: p.name, time: t, op: op, loads: loads, driving: driving})
 		}
-		ph.loads = loads
-		out = append(out, phaseHeat{name: ph.name, time: ph.time, op: op, loads: loads, driving: driving})
 	}
 	if z.idle > 0 {
 		op, err := z.operate(nil, model)

@@ -276,6 +276,9 @@ func TestValidateProblems(t *testing.T) {
 		{"no supply", func(s *Spec) { s.Supply = Supply{} }, []string{"supply.mains"}},
 		{"mains and engine", func(s *Spec) { s.Supply.EngineSpeed = 1800 * units.RevolutionPerMinute }, []string{"supply.engine_speed"}},
 		{"mains 55 Hz", func(s *Spec) { s.Supply.Mains = 55 * units.Hertz }, []string{"supply.mains"}},
+		{"mains 55 Hz and an engine", func(s *Spec) {
+			s.Supply.Mains, s.Supply.EngineSpeed = 55*units.Hertz, 1800*units.RevolutionPerMinute
+		}, []string{"supply.engine_speed", "supply.mains"}},
 		{"odd poles", func(s *Spec) { s.Supply.Poles = 3 }, []string{"supply.poles"}},
 		{"poles on an engine", func(s *Spec) { s.Supply.Mains = 0; s.Supply.EngineSpeed = 1800 * units.RevolutionPerMinute }, []string{"supply.poles"}},
 		{"engine too fast", func(s *Spec) { s.Supply = Supply{EngineSpeed: 9000 * units.RevolutionPerMinute} }, []string{"supply.engine_speed"}},
@@ -343,6 +346,9 @@ func TestValidateProblems(t *testing.T) {
 		{"pressure and range", func(s *Spec) {
 			s.Design.PressureRange = &PressureRange{From: 100 * units.Bar, To: 200 * units.Bar, Step: 20 * units.Bar}
 		}, []string{"design.pressure_range"}},
+		{"pressure and a reversed range", func(s *Spec) {
+			s.Design.PressureRange = &PressureRange{From: 200 * units.Bar, To: 100 * units.Bar, Step: 20 * units.Bar}
+		}, []string{"design.pressure_range", "design.pressure_range.to"}},
 		{"range reversed", func(s *Spec) {
 			s.Design.Pressure = 0
 			s.Design.PressureRange = &PressureRange{From: 200 * units.Bar, To: 100 * units.Bar, Step: 20 * units.Bar}

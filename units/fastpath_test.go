@@ -42,8 +42,9 @@ func TestParseFastPathAgrees(t *testing.T) {
 	for s := range spellings {
 		for _, x := range fastPathValues {
 			in := strconv.FormatFloat(x, 'g', -1, 64) + " " + s
-			fast, ok := parseRegistered(in)
+			fast, fastErr := Parse(in)
 			slow, err := parseQuantity("units.Parse", in, numberStyle{})
+			ok := fastErr == nil
 			if !ok {
 				continue
 			}
@@ -52,11 +53,16 @@ func TestParseFastPathAgrees(t *testing.T) {
 			}
 		}
 	}
+	// Expressions and errors: the same result and the same message.
+	for _, in := range append(append([]string(nil), commonSeeds...), "2 kW·h/(m²·K)", "5 lbf/MM", "9 1/min", "3 Mpa", "7 KG/CM2") {
+		fast, fastErr := Parse(in)
+		slow, err := parseQuantity("units.Parse", in, numberStyle{})
+		if fast != slow || (fastErr == nil) != (err == nil) || (err != nil && fastErr.Error() != err.Error()) {
+			t.Errorf("Parse(%q) = %+v, %v; general path %+v, %v", in, fast, fastErr, slow, err)
+		}
+	}
 	// What the fast path leaves alone still fails on the general path.
 	for _, in := range []string{"-5 inHg vac", "-1 K", "-1 bara", "1e308 ksi"} {
-		if _, ok := parseRegistered(in); ok {
-			t.Errorf("parseRegistered(%q) took the fast path", in)
-		}
 		if _, err := Parse(in); !errors.Is(err, ErrRange) {
 			t.Errorf("Parse(%q): %v; want ErrRange", in, err)
 		}

@@ -210,3 +210,34 @@ func FuzzParserConventions(f *testing.F) {
 		}
 	})
 }
+
+// FuzzParser fuzzes the Parser conventions: a success is finite and its
+// error-free reading agrees across conventions where the text allows only
+// one reading (a decimal-comma Parser reads "2,5" as the package reads
+// "2.5"); an error matches a sentinel and quotes the input.
+func FuzzParser(f *testing.F) {
+	for _, s := range append(append([]string(nil), commonSeeds...), "2,5 bar", "3,000 psi", "1.500,5 kPa", "3,00 psi", "1,2,3 bar", ",5 bar", "2 ft 6,5 in", "1-1/2 in") {
+		f.Add(s)
+	}
+	eu, us, de := Parser{Decimal: ','}, Parser{Group: ','}, Parser{Decimal: ',', Group: '.'}
+	f.Fuzz(func(t *testing.T, s string) {
+		for _, p := range []Parser{eu, us, de} {
+			v, err := p.ParsePressure(s)
+			if err != nil {
+				checkParseError(t, "Parser.ParsePressure", s, float64(v), err)
+				continue
+			}
+			if math.IsNaN(float64(v)) || math.IsInf(float64(v), 0) {
+				t.Fatalf("%+v.ParsePressure(%q) = %v", p, s, v)
+			}
+		}
+		if strings.Contains(s, ".") {
+			return
+		}
+		a, errA := eu.ParsePressure(s)
+		b, errB := ParsePressure(strings.ReplaceAll(s, ",", "."))
+		if (errA == nil) != (errB == nil) || a != b {
+			t.Fatalf("Parser{Decimal: ','} reads %q as %v, %v; the package reads the point form as %v, %v", s, a, errA, b, errB)
+		}
+	})
+}

@@ -29,31 +29,36 @@ type Quantity struct {
 // scales, psia and bara absolute, psi and bar gauge; inside a longer
 // expression, temperature units count as intervals (BTU/(lbm·°F)).
 func Parse(s string) (Quantity, error) {
-	if q, ok := parseRegistered(s); ok {
-		return q, nil
+	const fn = "units.Parse"
+	in := trimRight(s)
+	if num, n, ok := fastNumber(in); ok && !continues(in, n) {
+		at := n
+		for at < len(in) && in[at] == ' ' {
+			at++
+		}
+		if i, found := fastSpellings.get(in[at:]); found {
+			if q, ok := registeredQuantity(num, &unitTable[i]); ok {
+				return q, nil
+			}
+		} else if at < len(in) {
+			// The general path would read the same number and miss the
+			// same look-up: go on from there.
+			r, f := resolveInexact(in[at:])
+			if f != nil {
+				return finishQuantity(fn, s, in, num, at, r, *f)
+			}
+			return finishQuantity(fn, s, in, num, at, r, failure{})
+		}
 	}
-	return parseQuantity("units.Parse", s, numberStyle{})
+	return parseQuantity(fn, s, numberStyle{})
 }
 
-// parseRegistered is Parse's fast path: a plain decimal, spaces and one
-// registered spelling, with the general path's arithmetic. It reports false
-// for everything the general path must look at (a value that is not
-// finite, a point below absolute zero, an absolute pressure below vacuum, a
-// negative vacuum reading) and leaves it to that path.
-func parseRegistered(s string) (Quantity, bool) {
-	in := trimRight(s)
-	num, n, ok := fastNumber(in)
-	if !ok {
-		return Quantity{}, false
-	}
-	for n < len(in) && in[n] == ' ' {
-		n++
-	}
-	i, ok := fastSpellings.get(in[n:])
-	if !ok {
-		return Quantity{}, false
-	}
-	u := &unitTable[i]
+// registeredQuantity is Parse's fast path: num of the registered unit u,
+// with the general path's arithmetic. It reports false for everything the
+// general path must look at (a value that is not finite, a point below
+// absolute zero, an absolute pressure below vacuum, a negative vacuum
+// reading) and leaves it to that path.
+func registeredQuantity(num float64, u *unitDef) (Quantity, bool) {
 	if num < 0 && (u.factor < 0 || u.ref&(refPoint|refAbsolute) != 0) {
 		return Quantity{}, false
 	}
@@ -72,6 +77,13 @@ func parseQuantity(fn, s string, st numberStyle) (Quantity, error) {
 		return Quantity{}, &ParseError{Func: fn, Input: s, Pos: at, Err: ErrSyntax, Detail: "missing unit"}
 	}
 	r, f := resolveUnit(in[at:])
+	return finishQuantity(fn, s, in, num, at, r, f)
+}
+
+// finishQuantity makes the Quantity of num in the resolved unit r of
+// in[at:] (or reports the failure f), checking the sign of a vacuum
+// reading and the bounds of temperatures and absolute pressures.
+func finishQuantity(fn, s, in string, num float64, at int, r resolved, f failure) (Quantity, error) {
 	if f.err == nil && num < 0 && r.factor < 0 {
 		f = negativeVacuum()
 	}
@@ -193,13 +205,19 @@ func Convert(value float64, from, to string) (float64, error) {
 }
 
 // convertRegistered is Convert's fast path, for two registered spellings
-// whose conversion is a multiply and a divide, with the general path's
-// arithmetic: value·u.factor/w.factor. It reports false for everything the
-// general path must look at (a temperature point, a reference that does not
+// whose conversion is a multiply and a divide, value·u.factor/w.factor, or
+// a temperature scale to another, with the general path's arithmetic. It
+// reports false for everything the general path must look at (a point and a
+// difference, a temperature below absolute zero, a reference that does not
 // cross, a value that is not finite or breaks a bound, a vacuum reading
 // below zero) and leaves it to that path.
 func convertRegistered(value float64, u, w *unitDef) (float64, bool) {
 	refs := u.ref | w.ref
+	if u.ref == refPoint && w.ref == refPoint && value-value == 0 && float64(value*u.factor)+u.offset >= 0 {
+		// Temperature scale to scale, as Quantity.in does it.
+		v := convertScale(value, scaleOf(resolvedOf(u)), scaleOf(resolvedOf(w)))
+		return v, v-v == 0
+	}
 	if u.dim != w.dim || refs&refPoint != 0 || value-value != 0 ||
 		(value < 0 && (u.factor < 0 || refs&refAbsolute != 0)) ||
 		(refs&refAbsolute != 0 && refs&(refGauge|refDiff) != 0) {

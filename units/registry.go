@@ -220,20 +220,20 @@ func appendFold(b []byte, s string) []byte {
 // lookupFold looks s up by letter case. It returns the unit, or −1 with the
 // entry when s could be more than one unit, or ok false when nothing folds
 // to s. It allocates nothing.
-func lookupFold(s string) (unit int, e foldEntry, ok bool) {
+func lookupFold(s string) (unit int, e *foldEntry, ok bool) {
 	if len(s) > maxFold/2 || !foldFilter.mayFold(s) { // folding grows UTF-8 by at most half: the buffer holds it
-		return 0, foldEntry{}, false
+		return 0, nil, false
 	}
 	var buf [maxFold]byte
 	key, h := foldedHash(buf[:0], s)
 	k, ok := foldIndex.getHashed(key, h)
 	if !ok {
-		return 0, foldEntry{}, false
+		return 0, nil, false
 	}
-	e = foldEntries[k]
+	e = &foldEntries[k]
 	for _, t := range e.twins {
 		if s == t { // "mPa" is no unit: unknown, not ambiguous
-			return 0, foldEntry{}, false
+			return 0, nil, false
 		}
 	}
 	return e.unit, e, ok
@@ -241,9 +241,9 @@ func lookupFold(s string) (unit int, e foldEntry, ok bool) {
 
 // lookupName returns the unit of spelling s: exactly, else by letter case.
 // A spelling that folds to more than one unit gives −1 and its entry.
-func lookupName(s string) (int, foldEntry, bool) {
+func lookupName(s string) (int, *foldEntry, bool) {
 	if i, ok := fastSpellings.get(s); ok {
-		return i, foldEntry{}, true
+		return i, nil, true
 	}
 	return lookupFold(s)
 }
@@ -279,7 +279,7 @@ func foldedHash(b []byte, s string) ([]byte, uint32) {
 }
 
 // ambiguousDetail says what s could be, for an ErrAmbiguous error.
-func ambiguousDetail(s string, e foldEntry) string {
+func ambiguousDetail(s string, e *foldEntry) string {
 	d := `"` + s + `" matches no spelling exactly; ignoring letter case it could be "` + strings.Join(e.could, `" or "`) + `"`
 	if len(e.twins) > 0 {
 		d += " (m is milli, 10⁻³; M is mega, 10⁶)"
