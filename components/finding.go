@@ -243,8 +243,9 @@ func (fs Findings) Merge(more ...Finding) Findings {
 	copy(out, fs)
 	var m merger
 	for _, f := range more {
-		if !m.says(out, f) {
+		if said, text := m.says(out, f); !said {
 			out = append(out, f)
+			m.keep(out, len(out)-1, text)
 		}
 	}
 	return out
@@ -263,35 +264,52 @@ type sentence struct {
 	written bool
 }
 
-// says reports whether a finding of out says what f says.
-func (m *merger) says(out Findings, f Finding) bool {
+// says reports whether a finding of out says what f says, and f's
+// sentence if it had to write it.
+func (m *merger) says(out Findings, f Finding) (bool, sentence) {
 	var text sentence
 	for i, g := range out {
 		if !g.sameHead(f) {
 			continue
 		}
 		if g.sameSentence(f) {
-			return true
+			return true, text
 		}
 		if !text.written {
 			text = sentence{f.Text(metric()), true}
 		}
 		if m.text(out, i) == text.text {
-			return true
+			return true, text
 		}
 	}
-	return false
+	return false, text
 }
 
 // text returns the metric sentence of out[i], writing it the first time.
 func (m *merger) text(out Findings, i int) string {
-	for len(m.texts) < len(out) {
-		m.texts = append(m.texts, sentence{})
-	}
+	m.grow(len(out), cap(out))
 	if s := &m.texts[i]; !s.written {
 		*s = sentence{out[i].Text(metric()), true}
 	}
 	return m.texts[i].text
+}
+
+// keep keeps the sentence of out[i], when says wrote it.
+func (m *merger) keep(out Findings, i int, s sentence) {
+	if s.written {
+		m.grow(i+1, cap(out))
+		m.texts[i] = s
+	}
+}
+
+// grow makes room for the sentences of n findings (of at most max).
+func (m *merger) grow(n, max int) {
+	if m.texts == nil {
+		m.texts = make([]sentence, n, max)
+	}
+	for len(m.texts) < n {
+		m.texts = append(m.texts, sentence{})
+	}
 }
 
 // Hazard returns the findings about hazard h, in order.

@@ -44,6 +44,8 @@ type labels struct {
 	in, out           string    // its valve and lines, in and out
 	lowered, holder   string    // a lowered load, its counterbalance valve
 	seal, motor       string    // a cylinder's seal friction, a motor's losses
+	port              string    // its inlet port, in a pressure budget
+	supply, back      string    // its valve and work line, on the way in and out
 }
 
 func labelsFor(name string) labels {
@@ -54,6 +56,7 @@ func labelsFor(name string) labels {
 		in:       name + " valve and lines in", out: name + " valve and lines out",
 		lowered: name + " lowered load", holder: name + " counterbalance valve",
 		seal: name + " seal friction", motor: name + " motor losses",
+		port: name + " inlet port", supply: name + " valve and work line", back: name + " work line and valve",
 	}
 }
 
