@@ -68,7 +68,7 @@ func ExampleSize() {
 	fmt.Println("worst finding:", worst)
 	// Output:
 	// press: 160 mm × 125 mm by standard: ISO 3320:2013, clause 5
-	// pump: 140 cm³/rev load-sensing
+	// pump: 100 cm³/rev load-sensing
 	// motor: 5.5 kW
 	// converged: true
 	// worst finding: warning
@@ -88,5 +88,5 @@ func ExampleSweep() {
 	}
 	// Output:
 	// 125 bar press 180 mm pump 140 cm³/rev motor 5.5 kW
-	// 200 bar press 140 mm pump 140 cm³/rev motor 7.5 kW
+	// 200 bar press 140 mm pump 71 cm³/rev motor 5.5 kW
 }
