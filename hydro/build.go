@@ -1,7 +1,6 @@
 package hydro
 
 import (
-	"slices"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -32,7 +31,11 @@ func (z *sizer) report(res *result) (Report, error) {
 	if s.Units == "us" {
 		r.Units = "us"
 	}
-	fs := slices.Clone(z.notes) // gathered, then merged once: Merge copies
+	fs := make(components.Findings, len(z.notes), len(z.notes)+64) // gathered, then merged once: Merge copies
+	copy(fs, z.notes)
+	if len(z.acts) > 0 {
+		r.Actuators = make([]ActuatorResult, 0, len(z.acts))
+	}
 	for _, a := range z.acts {
 		ar, f := z.actuatorResult(a)
 		r.Actuators = append(r.Actuators, ar)
@@ -53,6 +56,9 @@ func (z *sizer) report(res *result) (Report, error) {
 		r.Pump = z.pumpResult(res)
 		r.Findings = components.Findings(nil).Merge(fs...).Sorted()
 		return r, nil
+	}
+	if len(res.heats) > 0 {
+		r.Phases = make([]PhaseResult, 0, len(res.heats))
 	}
 	for _, h := range res.heats { // the phases, the dwells after moves, the idle time
 		ph := h.ph

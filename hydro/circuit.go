@@ -168,9 +168,17 @@ type branches struct {
 // branchPaths builds the branches of actuator a from its valve and lines.
 func branchPaths(a *act) branches {
 	var b branches
-	for i, p := range [2]port{{a.lineA, "A", 0}, {a.lineB, "B", 1}} {
-		b.in[i] = nonNil(append([]line.Element{valveElement(a.spec.Name+" valve P→"+p.port, a.valve)}, p.run.els...)...)
-		b.out[i] = nonNil(append(slices.Clip(p.run.els), valveElement(a.spec.Name+" valve "+p.port+"→T", a.valve))...)
+	for i, l := range [2]*lineRun{a.lineA, a.lineB} {
+		b.in[i] = make([]line.Element, 0, len(l.els)+1)
+		if v := valveElement(a.labels.valveIn[i], a.valve); v != nil {
+			b.in[i] = append(b.in[i], v)
+		}
+		b.in[i] = append(b.in[i], l.els...)
+		b.out[i] = make([]line.Element, len(l.els), len(l.els)+1)
+		copy(b.out[i], l.els)
+		if v := valveElement(a.labels.valveOut[i], a.valve); v != nil {
+			b.out[i] = append(b.out[i], v)
+		}
 	}
 	return b
 }
