@@ -120,11 +120,45 @@ func (f Finding) Args() []any { return slices.Clone(f.args) }
 // (units.Metric(), units.USCustomary(), or a caller's own system); the zero
 // System is metric.
 func (f Finding) Text(sys units.System) string {
+	if b, ok := f.appendPlain(make([]byte, 0, len(f.format)+16*len(f.args)), sys); ok {
+		return string(b)
+	}
 	out := make([]any, len(f.args))
 	for i, a := range f.args {
 		out[i] = quote(sys, a)
 	}
 	return fmt.Sprintf(f.format, out...)
+}
+
+// appendPlain appends the sentence to b when its format has only %v verbs,
+// one per value, and %% (as a finding's format is meant to), writing what
+// fmt.Sprintf would: the text, each %v replaced by its quoted value and %%
+// by %. For any other format it returns false and Text leaves it to fmt.
+func (f Finding) appendPlain(b []byte, sys units.System) ([]byte, bool) {
+	next, format := 0, f.format
+	for {
+		i := strings.IndexByte(format, '%')
+		if i < 0 || i+1 == len(format) {
+			if i >= 0 || next != len(f.args) {
+				return nil, false // a lone % at the end, or values left over
+			}
+			return append(b, format...), true
+		}
+		b = append(b, format[:i]...)
+		switch format[i+1] {
+		case '%':
+			b = append(b, '%')
+		case 'v':
+			if next == len(f.args) {
+				return nil, false // more verbs than values
+			}
+			b = appendQuote(b, sys, f.args[next])
+			next++
+		default:
+			return nil, false
+		}
+		format = format[i+2:]
+	}
 }
 
 // String returns the severity, the hazard when there is one, and the

@@ -3,6 +3,7 @@ package components
 import (
 	"encoding/json"
 	"errors"
+	"fmt"
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
@@ -212,5 +213,45 @@ func BenchmarkMerge(b *testing.B) {
 	b.ReportAllocs()
 	for b.Loop() {
 		_ = Findings(nil).Merge(fs...)
+	}
+}
+
+// TestTextAsSprintf: a finding's sentence is what fmt.Sprintf writes with
+// each value quoted, for formats of %v verbs and %% that Text writes
+// itself and for the others (other verbs, too many or too few values, a
+// lone % at the end) that it leaves to fmt.
+func TestTextAsSprintf(t *testing.T) {
+	p, q := units.Pressure(183.4e5), units.Flow(1.5e-3)
+	for _, c := range []struct {
+		format string
+		args   []any
+	}{
+		{"", nil}, {"plain text", nil}, {"100 %% sure", nil}, {"%v", []any{p}},
+		{"%v at %v, %v %% of %v: %v", []any{p, q, 42.125, "the pump", 7}},
+		{"%v%v", []any{"a", "b"}}, {"ends in %v", []any{[]int{1, 2}}},
+		{"%d items", []any{3}}, {"%5v wide", []any{p}}, {"%v and %v", []any{p}},
+		{"%v", []any{p, q}}, {"lone %", nil}, {"lone % at %v", []any{p}},
+	} {
+		f := NewFinding(Notice, NoHazard, "t", Rule{}, c.format, c.args...)
+		for _, sys := range []units.System{units.Metric(), units.USCustomary()} {
+			quoted := make([]any, len(c.args))
+			for i, a := range c.args {
+				quoted[i] = quote(sys, a)
+			}
+			if got, want := f.Text(sys), fmt.Sprintf(c.format, quoted...); got != want {
+				t.Errorf("%q in %s: Text = %q; want %q", c.format, sys.Name(), got, want)
+			}
+		}
+	}
+}
+
+func BenchmarkFindingText(b *testing.B) {
+	f := NewFinding(Caution, FilterBypass, "line.bypass", PracticeRule("test"),
+		"%v would drop %v at this flow, above its bypass setting of %v: the bypass opens and unfiltered oil passes",
+		"return filter", units.Pressure(6.925e5), units.Pressure(3e5))
+	sys := units.Metric()
+	b.ReportAllocs()
+	for b.Loop() {
+		_ = f.Text(sys)
 	}
 }

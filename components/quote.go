@@ -12,59 +12,65 @@ func metric() units.System { return units.Metric() }
 // quote formats a finding's value: a typed quantity in the units of sys,
 // anything else with fmt's %v.
 func quote(sys units.System, a any) string {
+	var buf [40]byte
+	return string(appendQuote(buf[:0], sys, a))
+}
+
+// appendQuote appends a finding's value to b as quote writes it.
+func appendQuote(b []byte, sys units.System, a any) []byte {
 	switch v := a.(type) {
 	case units.Length:
-		return sys.FormatLength(v)
+		return sys.AppendLength(b, v)
 	case units.Area:
-		return sys.FormatArea(v)
+		return sys.AppendArea(b, v)
 	case units.Volume:
-		return sys.FormatVolume(v)
+		return sys.AppendVolume(b, v)
 	case units.Mass:
-		return sys.FormatMass(v)
+		return sys.AppendMass(b, v)
 	case units.Force:
-		return sys.FormatForce(v)
+		return sys.AppendForce(b, v)
 	case units.Pressure:
-		return sys.FormatPressure(v)
+		return sys.AppendPressure(b, v)
 	case units.AbsolutePressure:
-		return sys.FormatAbsolutePressure(v)
+		return sys.AppendAbsolutePressure(b, v)
 	case units.Flow:
-		return sys.FormatFlow(v)
+		return sys.AppendFlow(b, v)
 	case units.Velocity:
-		return sys.FormatVelocity(v)
+		return sys.AppendVelocity(b, v)
 	case units.Displacement:
-		return sys.FormatDisplacement(v)
+		return sys.AppendDisplacement(b, v)
 	case units.RotationalSpeed:
-		return sys.FormatRotationalSpeed(v)
+		return sys.AppendRotationalSpeed(b, v)
 	case units.Torque:
-		return sys.FormatTorque(v)
+		return sys.AppendTorque(b, v)
 	case units.Power:
-		return sys.FormatPower(v)
+		return sys.AppendPower(b, v)
 	case units.Energy:
-		return sys.FormatEnergy(v)
+		return sys.AppendEnergy(b, v)
 	case units.Temperature:
-		return sys.FormatTemperature(v)
+		return sys.AppendTemperature(b, v)
 	case units.TemperatureDifference:
-		return sys.FormatTemperatureDifference(v)
+		return sys.AppendTemperatureDifference(b, v)
 	case units.KinematicViscosity:
-		return sys.FormatKinematicViscosity(v)
+		return sys.AppendKinematicViscosity(b, v)
 	case units.DynamicViscosity:
-		return sys.FormatDynamicViscosity(v)
+		return sys.AppendDynamicViscosity(b, v)
 	case units.Density:
-		return sys.FormatDensity(v)
+		return sys.AppendDensity(b, v)
 	case units.SpecificHeatCapacity:
-		return sys.FormatSpecificHeatCapacity(v)
+		return sys.AppendSpecificHeatCapacity(b, v)
 	case units.HeatTransferCoefficient:
-		return sys.FormatHeatTransferCoefficient(v)
+		return sys.AppendHeatTransferCoefficient(b, v)
 	case units.ThermalConductivity:
-		return sys.FormatThermalConductivity(v)
+		return sys.AppendThermalConductivity(b, v)
 	case units.Stiffness:
-		return sys.FormatStiffness(v)
+		return sys.AppendStiffness(b, v)
 	case units.Frequency:
-		return sys.FormatFrequency(v)
+		return sys.AppendFrequency(b, v)
 	case units.Acceleration:
-		return sys.FormatAcceleration(v)
+		return sys.AppendAcceleration(b, v)
 	case float64:
-		return fmt.Sprintf("%.4g", v)
+		return fmt.Appendf(b, "%.4g", v)
 	}
-	return fmt.Sprint(a)
+	return fmt.Append(b, a)
 }

@@ -50,7 +50,13 @@ func (z *sizer) accCycle(lo, hi units.Pressure) (accumulator.Cycle, accumulator.
 func (z *sizer) supplement() (accumulator.SupplementSizing, error) {
 	var phases []accumulator.Phase
 	for _, ph := range z.phases {
-		phases = append(phases, accumulator.Phase{Name: ph.name, Duration: ph.time, Flow: ph.demand})
+		if !ph.working() || ph.spec.Dwell == 0 {
+			phases = append(phases, accumulator.Phase{Name: ph.name, Duration: ph.time, Flow: ph.demand})
+			continue
+		}
+		// The moves draw their flow; the dwell after them draws none.
+		phases = append(phases, accumulator.Phase{Name: ph.name, Duration: ph.move, Flow: ph.demand},
+			accumulator.Phase{Name: ph.name + ", dwell", Duration: ph.spec.Dwell})
 	}
 	if z.idle > 0 {
 		phases = append(phases, accumulator.Phase{Name: "idle", Duration: z.idle})

@@ -1,7 +1,6 @@
 package hydro
 
 import (
-	"slices"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/components"
@@ -32,7 +31,11 @@ func (z *sizer) report(res *result) (Report, error) {
 	if s.Units == "us" {
 		r.Units = "us"
 	}
-	fs := slices.Clone(z.notes) // gathered, then merged once: Merge copies
+	fs := make(components.Findings, len(z.notes), len(z.notes)+64) // gathered, then merged once: Merge copies
+	copy(fs, z.notes)
+	if len(z.acts) > 0 {
+		r.Actuators = make([]ActuatorResult, 0, len(z.acts))
+	}
 	for _, a := range z.acts {
 		ar, f := z.actuatorResult(a)
 		r.Actuators = append(r.Actuators, ar)
@@ -54,12 +57,15 @@ func (z *sizer) report(res *result) (Report, error) {
 		r.Findings = components.Findings(nil).Merge(fs...).Sorted()
 		return r, nil
 	}
-	for i, ph := range z.phases {
-		r.Phases = append(r.Phases, z.phaseResult(ph, res.heats[i]))
+	if len(res.heats) > 0 {
+		r.Phases = make([]PhaseResult, 0, len(res.heats))
 	}
-	if z.idle > 0 { // the idle time between cycles, last of the heats
-		h := res.heats[len(res.heats)-1]
-		r.Phases = append(r.Phases, z.phaseResult(&phase{name: h.name, time: h.time}, h))
+	for _, h := range res.heats { // the phases, the dwells after moves, the idle time
+		ph := h.ph
+		if ph == nil {
+			ph = &phase{name: h.name}
+		}
+		r.Phases = append(r.Phases, z.phaseResult(ph, h))
 	}
 	if r.Pump, f, err = z.pumpDetails(res); err != nil {
 		return Report{}, err
@@ -94,7 +100,7 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 	var fs, sized components.Findings
 	if a.cylinder() {
 		r.Bore, r.Rod, r.Stroke = a.size.Bore, a.size.Rod, a.spec.Stroke
-		sized = a.fit.findings()
+		sized = about(a.fit.findings(), a.spec.Name)
 		fs = sized
 		if a.ok {
 			phi, _ := a.cyl.AreaRatio()
@@ -108,7 +114,8 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		}
 	} else {
 		r.Displacement = a.msize.Displacement
-		fs = a.msize.Findings
+		sized = about(a.msize.Findings, a.spec.Name)
+		fs = sized
 	}
 	fs = fs.Merge(z.holdingFindings(a, sized)...)
 	if h, f, err := z.holdingResult(a); err == nil {
@@ -119,6 +126,17 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 		r.Moves = append(r.Moves, moveResult(a, m))
 	}
 	return r, fs
+}
+
+// about puts the findings of a family that sizes one part at a time,
+// whose sentences do not name the part, about the part they are for
+// (components.Finding.About).
+func about(fs components.Findings, name string) components.Findings {
+	out := make(components.Findings, len(fs))
+	for i, f := range fs {
+		out[i] = f.About(name)
+	}
+	return out
 }
 
 func moveResult(a *act, m *mv) MoveResult {
@@ -150,7 +168,7 @@ func (z *sizer) holdingFindings(a *act, sized components.Findings) components.Fi
 	var fs components.Findings
 	hazard := func(f components.Finding) bool { return f.Hazard != components.NoHazard }
 	for _, m := range a.moves {
-		fs = fs.Merge(m.fit.findings().Filter(hazard)...)
+		fs = fs.Merge(about(m.fit.findings().Filter(hazard), a.spec.Name)...)
 	}
 	held := func(f components.Finding) bool {
 		return f.Hazard == components.SuspendedLoad || f.Hazard == components.OverrunningLoad
@@ -170,7 +188,7 @@ func (z *sizer) phaseResult(ph *phase, h phaseHeat) PhaseResult {
 	for _, l := range h.loads {
 		heat += l.Power
 	}
-	r := PhaseResult{Name: ph.name, Time: ph.time, Mode: op.mode,
+	r := PhaseResult{Name: h.name, Time: h.time, Mode: op.mode,
 		Demand:   Value[units.Flow]{ph.demand, sumRule},
 		Load:     Value[units.Pressure]{ph.load, pressureRule},
 		Pump:     Value[units.Pressure]{op.point.Pressure, opRule},

@@ -168,9 +168,17 @@ type branches struct {
 // branchPaths builds the branches of actuator a from its valve and lines.
 func branchPaths(a *act) branches {
 	var b branches
-	for i, p := range [2]port{{a.lineA, "A", 0}, {a.lineB, "B", 1}} {
-		b.in[i] = nonNil(append([]line.Element{valveElement(a.spec.Name+" valve P→"+p.port, a.valve)}, p.run.els...)...)
-		b.out[i] = nonNil(append(slices.Clip(p.run.els), valveElement(a.spec.Name+" valve "+p.port+"→T", a.valve))...)
+	for i, l := range [2]*lineRun{a.lineA, a.lineB} {
+		b.in[i] = make([]line.Element, 0, len(l.els)+1)
+		if v := valveElement(a.labels.valveIn[i], a.valve); v != nil {
+			b.in[i] = append(b.in[i], v)
+		}
+		b.in[i] = append(b.in[i], l.els...)
+		b.out[i] = make([]line.Element, len(l.els), len(l.els)+1)
+		copy(b.out[i], l.els)
+		if v := valveElement(a.labels.valveOut[i], a.valve); v != nil {
+			b.out[i] = append(b.out[i], v)
+		}
 	}
 	return b
 }
@@ -248,19 +256,37 @@ func (z *sizer) drops(ml *mainLines) error {
 func (z *sizer) loads() {
 	z.pumpP = 0
 	for _, ph := range z.phases {
-		ph.load = 0
-		for _, m := range ph.moves {
-			ph.load = max(ph.load, m.port+m.supplyDrop)
-		}
-		ph.pumpP = ph.load
-		if ph.working() {
-			ph.pumpP += ph.lineDrop
-		}
-		if z.kind.control == pump.LoadSensing && ph.load > 0 {
-			ph.pumpP += lsMargin // the pump holds its margin above the load it senses
-		}
+		z.load(ph)
 		z.pumpP = max(z.pumpP, ph.pumpP)
 	}
+}
+
+// load sets phase ph's load and pump pressure from its moves.
+func (z *sizer) load(ph *phase) {
+	ph.load = 0
+	for _, m := range ph.moves {
+		ph.load = max(ph.load, m.port+m.supplyDrop)
+	}
+	ph.pumpP = ph.load
+	if ph.working() {
+		ph.pumpP += ph.lineDrop
+	}
+	if z.kind.control == pump.LoadSensing && ph.load > 0 {
+		ph.pumpP += lsMargin // the pump holds its margin above the load it senses
+	}
+}
+
+// dwell is the dwell that follows the moves of phase ph, as a phase of its
+// own: the valves of the moves centred, the holds of ph still held.
+func (z *sizer) dwell(ph *phase) *phase {
+	d := &phase{name: ph.name + ", dwell", spec: Phase{Name: ph.name + ", dwell", Dwell: ph.spec.Dwell}, time: ph.spec.Dwell}
+	for _, m := range ph.moves {
+		if m.hold() {
+			d.moves = append(d.moves, m)
+		}
+	}
+	z.load(d)
+	return d
 }
 
 // peakDemand is the highest pump flow of the cycle.

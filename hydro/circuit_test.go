@@ -5,7 +5,8 @@ import "testing"
 // TestSurplusOfAFixedPump: the phases' working points and the pump
 // family's findings tell the same story of a fixed pump's surplus. Through
 // the crane's open center, metered by the spools, the surplus bleeds to
-// tank at the load's pressure and none passes the relief; on the demo with
+// tank at the load's pressure and none passes the relief while something
+// moves; on the demo with
 // a gear pump and a tandem center, whose valves shift fully, it passes the
 // relief.
 func TestSurplusOfAFixedPump(t *testing.T) {
@@ -17,7 +18,7 @@ func TestSurplusOfAFixedPump(t *testing.T) {
 		t.Errorf("open center: %d surplus findings, %d bleed-off", len(f), len(crane.Findings.Topic("pump.bleed-off")))
 	}
 	for _, ph := range crane.Phases {
-		if ph.Relief.Value != 0 {
+		if ph.Demand.Value > 0 && ph.Relief.Value != 0 {
 			t.Errorf("open center, %q: %v over the relief", ph.Name, ph.Relief.Value)
 		}
 	}

@@ -175,7 +175,7 @@ func (z *sizer) filterCheck(f filterPlace, rating string, nuRun, nuCold units.Ki
 	if rating == "" {
 		r.Rating = adv.Element
 	}
-	fs := adv.Findings
+	fs := about(adv.Findings, adv.Name)
 	if f.rated == 0 {
 		fs = fs.Merge(components.NewFinding(components.Notice, components.NoHazard, "hydro.filter-size",
 			filterFigures, "No element of the sizes considered passes %v: use filters in parallel.", f.flow))
@@ -197,7 +197,7 @@ func (z *sizer) filterCheck(f filterPlace, rating string, nuRun, nuCold units.Ki
 		// The bypass setting is the sizer's figure, not the caller's.
 		*c.out = b.Setting
 		c.out.Rule = bypassRule
-		fs = fs.Merge(ours(b.Findings, b.Setting.Rule, bypassRule)...)
+		fs = fs.Merge(about(ours(b.Findings, b.Setting.Rule, bypassRule), adv.Name)...)
 	}
 	return r, fs, nil
 }

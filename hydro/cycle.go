@@ -6,15 +6,17 @@ import (
 	"time"
 
 	"github.com/hydrosize/hydrosize/hydro/actuator"
+	"github.com/hydrosize/hydrosize/hydro/thermal"
 	"github.com/hydrosize/hydrosize/hydro/valve"
 	"github.com/hydrosize/hydrosize/units"
 )
 
 // act is one actuator through the passes.
 type act struct {
-	spec  Actuator
-	index int
-	moves []*mv
+	spec   Actuator
+	index  int
+	moves  []*mv
+	labels labels
 
 	// Set by each pass.
 	cyl       actuator.Cylinder
@@ -33,6 +35,27 @@ type act struct {
 }
 
 func (a *act) cylinder() bool { return a.spec.Kind == "cylinder" }
+
+// labels are the names an actuator gives its valve's ways and its heat
+// loads, written once rather than on every pass.
+type labels struct {
+	valveIn, valveOut [2]string // "press valve P→A", "press valve A→T"; [0] port A, [1] port B
+	control           string    // its flow control
+	in, out           string    // its valve and lines, in and out
+	lowered, holder   string    // a lowered load, its counterbalance valve
+	seal, motor       string    // a cylinder's seal friction, a motor's losses
+}
+
+func labelsFor(name string) labels {
+	return labels{
+		valveIn:  [2]string{name + " valve P→A", name + " valve P→B"},
+		valveOut: [2]string{name + " valve A→T", name + " valve B→T"},
+		control:  name + " flow control",
+		in:       name + " valve and lines in", out: name + " valve and lines out",
+		lowered: name + " lowered load", holder: name + " counterbalance valve",
+		seal: name + " seal friction", motor: name + " motor losses",
+	}
+}
 
 // mv is one move of an actuator in a phase.
 type mv struct {
@@ -89,6 +112,7 @@ type phase struct {
 	pumpP    units.Pressure // pump outlet pressure
 	lineDrop units.Pressure // pressure line drop at the phase's flow
 	retDrop  units.Pressure // return line and filter drop at the phase's return flow
+	loads    []thermal.Load // its heat loads, in a buffer each pass fills again
 }
 
 // working reports a phase in which something moves.
@@ -113,25 +137,43 @@ func (ph *phase) holding() bool {
 
 // resolveCycle builds the actuators and phases and times every move.
 func (z *sizer) resolveCycle() error {
-	byName := map[string]*act{}
-	for i, a := range z.spec.Actuators {
-		x := &act{spec: a, index: i, valve: -1}
-		z.acts = append(z.acts, x)
-		byName[a.Name] = x
+	spec := z.spec
+	acts := make([]act, len(spec.Actuators)) // one allocation for all, and one for all moves
+	z.acts = make([]*act, len(acts))
+	byName := make(map[string]*act, len(acts))
+	for i, a := range spec.Actuators {
+		acts[i] = act{spec: a, index: i, valve: -1, labels: labelsFor(a.Name)}
+		z.acts[i] = &acts[i]
+		byName[a.Name] = &acts[i]
 	}
-	for i, p := range z.spec.Cycle.Phases {
-		ph := &phase{name: p.Name, spec: p}
+	count, each := 0, make([]int, len(acts)) // moves in all, and of each actuator
+	for _, p := range spec.Cycle.Phases {
+		count += len(p.Moves)
+		for _, m := range p.Moves {
+			each[byName[m.Actuator].index]++
+		}
+	}
+	for i, a := range z.acts {
+		a.moves = make([]*mv, 0, each[i])
+	}
+	moves := make([]mv, 0, count)
+	phases := make([]phase, len(spec.Cycle.Phases))
+	z.phases = make([]*phase, len(phases))
+	for i, p := range spec.Cycle.Phases {
+		ph := &phases[i]
+		*ph = phase{name: p.Name, spec: p, moves: make([]*mv, 0, len(p.Moves))}
 		if ph.name == "" {
 			ph.name = "phase " + strconv.Itoa(i+1)
 		}
 		for _, m := range p.Moves {
 			a := byName[m.Actuator]
-			x := &mv{spec: m, phase: ph, act: a, dir: direction(m.Direction)}
+			moves = append(moves, mv{spec: m, phase: ph, act: a, dir: direction(m.Direction)})
+			x := &moves[len(moves)-1]
 			x.timeIt()
 			ph.moves = append(ph.moves, x)
 			a.moves = append(a.moves, x)
 		}
-		z.phases = append(z.phases, ph)
+		z.phases[i] = ph
 	}
 	z.retime()
 	return nil

@@ -14,6 +14,7 @@ import (
 // phaseHeat is one phase's working point and heat, for the drive and the
 // heat balance.
 type phaseHeat struct {
+	ph      *phase // the phase, a dwell after its moves, or nil for the idle time
 	name    string
 	time    time.Duration
 	op      operating
@@ -21,30 +22,44 @@ type phaseHeat struct {
 	driving units.Power // power of loads that drive their actuators, which ends as heat too
 }
 
-// heats works out every phase's working point and heat loads, with the idle
-// time between cycles as a last phase.
+// heats works out every phase's working point and heat loads, with the
+// dwell after a phase's moves as a phase of its own (the moves' valves
+// centred, its holds held) and the idle time between cycles as a last
+// phase.
 func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 	out := make([]phaseHeat, 0, len(z.phases)+1)
 	for _, ph := range z.phases {
-		op, err := z.operate(ph, model)
-		if err != nil {
-			return nil, err
+		parts := []*phase{ph}
+		if ph.working() && ph.spec.Dwell > 0 {
+			parts = append(parts, z.dwell(ph))
 		}
-		loads, driving, err := z.phaseLoads(ph, op)
-		if err != nil {
-			return nil, err
+		for i, p := range parts {
+			op, err := z.operate(p, model)
+			if err != nil {
+				return nil, err
+			}
+			loads, driving, err := z.phaseLoads(p, op, p.loads[:0])
+			if err != nil {
+				return nil, err
+			}
+			p.loads = loads
+			t := p.time
+			if i == 0 && len(parts) > 1 {
+				t = ph.move
+			}
+			out = append(out, phaseHeat{ph: p, name: p.name, time: t, op: op, loads: loads, driving: driving})
 		}
-		out = append(out, phaseHeat{name: ph.name, time: ph.time, op: op, loads: loads, driving: driving})
 	}
 	if z.idle > 0 {
 		op, err := z.operate(nil, model)
 		if err != nil {
 			return nil, err
 		}
-		loads, _, err := z.phaseLoads(nil, op)
+		loads, _, err := z.phaseLoads(nil, op, z.idleLoads[:0])
 		if err != nil {
 			return nil, err
 		}
+		z.idleLoads = loads
 		out = append(out, phaseHeat{name: "idle between cycles", time: z.idle, op: op, loads: loads})
 	}
 	return out, nil
@@ -54,9 +69,17 @@ func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 // the flow control's throttling, the line and valve drops, the center's
 // drop when unloading, and the actuators' friction; and the power of loads
 // that drive their actuators (a lowered weight), which the counterbalance
-// valve turns into heat as well.
-func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power, error) {
-	var loads []thermal.Load
+// valve turns into heat as well. It appends the loads to loads, the
+// phase's buffer from the last pass (whose loads the last pass no longer
+// needs).
+func (z *sizer) phaseLoads(ph *phase, op operating, loads []thermal.Load) ([]thermal.Load, units.Power, error) {
+	if loads == nil {
+		n := 4 // pump, relief, center, bleed-off
+		if ph != nil {
+			n += 2 + 4*len(ph.moves) // the lines; each move's flow control, ways in and out, and its own
+		}
+		loads = make([]thermal.Load, 0, n)
+	}
 	add := func(l thermal.Load, err error) error {
 		if err == nil && l.Power > 0 {
 			loads = append(loads, l)
@@ -93,7 +116,7 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 			// Each valve throttles from what the highest load leaves at
 			// the valves down to its own actuator's pressure.
 			dp := op.throttle + ph.load - (m.port + m.supplyDrop)
-			if err := add(thermal.Throttling(m.act.spec.Name+" flow control", max(dp, 0), m.flow*units.Flow(share))); err != nil {
+			if err := add(thermal.Throttling(m.act.labels.control, max(dp, 0), m.flow*units.Flow(share))); err != nil {
 				return nil, 0, err
 			}
 		}
@@ -125,21 +148,21 @@ func (z *sizer) phaseLoads(ph *phase, op operating) ([]thermal.Load, units.Power
 // counterbalance valve and the outlet path turn into heat, which it
 // returns.
 func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Power, error) {
-	name := m.act.spec.Name
-	if err := add(thermal.LineLoss(name+" valve and lines in", m.supplyDrop, m.capFlow)); err != nil {
+	name := &m.act.labels
+	if err := add(thermal.LineLoss(name.in, m.supplyDrop, m.capFlow)); err != nil {
 		return 0, err
 	}
 	if m.overruns() {
 		p := (-m.forces.Total()).TimesVelocity(m.speed)
 		if m.holding == nil {
-			return p, add(thermal.Other(name+" lowered load", p, components.PhysicsRule("P = F·v of the load driving the actuator")))
+			return p, add(thermal.Other(name.lowered, p, components.PhysicsRule("P = F·v of the load driving the actuator")))
 		}
-		if err := add(thermal.LineLoss(name+" valve and lines out", m.returnDrop, m.outFlow())); err != nil {
+		if err := add(thermal.LineLoss(name.out, m.returnDrop, m.outFlow())); err != nil {
 			return 0, err
 		}
-		return p, add(thermal.Throttling(name+" counterbalance valve", m.holding.Throttled, m.outFlow()))
+		return p, add(thermal.Throttling(name.holder, m.holding.Throttled, m.outFlow()))
 	}
-	if err := add(thermal.LineLoss(name+" valve and lines out", m.returnDrop, m.outFlow())); err != nil {
+	if err := add(thermal.LineLoss(name.out, m.returnDrop, m.outFlow())); err != nil {
 		return 0, err
 	}
 	if m.hold() || m.port <= 0 || m.capFlow <= 0 {
@@ -151,9 +174,9 @@ func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Pow
 		}
 		// (1 − η) of the pressure's force on the pump's flow: the cap flow,
 		// or on a regenerative extend the rod section's (RegenerativeFor).
-		return 0, add(thermal.MotorLoss(name+" seal friction", m.port, m.flow, m.act.size.SealEfficiency))
+		return 0, add(thermal.MotorLoss(name.seal, m.port, m.flow, m.act.size.SealEfficiency))
 	}
-	return 0, add(thermal.MotorLoss(name+" motor losses", m.port-m.back, m.capFlow, motorVolumetric*motorMechanical))
+	return 0, add(thermal.MotorLoss(name.motor, m.port-m.back, m.capFlow, motorVolumetric*motorMechanical))
 }
 
 // balance is the heat balance of a pass.

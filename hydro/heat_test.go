@@ -3,6 +3,7 @@ package hydro
 import (
 	"math"
 	"testing"
+	"time"
 
 	"github.com/hydrosize/hydrosize/units"
 )
@@ -52,5 +53,52 @@ func TestPhaseEnergyBalance(t *testing.T) {
 					name, ph.Name, ph.Heat.Value, max(work, 0), out, ph.Shaft.Value, max(-work, 0), in)
 			}
 		}
+	}
+}
+
+// TestDwellAfterAMove: once the ejector is back, its phase dwells 2 s with
+// nothing moving: the valves are centred and the load-sensing pump stands
+// by, as between cycles; the 2 s are not charged at the working point of
+// the move, neither to the drive's RMS nor to the heat.
+func TestDwellAfterAMove(t *testing.T) {
+	r := demoReport(t)
+	rows := map[string]PhaseResult{}
+	for _, ph := range r.Phases {
+		rows[ph.Name] = ph
+	}
+	back, dwell, idle := rows["ejector back"], rows["ejector back, dwell"], rows["idle between cycles"]
+	if dwell.Time != 2*time.Second || dwell.Mode != idle.Mode || dwell.Shaft != idle.Shaft {
+		t.Errorf("dwell %+v; want 2 s like the idle time: %v, %v", dwell, idle.Mode, idle.Shaft.Value)
+	}
+	if m := r.Actuators[1].Moves[1]; back.Time != m.Time {
+		t.Errorf("ejector back lasts %v, its move %v", back.Time, m.Time)
+	}
+	var cycle time.Duration
+	for _, ph := range r.Phases {
+		cycle += ph.Time
+	}
+	if cycle != 90*time.Second {
+		t.Errorf("the rows add up to %v, want the 90 s cycle", cycle)
+	}
+}
+
+// TestAccumulatorDrawsOnlyWhileMoving: the clamp's accumulator covers the
+// quick strokes; the pump it leaves keeps up with the cycle's mean flow,
+// the oil the strokes draw (flow × the time they move, not the dwell after
+// them) over the cycle's hour share.
+func TestAccumulatorDrawsOnlyWhileMoving(t *testing.T) {
+	r, err := Size(clampSpec())
+	if err != nil {
+		t.Fatal(err)
+	}
+	var oil float64 // m³ a cycle
+	for _, a := range r.Actuators {
+		for _, m := range a.Moves {
+			oil += float64(m.Flow.Value) * m.Time.Seconds()
+		}
+	}
+	mean := oil / 60 // 60 cycles an hour: a 60 s cycle
+	if a := r.Accumulator; a == nil || math.Abs(float64(a.PumpFlow.Value)-mean) > 0.01*mean {
+		t.Errorf("pump flow with the accumulator %v, want the mean %v", r.Accumulator.PumpFlow.Value, units.Flow(mean))
 	}
 }

@@ -171,7 +171,7 @@ func (z *sizer) holdingResult(a *act) (*Holding, components.Findings, error) {
 		return nil, nil, err
 	}
 	if a.holder != nil {
-		fs = fs.Merge(a.holder.cb.Findings...)
+		fs = fs.Merge(about(a.holder.cb.Findings, a.spec.Name)...)
 	}
 	return r, fs, nil
 }

@@ -121,14 +121,15 @@ func (l *lineRun) elements() []line.Element {
 	if l.size != "" && l.size[0] == 'h' {
 		rough = 0 // a hose bore is taken as smooth
 	}
-	els := []line.Element{line.Pipe{Name: l.name, Length: l.length, Bore: l.inner, Roughness: rough}}
+	els := make([]line.Element, 0, 3)
+	if l.service == "suction" {
+		els = append(els, line.Fitting{Name: "tank outlet", Kind: line.Entrance, Bore: l.inner})
+	}
+	els = append(els, line.Pipe{Name: l.name, Length: l.length, Bore: l.inner, Roughness: rough})
 	if l.bends > 0 {
 		els = append(els, line.Fitting{Name: l.name + " bends", Kind: line.Elbow90, Bore: l.inner, Count: l.bends})
 	}
-	switch l.service {
-	case "suction":
-		els = append([]line.Element{line.Fitting{Name: "tank outlet", Kind: line.Entrance, Bore: l.inner}}, els...)
-	case "return":
+	if l.service == "return" {
 		els = append(els, line.Fitting{Name: "tank inlet", Kind: line.Exit, Bore: l.inner})
 	}
 	return els

@@ -143,10 +143,14 @@ type MoveResult struct {
 }
 
 // PhaseResult is one phase of the cycle as the pump sees it, with its
-// pressure budget.
+// pressure budget. A phase whose moves are followed by a dwell gives two
+// rows: the moves ("eject"), then the dwell with their valves centred and
+// its holds still held ("eject, dwell"); the idle time between cycles is
+// the last row ("idle between cycles"). The rows' times add up to the
+// cycle.
 type PhaseResult struct {
 	Name     string                `json:"name"`
-	Time     time.Duration         `json:"time"`     // moves and dwell
+	Time     time.Duration         `json:"time"`     // how long the pump runs so
 	Demand   Value[units.Flow]     `json:"demand"`   // flow the moving actuators take
 	Load     Value[units.Pressure] `json:"load"`     // highest actuator inlet pressure
 	Pump     Value[units.Pressure] `json:"pump"`     // pump outlet pressure

@@ -36,6 +36,8 @@ type sizer struct {
 	phases []*phase
 	idle   time.Duration // per cycle, between cycles
 
+	idleLoads []thermal.Load // the idle time's heat loads, in a buffer each pass fills again
+
 	// The state a pass leaves for the next.
 	oil      line.Oil
 	tOil     units.Temperature

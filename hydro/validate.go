@@ -432,9 +432,10 @@ func (m Move) checkHold(ps *problems, mp string) {
 
 func (s Supply) check(ps *problems) {
 	switch {
-	case s.Mains != 0 && s.EngineSpeed != 0:
-		ps.rangeErr("supply.engine_speed", s.EngineSpeed.String(), "not given with mains: give the mains frequency or the engine speed")
 	case s.Mains != 0:
+		if s.EngineSpeed != 0 {
+			ps.rangeErr("supply.engine_speed", s.EngineSpeed.String(), "not given with mains: give the mains frequency or the engine speed")
+		}
 		if math.Abs(s.Mains.Hertz()-50) > 0.5 && math.Abs(s.Mains.Hertz()-60) > 0.5 {
 			ps.rangeErr("supply.mains", s.Mains.String(), "50 Hz or 60 Hz")
 		}
@@ -699,7 +700,7 @@ func (d Design) check(ps *problems, site Site, supply Supply) {
 			ps.rangeErr(p+"pressure_range", "{…}", "not given with pressure: give one pressure or a range to search")
 		}
 	}
-	if r := d.PressureRange; r != nil && d.Pressure == 0 {
+	if r := d.PressureRange; r != nil {
 		r.check(ps)
 	}
 	optional(ps, p+"pump_speed", d.PumpSpeed)

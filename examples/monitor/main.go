@@ -47,8 +47,9 @@
 //     show — reaches the -watch share of the bypass setting (the element
 //     is loading; our choice of 75 % as the default).
 //
-// A line that cannot be read is reported with its number, and the monitor
-// goes on. A summary line ends the output. After its first sight of a code
+// A line that cannot be read — a column that is not a finite number, a
+// temperature below absolute zero, a negative Δp — is reported with its
+// number, and the monitor goes on. A summary line ends the output. After its first sight of a code
 // the monitor allocates nothing per line.
 //
 // This is a monitor, not a protection: it does not replace the filter's

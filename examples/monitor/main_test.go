@@ -123,6 +123,23 @@ func TestBadLines(t *testing.T) {
 	}
 }
 
+// TestImpossibleValues: a temperature or Δp that cannot be (not a number,
+// infinite, below absolute zero, a negative drop) is refused with its
+// column, never printed as "NaN °C" or "+Inf bar".
+func TestImpossibleValues(t *testing.T) {
+	in := "a, 100, 50, 10, NaN, 0.5\nb, 100, 50, 10, 40, Inf\nc, 100, 50, 10, -300, 0.5\nd, 100, 50, 10, 40, -0.5\ne, 100, 50, 10, 40, 0.5\n"
+	out := runMonitor(t, in, "-")
+	for _, want := range []string{"line 1: cannot read: column 5", "line 2: cannot read: column 6", "line 3: cannot read: column 5",
+		"line 4: cannot read: column 6", "1 samples, 0 with an alarm, 4 not read\n"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	if strings.Contains(out, "NaN") || strings.Contains(out, "Inf") {
+		t.Errorf("output quotes a number that is none:\n%s", out)
+	}
+}
+
 func TestFile(t *testing.T) {
 	path := filepath.Join(t.TempDir(), "log.csv")
 	if err := os.WriteFile(path, []byte("f1, 1500, 400, 50, 50, 0.5\n"), 0o600); err != nil {
@@ -227,5 +244,16 @@ func FuzzLine(f *testing.F) {
 		if bytes.Count(out, []byte{'\n'}) > 1+bytes.Count(line, []byte{'\n'}) || out[len(out)-1] != '\n' {
 			t.Fatalf("%q gave %q", line, out)
 		}
+		if rest := out[len(stampOf(line)):]; bytes.Contains(rest, []byte("NaN")) || bytes.Contains(rest, []byte("Inf")) {
+			t.Fatalf("%q gave %q: a number that is none", line, out)
+		}
 	})
+}
+
+// stampOf is a line's first column, as the monitor echoes it.
+func stampOf(line []byte) []byte {
+	if i := bytes.IndexByte(line, ','); i >= 0 {
+		line = line[:i]
+	}
+	return bytes.TrimSpace(line)
 }

@@ -3,6 +3,7 @@ package main
 import (
 	"bytes"
 	"errors"
+	"math"
 	"strconv"
 
 	"github.com/hydrosize/hydrosize/fluid"
@@ -89,13 +90,29 @@ func (c *config) parse(line []byte) (reading, error) {
 		if err != nil {
 			return r, &columnError{col: i + 2, err: err}
 		}
+		if math.IsNaN(v) || math.IsInf(v, 0) {
+			return r, &columnError{col: i + 2, err: errNotFinite}
+		}
 		x[i] = v
 	}
 	r.counts = [3]float64{x[0], x[1], x[2]}
 	r.temp = units.Temperature(c.temp.si(x[3]))
 	r.dp = units.Pressure(c.dp.si(x[4]))
+	switch {
+	case !(r.temp >= 0) || math.IsInf(float64(r.temp), 0):
+		return r, &columnError{col: 5, err: errColdest}
+	case !(r.dp >= 0) || math.IsInf(float64(r.dp), 0):
+		return r, &columnError{col: 6, err: errNegativeDrop}
+	}
 	return r, nil
 }
+
+// Values no sample can have.
+var (
+	errNotFinite    = errors.New("want a finite number")
+	errColdest      = errors.New("want a temperature above absolute zero")
+	errNegativeDrop = errors.New("want a pressure drop of 0 or more")
+)
 
 // columnError reports a column that is not a number.
 type columnError struct {
