@@ -187,7 +187,7 @@ func TestCrossCheckDemo(t *testing.T) {
 
 	// The family's own sizing of the pressing stroke, at the pressure the
 	// report leaves for it, picks the same bore.
-	avail := r.Basis.Pressure.Value - lsMargin - (pressing.Pressure.Value - pressing.Pressure.Value) // margin only: supply drops below
+	avail := r.Basis.Pressure.Value - lsMargin // less the supply drops, below
 	for _, b := range r.Phases[1].Budget {
 		if b.Path == "supply" {
 			avail -= b.Drop.Value
@@ -244,6 +244,33 @@ func TestCrossCheckDemo(t *testing.T) {
 	nu, _ := f.Viscosity(r.Heat.Running.Value)
 	if r.Fluid.Hot.Value != nu {
 		t.Errorf("running viscosity %v, fluid says %v", r.Fluid.Hot.Value, nu)
+	}
+
+	// Relief: 10 % above the highest working pump pressure (common practice).
+	near(t, "relief (bar)", r.Valves.Relief.Value.Bar(), 1.1*r.Pump.Pressure.Value.Bar(), 1e-12)
+	// Counterbalance on the press's annulus: the ram's weight over the
+	// annulus, 1800 kg × 9.80665 m/s² / (π/4·(0.16² − 0.125²) m²), set at
+	// 1.3 × that (common practice); on the regenerative approach its
+	// outlet joins the cap side, so the poppet's balance is
+	// (p_load + φ·p_x) + 3·p_x = p_set + (p_x + Δp), Δp the annulus oil's
+	// way across (outlet less inlet in the report), p_load the approach's
+	// own load, 12.75 kN over the annulus.
+	h := press.Holding
+	load := 1800 * 9.80665 / float64(aAnn)
+	near(t, "held load (Pa)", float64(h.Load.Value), load, 1e-12)
+	near(t, "counterbalance setting (Pa)", float64(h.Setting.Value), 1.3*load, 1e-12)
+	approach := press.Moves[0]
+	px, dp := float64(approach.Pressure.Value), float64(approach.Back.Value-approach.Pressure.Value)
+	pLoad := -float64(approach.Force.Value) / float64(aAnn)
+	phi := float64(aCap / aAnn)
+	near(t, "poppet balance (Pa)", pLoad+phi*px+3*px, float64(h.Setting.Value)+px+dp, 1e-12)
+	// Lines: v = Q/(π/4·d²) at the chosen bore, within the service's limit.
+	for _, l := range r.Lines {
+		v := float64(l.Flow.Value) / float64(units.CircleArea(l.Bore.Chosen))
+		near(t, l.Name+" velocity (m/s)", l.Velocity.Value.MetresPerSecond(), v, 1e-12)
+		if l.Velocity.Value > l.Velocity.Limit*(1+1e-12) {
+			t.Errorf("%s: %v above its %v limit", l.Name, l.Velocity.Value, l.Velocity.Limit)
+		}
 	}
 
 	// Cleanliness held: C = R/(Q·(1 − 1/β)) per mL, R per minute, Q in
