@@ -416,7 +416,8 @@ func (r Report) cleanSection(sys units.System) section {
 		for i, b := range c.Required {
 			beta[i] = strconv.FormatFloat(b, 'g', 3, 64)
 		}
-		pairs = append(pairs, [3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), rule(c.RequiredRule)},
+		pairs = append(pairs, vq(sys, "mean flow through the return filter", c.Flow),
+			[3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), rule(c.RequiredRule)},
 			[3]string{"code the filtration holds", c.Held.String() + ", " + verdict, "hydro/contamination steady state"})
 	}
 	s.kv(pairs...)
