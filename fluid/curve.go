@@ -52,7 +52,7 @@ func CurveThrough(t1 units.Temperature, v1 units.KinematicViscosity, t2 units.Te
 	if math.Abs(float64(t2-t1)) < minFitSpan {
 		return Curve{}, validate.Fail(fn, "t2", t2, "at least 1 K from t1 = "+t1.String())
 	}
-	x1, x2 := math.Log10(float64(t1)), math.Log10(float64(t2))
+	x1, x2 := log10T(t1), log10T(t2)
 	y1, y2 := loglogZ(v1.SquareMillimetresPerSecond()), loglogZ(v2.SquareMillimetresPerSecond())
 	b := (y1 - y2) / (x2 - x1)
 	if !(b > 0) {
@@ -89,13 +89,27 @@ func newCurve(a, b float64) Curve {
 	return c
 }
 
-// The D341 log log Z of the viscosity limits, computed once at start-up and
-// never changed: a curve's valid range is where it reaches them, so
-// building a curve does not recompute these constants.
+// The D341 log log Z of the viscosity limits, and the logarithms of the
+// data-sheet temperatures 40 °C and 100 °C, computed once at start-up and
+// never changed: building a curve does not recompute these constants.
 var (
 	loglogZMinViscosity = loglogZ(MinViscosity.SquareMillimetresPerSecond())
 	loglogZMaxViscosity = loglogZ(MaxViscosity.SquareMillimetresPerSecond())
+	log10T40            = math.Log10(float64(t40))
+	log10T100           = math.Log10(float64(t100))
 )
+
+// log10T returns log₁₀ of t in kelvins, the same float64 as math.Log10,
+// from the constants above for 40 °C and 100 °C.
+func log10T(t units.Temperature) float64 {
+	switch t {
+	case t40:
+		return log10T40
+	case t100:
+		return log10T100
+	}
+	return math.Log10(float64(t))
+}
 
 // rangeFinite reports whether the curve's valid range is a finite,
 // non-empty span above 0 K.

@@ -403,3 +403,12 @@ func BenchmarkCurveThrough(b *testing.B) {
 		sinkV += units.KinematicViscosity(c.B())
 	}
 }
+
+// TestLog10T: the constant logarithms of 40 °C and 100 °C are math.Log10's.
+func TestLog10T(t *testing.T) {
+	for _, tt := range []units.Temperature{celsius(40), celsius(100), t40, t100, celsius(60), 1} {
+		if got, want := log10T(tt), math.Log10(float64(tt)); got != want {
+			t.Errorf("log10T(%v) = %.17g, want %.17g", tt, got, want)
+		}
+	}
+}

@@ -86,7 +86,7 @@ func (z *sizer) report(res *result) (Report, error) {
 		return Report{}, err
 	}
 	fs = append(fs, f...)
-	if r.Cleanliness, f, err = z.cleanliness(res.lines, nuRun, nuCold); err != nil {
+	if r.Cleanliness, f, err = z.cleanliness(res.lines, res.heats, nuRun, nuCold); err != nil {
 		return Report{}, err
 	}
 	fs = append(fs, f...)

@@ -7,11 +7,12 @@ import (
 )
 
 // cleanliness works out the target code (contamination.RecommendTarget),
-// the filters, the β their elements need against the ingress, and the code
-// the filtration holds (contamination.SteadyState), with each filter's
-// clean drop against its bypass setting running and at a cold start
+// the filters, the β their elements need against the ingress with the mean
+// flow through the return filter over the cycle, and the code the
+// filtration holds (contamination.SteadyState), with each filter's clean
+// drop against its bypass setting running and at a cold start
 // (contamination.CheckBypass).
-func (z *sizer) cleanliness(ml mainLines, nuRun, nuCold units.KinematicViscosity) (CleanlinessResult, components.Findings, error) {
+func (z *sizer) cleanliness(ml mainLines, hs []phaseHeat, nuRun, nuCold units.KinematicViscosity) (CleanlinessResult, components.Findings, error) {
 	cl := z.spec.Cleanliness
 	comp := z.kind.component
 	if c, ok := componentNamed(cl.MostSensitive); ok {
@@ -29,18 +30,23 @@ func (z *sizer) cleanliness(ml mainLines, nuRun, nuCold units.KinematicViscosity
 	}
 	r := CleanlinessResult{Target: t.Code, Basis: t.Basis.String(), Rule: t.Rule}
 	fs := t.Findings
+	if in.Override != nil { // the family's Override is the spec's target
+		r.Rule = components.CallerRule("cleanliness.target")
+		fs = ours(fs, t.Rule, r.Rule)
+	}
 	ingress, known, err := z.ingress()
 	if err != nil {
 		return r, nil, &FieldError{Path: "cleanliness.sample", Err: err}
 	}
 	rating := ""
 	if known {
+		r.Flow = Value[units.Flow]{returnFiltered(hs), filterFlowRule}
 		var f components.Findings
 		rating, _, f, err = z.filtration(&r, ingress, t.Code)
 		if err != nil {
 			return r, nil, &FieldError{Path: "cleanliness", Err: err}
 		}
-		fs = fs.Merge(f...)
+		fs = fs.Merge(ours(f, components.CallerRule("target"), r.Rule)...) // contamination.Compare's "target" is the one chosen above
 	}
 	for _, f := range z.filters(ml) {
 		fr, ff, err := z.filterCheck(f, rating, nuRun, nuCold)
@@ -85,12 +91,12 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 	sizes := [3]units.Length{4 * units.Micrometre, 6 * units.Micrometre, 14 * units.Micrometre}
 	beta := filterBeta
 	for i := range 3 {
-		b, err := contamination.BetaForTarget(ingress[i], z.delivery, target.N[i].Scale)
+		b, err := contamination.BetaForTarget(ingress[i], r.Flow.Value, target.N[i].Scale)
 		if err != nil {
 			fs = fs.Merge(components.NewFinding(components.Caution, components.Contamination, "hydro.target-unreachable",
 				components.PhysicsRule("particle balance of a full-flow filter"),
 				"No full-flow filter at %v holds the target %v at %v against this ingress: add an off-line filter or cut the ingress.",
-				z.delivery, target.String(), contamination.Counter.SizeLabel(i)))
+				r.Flow.Value, target.String(), contamination.Counter.SizeLabel(i)))
 			b = 1000
 		}
 		r.Required[i] = b
@@ -108,7 +114,7 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 	}
 	var held [3]float64
 	for i := range 3 {
-		c, err := contamination.SteadyState(ingress[i], z.delivery, credit(x, sizes[i], beta))
+		c, err := contamination.SteadyState(ingress[i], r.Flow.Value, credit(x, sizes[i], beta))
 		if err != nil {
 			return "", 0, nil, err
 		}
@@ -127,6 +133,33 @@ func (z *sizer) filtration(r *CleanlinessResult, ingress [3]float64, target cont
 }
 
 var betaRule = components.PhysicsRule("particle balance of a full-flow filter: β = 1/(1 − R/(Q·C)) (hydro/contamination)")
+
+// returnFiltered is the mean flow through the return filter over the
+// cycle: what the actuators send back while they move, what passes the
+// relief, and what a center or bleed-off sends to tank; a pump stroked
+// back to standby sends almost none. The particle balance is linear in the
+// flow through the filter, so with a reservoir that smooths the
+// concentration the mean flow is the one to hold it with.
+func returnFiltered(hs []phaseHeat) units.Flow {
+	var oil, total float64 // m³ and s a cycle
+	for _, h := range hs {
+		q := h.op.relief + h.op.bleed
+		if h.op.center > 0 {
+			q += h.op.point.Flow // unloaded through the center
+		}
+		if h.ph != nil {
+			q += h.ph.ret
+		}
+		oil += float64(q) * h.time.Seconds()
+		total += h.time.Seconds()
+	}
+	if total == 0 {
+		return 0
+	}
+	return units.Flow(oil / total)
+}
+
+var filterFlowRule = components.PhysicsRule("mean flow to tank through the return filter over the cycle")
 
 // belowRatingBeta is the β credited to an element below its rated size: 2,
 // half the particles caught (our choice, conservative: makers' β curves

@@ -88,5 +88,5 @@ func ExampleSweep() {
 	}
 	// Output:
 	// 125 bar press 180 mm pump 140 cm³/rev motor 5.5 kW
-	// 200 bar press 140 mm pump 112 cm³/rev motor 5.5 kW
+	// 200 bar press 140 mm pump 71 cm³/rev motor 5.5 kW
 }

@@ -36,7 +36,7 @@ func counterbalanceHolds(t *testing.T, s Spec) {
 		t.Fatal("the boom has no load-holding valve")
 	}
 	c := actuator.Cylinder{Bore: boom.Bore.Chosen, Rod: boom.Rod.Chosen}
-	weight := 12000*units.PoundForce + (900 * units.PoundMass).TimesAcceleration(units.StandardGravity)*units.Force(math.Sin(55*math.Pi/180))
+	weight := 12000*units.PoundForce + (900*units.PoundMass).TimesAcceleration(units.StandardGravity)*units.Force(math.Sin(55*math.Pi/180))
 	held := units.Pressure(float64(weight) / float64(c.CapArea()))
 	if boom.Holding.Load.Value < held*(1-1e-12) {
 		t.Errorf("held load %v, below the %v the hold puts on the cap side", boom.Holding.Load.Value, held)

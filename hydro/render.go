@@ -86,7 +86,7 @@ func q(sys units.System, v any) string {
 	case units.Flow:
 		return sys.FormatFlow(x)
 	case units.Velocity:
-		return sys.FormatVelocity(x)
+		return sys.FormatLineVelocity(x) // every other velocity in a report is a line's; piston speeds go through FormatPistonSpeed
 	case units.Displacement:
 		return sys.FormatDisplacement(x)
 	case units.RotationalSpeed:
@@ -233,7 +233,7 @@ func (r Report) actuatorSection(sys units.System) section {
 				dir += ", regenerative"
 			}
 			load := q(sys, m.Force.Value)
-			speed := q(sys, m.Speed.Value)
+			speed := sys.FormatPistonSpeed(m.Speed.Value)
 			if a.Kind == "motor" {
 				load, speed = q(sys, m.Torque.Value), q(sys, m.ShaftSpeed.Value)
 			}
@@ -416,7 +416,8 @@ func (r Report) cleanSection(sys units.System) section {
 		for i, b := range c.Required {
 			beta[i] = strconv.FormatFloat(b, 'g', 3, 64)
 		}
-		pairs = append(pairs, [3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), rule(c.RequiredRule)},
+		pairs = append(pairs, vq(sys, "mean flow through the return filter", c.Flow),
+			[3]string{"β needed at ≥4/≥6/≥14 µm(c)", strings.Join(beta, " / "), rule(c.RequiredRule)},
 			[3]string{"code the filtration holds", c.Held.String() + ", " + verdict, "hydro/contamination steady state"})
 	}
 	s.kv(pairs...)

@@ -282,6 +282,7 @@ type CleanlinessResult struct {
 	Filters      []FilterResult     `json:"filters"`
 	Held         contamination.Code `json:"held"`               // the code the filtration holds (with a known ingress)
 	Meets        bool               `json:"meets"`              //
+	Flow         Value[units.Flow]  `json:"flow"`               // the mean flow through the return filter over the cycle, which the particle balance runs on
 	Required     [3]float64         `json:"required_beta"`      // β needed at ≥4, ≥6, ≥14 µm(c)
 	RequiredRule components.Rule    `json:"required_beta_rule"` // the rule of Required
 }

@@ -4,6 +4,8 @@ import (
 	"encoding/json"
 	"regexp"
 	"testing"
+
+	"github.com/hydrosize/hydrosize/hydro/contamination"
 )
 
 // specPath is the form of a caller's rule in a report: a JSON path into
@@ -39,8 +41,11 @@ func TestCallerRulesNameTheSpec(t *testing.T) {
 	us.Units = "us"
 	pressureFilter := demoSpec(t)
 	pressureFilter.Cleanliness.MostSensitive = "servo valve"
+	target := demoSpec(t)
+	target.Cleanliness.Target = contamination.Code{Form: contamination.Counter,
+		N: [3]contamination.Number{{Scale: 15}, {Scale: 13}, {Scale: 10}}}
 	for name, s := range map[string]Spec{"demo": demoSpec(t), "us": us, "crane": craneSpec(t), "clamp": clampSpec(),
-		"pressure filter": pressureFilter} {
+		"pressure filter": pressureFilter, "target given": target} {
 		r, err := Size(s)
 		if err != nil {
 			t.Fatal(err)

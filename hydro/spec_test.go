@@ -151,7 +151,7 @@ func TestParseSpecBadJSON(t *testing.T) {
 		// Text that is not JSON.
 		{"syntax", `"stroke": "950 mm",`, `"stroke": "950 mm",,`, []string{"actuators[0]"}, units.ErrSyntax},
 		{"cut short", `"units": "metric",`, `"units": "metric`, []string{"units"}, units.ErrSyntax},
-		{"text after", `Demo machine of our own: a vertical baling press with a regenerative fast approach, a slow pressing stroke with a hold, and a horizontal ejector."]
+		{"text after", `Demo machine of our own: a vertical baling press with a regenerative fast approach, a slow pressing stroke with a hold, and a horizontal ejector whose platen runs on guides."]
 }`, `x"]} {}`, []string{""}, units.ErrSyntax},
 	}
 	data := demoJSON(t)
@@ -236,7 +236,7 @@ func TestValidateProblems(t *testing.T) {
 		{"incline without inclined", func(s *Spec) { s.Actuators[1].InclineDegrees = 10 }, []string{"actuators[1].incline_deg"}},
 		{"incline too steep", func(s *Spec) { inclined(s); s.Actuators[1].InclineDegrees = 120 }, []string{"actuators[1].incline_deg"}},
 		{"mount unknown", func(s *Spec) { s.Actuators[0].Mount = "glue" }, []string{"actuators[0].mount"}},
-		{"free rod on a clevis", func(s *Spec) { s.Actuators[1].RodEnd = "free" }, []string{"actuators[1].rod_end"}},
+		{"free rod on a clevis", func(s *Spec) { s.Actuators[1].Mount, s.Actuators[1].RodEnd = "clevis", "free" }, []string{"actuators[1].rod_end"}},
 		{"area ratio below 1", func(s *Spec) { s.Actuators[0].AreaRatio = 0.9 }, []string{"actuators[0].area_ratio"}},
 		{"friction above 1", func(s *Spec) { s.Actuators[1].Friction = 1.5 }, []string{"actuators[1].guide_friction"}},
 		{"mass negative", func(s *Spec) { s.Actuators[1].Mass = -1 }, []string{"actuators[1].moving_mass"}},

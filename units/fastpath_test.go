@@ -99,3 +99,18 @@ func TestSpellTable(t *testing.T) {
 		}
 	}
 }
+
+// TestTempScaleIndex: every temperature point spelling's scale is one of
+// tempScales, so the one-byte index in a Quantity loses nothing.
+func TestTempScaleIndex(t *testing.T) {
+	for i := range unitTable {
+		u := &unitTable[i]
+		if u.ref != refPoint {
+			continue
+		}
+		s := scaleOf(resolvedOf(u))
+		if tempScales[scaleIndex(s)] != s {
+			t.Errorf("%q: scale %+v is not in tempScales", u.sym, s)
+		}
+	}
+}

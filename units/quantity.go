@@ -17,7 +17,7 @@ type Quantity struct {
 	value   float64   // SI value, offset applied for a temperature point
 	offset  float64   // the offset applied (temperature points only)
 	reading float64   // a temperature point's number on its own scale
-	scale   tempScale // and that scale
+	scale   uint8     // and that scale, an index in tempScales
 	dim     Dimension // SI dimension
 	ref     reference // gauge, absolute or temperature point of a lone spelling
 }
@@ -37,7 +37,11 @@ func Parse(s string) (Quantity, error) {
 			at++
 		}
 		if i, found := fastSpellings.get(in[at:]); found {
-			if q, ok := registeredQuantity(num, &unitTable[i]); ok {
+			u := &unitTable[i]
+			if v := float64(num * u.factor); v-v == 0 && u.ref != refPoint && (num >= 0 || (u.factor > 0 && u.ref&refAbsolute == 0)) {
+				return Quantity{value: v, dim: u.dim, ref: u.ref}, nil // quantityOf, built in place
+			}
+			if q, ok := registeredQuantity(num, u); ok {
 				return q, nil
 			}
 		} else if at < len(in) {
@@ -92,6 +96,9 @@ func finishQuantity(fn, s, in string, num float64, at int, r resolved, f failure
 	}
 	if f.err != nil {
 		return Quantity{}, f.at(fn, s, at)
+	}
+	if v := float64(num * r.factor); v-v == 0 && r.ref != refPoint && (v >= 0 || r.ref&refAbsolute == 0) {
+		return Quantity{value: v, dim: r.dim, ref: r.ref}, nil // quantityOf, built in place
 	}
 	q := quantityOf(num, r)
 	if math.IsInf(q.value, 0) || math.IsNaN(q.value) {
@@ -174,7 +181,7 @@ func (q Quantity) in(fn, unit string) (float64, *typeInfo, error) {
 	}
 	v := q.value
 	if q.ref == refPoint && r.ref == refPoint {
-		v = convertScale(q.reading, q.scale, scaleOf(r))
+		v = convertScale(q.reading, tempScales[q.scale], scaleOf(r))
 	} else {
 		v = (v - q.offset) / r.factor
 	}
@@ -256,7 +263,7 @@ func quantityOf(x float64, r resolved) Quantity {
 	if r.ref == refPoint {
 		q.value += r.offset
 		q.offset = r.offset
-		q.reading, q.scale = x, scaleOf(r)
+		q.reading, q.scale = x, scaleIndex(scaleOf(r))
 	}
 	return q
 }
@@ -293,4 +300,18 @@ func (q Quantity) as(t *typeInfo) (float64, error) {
 		return 0, &RangeError{Func: fn, Param: "q", Value: q.String(), Valid: t.valid()}
 	}
 	return v, nil
+}
+
+// tempScales lists the temperature scales a Quantity's scale index names
+// (K, °C, °F, °R; see tempScale), so that a Quantity carries one byte for
+// its scale rather than three numbers. Built at start-up, never changed.
+var tempScales = [...]tempScale{{100, 27315, 100}, {1, 0, 1}, {9, 160, 5}, {180, 49167, 100}}
+
+func scaleIndex(t tempScale) uint8 {
+	for i, u := range tempScales {
+		if u == t {
+			return uint8(i)
+		}
+	}
+	return 0 // unreachable: scaleOf returns one of tempScales
 }

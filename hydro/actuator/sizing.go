@@ -445,10 +445,21 @@ func (n noRod) findings(rods components.Series[units.Length]) components.Finding
 	return rc.Findings
 }
 
+// maxRodShare is the largest rod a bore takes, as a share of the bore,
+// when the least area ratio does not ask for more: 0.8 (our choice:
+// catalogue cylinders pair rods up to about 0.7 × the bore; beyond 0.8 the
+// annulus leaves little room for the piston's seals and the rod's guide).
+const maxRodShare = 0.8
+
+// rodCeiling is the largest rod bore b takes: maxRodShare of it, or 1.25
+// × least, the least rod the area ratio asks (a rod series' steps are
+// below 25 %), when that is more.
+func rodCeiling(b, least units.Length) units.Length { return max(maxRodShare*b, 1.25*least) }
+
 // tryBore picks the rod for bore b: the smallest standard rod giving at
 // least area ratio phi and, when d.Buckling is set, passing the buckling
-// check. ok is false when no standard rod below the bore does; the fit's
-// rod then has Chosen 0.
+// check, no thicker than rodCeiling. ok is false when no standard rod
+// below the bore does; the fit's rod then has Chosen 0.
 func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi float64) (boreFit, bool) {
 	c := Cylinder{Bore: b, Stroke: d.Stroke, Ends: d.Ends, Action: d.Action}
 	least := b * units.Length(math.Sqrt(1-1/phi))
@@ -473,6 +484,10 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 	if bk.Rod.Chosen > rod.Chosen {
 		rod = bk.Rod
 		c.Rod = rod.Chosen
+	}
+	if rod.Chosen > rodCeiling(b, least) {
+		rod.Chosen = 0 // the rod buckling asks leaves no annulus: a larger bore takes it
+		return boreFit{rod: rod}, false
 	}
 	col.Cylinder = c
 	chk, err := col.Check()

@@ -459,3 +459,30 @@ func BenchmarkDutySizeBuckling(b *testing.B) {
 		}
 	}
 }
+
+// TestRodLeavesAnAnnulus: a long, lightly loaded stroke on a clevis needs
+// a thick rod against buckling (the baler's ejector: 9.4 kN at 180 bar,
+// 1200 mm, pinned both ends); its bore then grows with the rod instead of
+// staying at the least bore around it: no rod above 0.8 × its bore (our
+// choice: catalogue cylinders pair rods up to about 0.7 × the bore, and a
+// rod of 70 mm in an 80 mm bore leaves a 5 mm annulus for seals and
+// guide). Each choice is checked on its own: the rod is no thinner than
+// buckling asks (the check passes) and no thicker than 0.8 × the bore.
+func TestRodLeavesAnAnnulus(t *testing.T) {
+	col := Column{Body: Clevis, RodEnd: RodPinned, Retracted: 1400 * mm, Relief: 163 * units.Bar, Yield: 300 * units.Megapascal}
+	d := Duty{Force: 9.4 * units.Kilonewton, Pressure: 180 * units.Bar, Stroke: 1200 * mm, Buckling: &col}
+	r, err := d.Size()
+	if err != nil {
+		t.Fatal(err)
+	}
+	if r.Rod.Chosen > 0.8*r.Bore.Chosen || r.Buckling == nil || !r.Buckling.Safety.OK() {
+		t.Errorf("bore %v, rod %v (%.3g of the bore), buckling %+v", r.Bore.Chosen, r.Rod.Chosen,
+			float64(r.Rod.Chosen/r.Bore.Chosen), r.Buckling)
+	}
+	// A least area ratio that asks for a thick rod still gets it.
+	d = pressDuty()
+	d.AreaRatio = 3 // rod ≥ 0.816 × bore
+	if r, err := d.Size(); err != nil || !r.Bore.OK() || r.AreaRatio != 3 {
+		t.Errorf("area ratio 3: %+v, %v", r.Bore, err)
+	}
+}
