@@ -116,6 +116,7 @@ type phase struct {
 	lineDrop units.Pressure // pressure line drop at the phase's flow
 	retDrop  units.Pressure // return line and filter drop at the phase's return flow
 	loads    []thermal.Load // its heat loads, in a buffer each pass fills again
+	after    *phase         // the dwell after its moves, once made (dwell)
 }
 
 // working reports a phase in which something moves.
