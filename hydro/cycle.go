@@ -21,17 +21,16 @@ type act struct {
 	// Set by each pass.
 	cyl       actuator.Cylinder
 	motor     actuator.Motor
-	size      actuator.CylinderSize // the governing cylinder sizing, without its findings
-	fit       fitted                // the governing sizing's duty, for its findings
-	chosen    chosenSeries          // the chosen bore and rod as series
-	msize     actuator.MotorSize    // the governing motor sizing
-	governing string                // the phase that set the size
-	ok        bool                  // a standard size was found
-	valve     int                   // index into valveSizes, −1 when none is large enough
-	lineA     *lineRun              // work line to the cap side (or motor port A)
-	lineB     *lineRun              // work line to the annulus side (or port B)
-	paths     branches              // the paths through the valve and work lines
-	holder    *holder               // the counterbalance valve fitted, if any
+	fit       fitted             // the governing cylinder sizing (without its findings) and its duty
+	chosen    chosenSeries       // the chosen bore and rod as series
+	msize     actuator.MotorSize // the governing motor sizing
+	governing string             // the phase that set the size
+	ok        bool               // a standard size was found
+	valve     int                // index into valveSizes, −1 when none is large enough
+	lineA     *lineRun           // work line to the cap side (or motor port A)
+	lineB     *lineRun           // work line to the annulus side (or port B)
+	paths     branches           // the paths through the valve and work lines
+	holder    *holder            // the counterbalance valve fitted, if any
 }
 
 func (a *act) cylinder() bool { return a.spec.Kind == "cylinder" }
