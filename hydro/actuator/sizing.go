@@ -506,11 +506,13 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 		rod.Chosen = 0 // the rod buckling asks leaves no annulus: a larger bore takes it
 		return boreFit{rod: rod}, false
 	}
-	col.Cylinder = c
-	chk, err := col.Check()
-	if err != nil {
-		rod.Chosen = 0
-		return boreFit{rod: rod}, false
+	chk := bk.Check // the rod buckling chose, which MinimumRod has checked
+	if c.Rod != bk.Rod.Chosen {
+		col.Cylinder = c
+		if chk, err = col.Check(); err != nil {
+			rod.Chosen = 0
+			return boreFit{rod: rod}, false
+		}
 	}
 	return boreFit{cyl: c, rod: rod, bk: &chk}, true
 }
