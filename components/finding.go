@@ -171,10 +171,87 @@ func (f Finding) String() string {
 	return head + ": " + f.Text(metric())
 }
 
+// opensApart reports whether two findings' sentences differ in their
+// opening words: the text of each format before its first verb, which
+// every rendering begins with. When it is true the sentences differ in any
+// unit system; when it is false they may or may not.
+func (f Finding) opensApart(g Finding) bool {
+	a, b := f.format, g.format
+	if i := strings.IndexByte(a, '%'); i >= 0 {
+		a = a[:i]
+	}
+	if i := strings.IndexByte(b, '%'); i >= 0 {
+		b = b[:i]
+	}
+	n := min(len(a), len(b))
+	return a[:n] != b[:n]
+}
+
+// byValues compares two findings of one format by their values, without
+// writing the sentences: same when every value is the same (then so are
+// the sentences); apart when the first value that differs is a string in
+// both (a part's name, most often) and neither string begins the other,
+// in a format of %v verbs and %% (the sentences agree up to that value and
+// differ in it). When neither is true the sentences must be written to
+// tell.
+func (f Finding) byValues(g Finding) (apart, same bool) {
+	if f.format != g.format || len(f.args) != len(g.args) {
+		return false, false
+	}
+	for i, a := range f.args {
+		b := g.args[i]
+		if sameValue(a, b) {
+			continue
+		}
+		p, ok := a.(string)
+		q, ok2 := b.(string)
+		if !ok || !ok2 || !plainFormat(f.format, len(f.args)) {
+			return false, false
+		}
+		n := min(len(p), len(q))
+		return p[:n] != q[:n], false
+	}
+	return false, true
+}
+
+// sameValue reports whether a and b are the same value of a type that ==
+// compares (and so are written the same).
+func sameValue(a, b any) bool {
+	t := reflect.TypeOf(a)
+	return t == reflect.TypeOf(b) && (t == nil || t.Comparable()) && a == b
+}
+
+// plainFormat reports whether format has only %v verbs, n of them, and %%.
+func plainFormat(format string, n int) bool {
+	for {
+		i := strings.IndexByte(format, '%')
+		if i < 0 {
+			return n == 0
+		}
+		if i+1 == len(format) {
+			return false
+		}
+		switch format[i+1] {
+		case '%':
+		case 'v':
+			n--
+		default:
+			return false
+		}
+		format = format[i+2:]
+	}
+}
+
 // same reports whether two findings say the same thing: same severity,
 // hazard, topic, rule and sentence (in metric units).
 func (f Finding) same(g Finding) bool {
-	return f.sameHead(g) && (f.sameSentence(g) || f.Text(metric()) == g.Text(metric()))
+	if !f.sameHead(g) {
+		return false
+	}
+	if apart, same := f.byValues(g); apart || same {
+		return same
+	}
+	return !f.opensApart(g) && f.Text(metric()) == g.Text(metric())
 }
 
 // sameHead reports whether two findings have the same severity, hazard,
@@ -182,23 +259,6 @@ func (f Finding) same(g Finding) bool {
 // the same.
 func (f Finding) sameHead(g Finding) bool {
 	return f.Severity == g.Severity && f.Hazard == g.Hazard && f.Topic == g.Topic && f.Rule == g.Rule
-}
-
-// sameSentence reports whether two findings are built from the same format
-// and the same values, so that their sentences are the same in any unit
-// system without writing them. Values of a type that == cannot compare
-// (a slice, a map) never count as the same here.
-func (f Finding) sameSentence(g Finding) bool {
-	if f.format != g.format || len(f.args) != len(g.args) {
-		return false
-	}
-	for i, a := range f.args {
-		b := g.args[i]
-		if t := reflect.TypeOf(a); t != reflect.TypeOf(b) || t != nil && !t.Comparable() || a != b {
-			return false
-		}
-	}
-	return true
 }
 
 // findingJSON is the stable JSON form of a finding.
@@ -243,17 +303,18 @@ func (fs Findings) Merge(more ...Finding) Findings {
 	copy(out, fs)
 	var m merger
 	for _, f := range more {
-		if !m.says(out, f) {
+		if said, text := m.says(out, f); !said {
 			out = append(out, f)
+			m.keep(out, len(out)-1, text)
 		}
 	}
 	return out
 }
 
 // merger tells, for Merge, whether findings say the same thing (as
-// Finding.same does) writing each sentence at most once, and only where
-// the heads are the same and the sentences are not plainly the same
-// (built from the same format and values).
+// Finding.same does), writing each sentence at most once and only where
+// the heads are the same and neither the values nor the opening words
+// tell the sentences apart.
 type merger struct {
 	texts []sentence // of out[i]
 }
@@ -263,35 +324,54 @@ type sentence struct {
 	written bool
 }
 
-// says reports whether a finding of out says what f says.
-func (m *merger) says(out Findings, f Finding) bool {
+// says reports whether a finding of out says what f says, and f's
+// sentence if it had to write it.
+func (m *merger) says(out Findings, f Finding) (bool, sentence) {
 	var text sentence
 	for i, g := range out {
 		if !g.sameHead(f) {
 			continue
 		}
-		if g.sameSentence(f) {
-			return true
+		if apart, same := g.byValues(f); same {
+			return true, text
+		} else if apart || g.opensApart(f) {
+			continue
 		}
 		if !text.written {
 			text = sentence{f.Text(metric()), true}
 		}
 		if m.text(out, i) == text.text {
-			return true
+			return true, text
 		}
 	}
-	return false
+	return false, text
 }
 
 // text returns the metric sentence of out[i], writing it the first time.
 func (m *merger) text(out Findings, i int) string {
-	for len(m.texts) < len(out) {
-		m.texts = append(m.texts, sentence{})
-	}
+	m.grow(len(out), cap(out))
 	if s := &m.texts[i]; !s.written {
 		*s = sentence{out[i].Text(metric()), true}
 	}
 	return m.texts[i].text
+}
+
+// keep keeps the sentence of out[i], when says wrote it.
+func (m *merger) keep(out Findings, i int, s sentence) {
+	if s.written {
+		m.grow(i+1, cap(out))
+		m.texts[i] = s
+	}
+}
+
+// grow makes room for the sentences of n findings (of at most max).
+func (m *merger) grow(n, max int) {
+	if m.texts == nil {
+		m.texts = make([]sentence, n, max)
+	}
+	for len(m.texts) < n {
+		m.texts = append(m.texts, sentence{})
+	}
 }
 
 // Hazard returns the findings about hazard h, in order.

@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"slices"
 	"testing"
 
 	"github.com/google/go-cmp/cmp"
@@ -180,21 +181,26 @@ func TestMergeSaysSameAsSentence(t *testing.T) {
 	if err := json.Unmarshal(b, &decoded); err != nil {
 		t.Fatal(err)
 	}
+	press, ejector := other.About("press"), other.About("ejector") // open apart: kept without writing them
 	list := NewFinding(Notice, NoHazard, "l", r, "sizes %v", []int{1, 2})
 	list2 := NewFinding(Notice, NoHazard, "l", r, "sizes %v", []int{1, 2})
-	fs := Findings{p}.Merge(close, decoded, other, list, list2, other)
+	fs := Findings{p}.Merge(close, decoded, other, list, list2, other, press, ejector, press)
 	var got []string
 	for _, f := range fs {
 		got = append(got, f.Text(units.Metric()))
 	}
-	want := []string{"the line sees 100 bar", "the line sees 120 bar", "sizes [1 2]"}
+	want := []string{"the line sees 100 bar", "the line sees 120 bar", "sizes [1 2]",
+		"press: the line sees 120 bar", "ejector: the line sees 120 bar"}
 	if diff := cmp.Diff(want, got); diff != "" {
 		t.Errorf("Merge (-want +got):\n%s", diff)
 	}
 	for i, f := range []Finding{close, decoded} {
-		if !p.same(f) {
+		if !p.same(f) || p.opensApart(f) {
 			t.Errorf("finding %d does not say what p says: %q", i, f.Text(units.Metric()))
 		}
+	}
+	if !press.opensApart(ejector) || !press.opensApart(other) || press.opensApart(press) {
+		t.Error("opensApart does not tell the two subjects apart by their opening words")
 	}
 	if Findings(nil).Merge() != nil || Findings(nil).Merge(p).Merge() == nil {
 		t.Error("Merge changed whether the list is nil")
@@ -253,5 +259,62 @@ func BenchmarkFindingText(b *testing.B) {
 	b.ReportAllocs()
 	for b.Loop() {
 		_ = f.Text(sys)
+	}
+}
+
+// TestSameIsSentenceEquality: for every pair of a set of findings built to
+// trip the shortcuts — names that begin one another, values that round to
+// one text, formats with other verbs, findings read back from JSON, a
+// subject put before the sentence — same is true exactly when the heads
+// match and the metric sentences read the same.
+func TestSameIsSentenceEquality(t *testing.T) {
+	r := PracticeRule("test")
+	mk := func(format string, args ...any) Finding { return NewFinding(Caution, Burst, "t", r, format, args...) }
+	fs := []Finding{
+		mk("the flow through %v is laminar (Re %v)", "tank outlet", 1200.0),
+		mk("the flow through %v is laminar (Re %v)", "suction line bends", 1200.0),
+		mk("the flow through %v is laminar (Re %v)", "press", 1200.0),
+		mk("the flow through %v is laminar (Re %v)", "press 2", 1200.0),
+		mk("the flow through %v is laminar (Re %v)", "press", 1200.00001),
+		mk("%v%v", "ab", "c"), mk("%v%v", "a", "bc"), mk("%v%v", "a", "b"),
+		mk("%s at %v", "press", units.Pressure(1e7)), mk("%s at %v", "press", units.Pressure(1.00000001e7)),
+		mk("press at %v", units.Pressure(1e7)), mk("press at 100 bar"),
+		mk("100 %% sure"), mk("100 %% %v", "sure"),
+		mk("the line sees %v", units.Pressure(100.00001e5)), mk("the line sees %v", units.Pressure(100.00002e5)),
+		mk("the line sees %v", units.Pressure(120e5)).About("press"), mk("the line sees %v", units.Pressure(120e5)).About("ejector"),
+		mk("sizes %v", []int{1, 2}), mk("sizes %v", []int{1, 2}), mk("sizes %v", []int{1, 3}),
+	}
+	for _, f := range slices.Clone(fs) {
+		b, err := json.Marshal(f)
+		if err != nil {
+			t.Fatal(err)
+		}
+		var back Finding
+		if err := json.Unmarshal(b, &back); err != nil {
+			t.Fatal(err)
+		}
+		fs = append(fs, back)
+	}
+	metric := units.Metric()
+	for i, f := range fs {
+		for j, g := range fs {
+			want := f.Text(metric) == g.Text(metric)
+			if got := f.same(g); got != want {
+				t.Errorf("same(%d %q, %d %q) = %v; want %v", i, f.Text(metric), j, g.Text(metric), got, want)
+			}
+		}
+	}
+	var merged []string
+	for _, f := range Findings(nil).Merge(fs...) {
+		merged = append(merged, f.Text(metric))
+	}
+	var want []string
+	for _, f := range fs {
+		if !slices.Contains(want, f.Text(metric)) {
+			want = append(want, f.Text(metric))
+		}
+	}
+	if diff := cmp.Diff(want, merged); diff != "" {
+		t.Errorf("Merge keeps (-want +got):\n%s", diff)
 	}
 }

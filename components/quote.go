@@ -71,6 +71,8 @@ func appendQuote(b []byte, sys units.System, a any) []byte {
 		return sys.AppendAcceleration(b, v)
 	case float64:
 		return fmt.Appendf(b, "%.4g", v)
+	case string:
+		return append(b, v...) // as %v writes it
 	}
 	return fmt.Append(b, a)
 }

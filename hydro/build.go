@@ -204,15 +204,17 @@ func (z *sizer) phaseResult(ph *phase, h phaseHeat) PhaseResult {
 		}
 	}
 	if gov != nil {
-		r.Budget = append(r.Budget, BudgetItem{Path: "load", Name: gov.act.spec.Name + " inlet port", Drop: Value[units.Pressure]{gov.port, portRule}})
+		l := &gov.act.labels
+		r.Budget = make([]BudgetItem, 0, 5)
+		r.Budget = append(r.Budget, BudgetItem{Path: "load", Name: l.port, Drop: Value[units.Pressure]{gov.port, portRule}})
 		if gov.capFlow > 0 {
 			r.Budget = append(r.Budget,
-				BudgetItem{Path: "supply", Name: gov.act.spec.Name + " valve and work line", Drop: Value[units.Pressure]{gov.supplyDrop, dropRule}},
+				BudgetItem{Path: "supply", Name: l.supply, Drop: Value[units.Pressure]{gov.supplyDrop, dropRule}},
 				BudgetItem{Path: "supply", Name: "pressure line", Drop: Value[units.Pressure]{ph.lineDrop, dropRule}})
 		}
 		if gov.ret > 0 {
 			r.Budget = append(r.Budget,
-				BudgetItem{Path: "return", Name: gov.act.spec.Name + " work line and valve", Drop: Value[units.Pressure]{gov.returnDrop, dropRule}},
+				BudgetItem{Path: "return", Name: l.back, Drop: Value[units.Pressure]{gov.returnDrop, dropRule}},
 				BudgetItem{Path: "return", Name: "return line and filter", Drop: Value[units.Pressure]{ph.retDrop, dropRule}})
 		}
 	}

@@ -277,16 +277,20 @@ func (z *sizer) load(ph *phase) {
 }
 
 // dwell is the dwell that follows the moves of phase ph, as a phase of its
-// own: the valves of the moves centred, the holds of ph still held.
+// own: the valves of the moves centred, the holds of ph still held. It is
+// made once and its load worked out again on every pass.
 func (z *sizer) dwell(ph *phase) *phase {
-	d := &phase{name: ph.name + ", dwell", spec: Phase{Name: ph.name + ", dwell", Dwell: ph.spec.Dwell}, time: ph.spec.Dwell}
-	for _, m := range ph.moves {
-		if m.hold() {
-			d.moves = append(d.moves, m)
+	if ph.after == nil {
+		d := &phase{name: ph.name + ", dwell", spec: Phase{Name: ph.name + ", dwell", Dwell: ph.spec.Dwell}, time: ph.spec.Dwell}
+		for _, m := range ph.moves {
+			if m.hold() {
+				d.moves = append(d.moves, m)
+			}
 		}
+		ph.after = d
 	}
-	z.load(d)
-	return d
+	z.load(ph.after)
+	return ph.after
 }
 
 // peakDemand is the highest pump flow of the cycle.

@@ -44,6 +44,8 @@ type labels struct {
 	in, out           string    // its valve and lines, in and out
 	lowered, holder   string    // a lowered load, its counterbalance valve
 	seal, motor       string    // a cylinder's seal friction, a motor's losses
+	port              string    // its inlet port, in a pressure budget
+	supply, back      string    // its valve and work line, on the way in and out
 }
 
 func labelsFor(name string) labels {
@@ -54,6 +56,7 @@ func labelsFor(name string) labels {
 		in:       name + " valve and lines in", out: name + " valve and lines out",
 		lowered: name + " lowered load", holder: name + " counterbalance valve",
 		seal: name + " seal friction", motor: name + " motor losses",
+		port: name + " inlet port", supply: name + " valve and work line", back: name + " work line and valve",
 	}
 }
 
@@ -113,6 +116,7 @@ type phase struct {
 	lineDrop units.Pressure // pressure line drop at the phase's flow
 	retDrop  units.Pressure // return line and filter drop at the phase's return flow
 	loads    []thermal.Load // its heat loads, in a buffer each pass fills again
+	after    *phase         // the dwell after its moves, once made (dwell)
 }
 
 // working reports a phase in which something moves.

@@ -27,13 +27,13 @@ type phaseHeat struct {
 // centred, its holds held) and the idle time between cycles as a last
 // phase.
 func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
-	out := make([]phaseHeat, 0, len(z.phases)+1)
+	out := make([]phaseHeat, 0, 2*len(z.phases)+1) // each phase and its dwell, and the idle time
 	for _, ph := range z.phases {
-		parts := []*phase{ph}
+		parts, n := [2]*phase{ph}, 1
 		if ph.working() && ph.spec.Dwell > 0 {
-			parts = append(parts, z.dwell(ph))
+			parts[1], n = z.dwell(ph), 2
 		}
-		for i, p := range parts {
+		for i, p := range parts[:n] {
 			op, err := z.operate(p, model)
 			if err != nil {
 				return nil, err
@@ -44,7 +44,7 @@ func (z *sizer) heats(model pump.Pump) ([]phaseHeat, error) {
 			}
 			p.loads = loads
 			t := p.time
-			if i == 0 && len(parts) > 1 {
+			if i == 0 && n > 1 {
 				t = ph.move
 			}
 			out = append(out, phaseHeat{ph: p, name: p.name, time: t, op: op, loads: loads, driving: driving})

@@ -24,6 +24,7 @@ type lineRun struct {
 	inner    units.Length // the chosen bore; 0 when none is large enough
 	findings components.Findings
 	els      []line.Element // the line's pipe and fittings, for the drops
+	tube     namedTube      // the last tube chosen
 
 	chosen    bool     // the line has been chosen for need
 	chosenFor lineNeed // the need of the last choice
@@ -107,9 +108,19 @@ func (z *sizer) chooseTube(l *lineRun) (bool, error) {
 	}
 	l.bore, l.velocity, l.rating, l.findings = t.Bore, t.Velocity, t.Pressure, t.Findings
 	if t.Bore.OK() {
-		l.inner, l.size = t.Tube.ID(), "tube "+t.Tube.String()
+		if l.tube.size == "" || l.tube.tube != t.Tube {
+			l.tube = namedTube{t.Tube, "tube " + t.Tube.String()}
+		}
+		l.inner, l.size = t.Tube.ID(), l.tube.size
 	}
 	return t.Bore.OK(), nil
+}
+
+// namedTube is a tube with its name in the bill, written when the tube is
+// chosen and kept while it stays chosen.
+type namedTube struct {
+	tube components.Tube
+	size string
 }
 
 // elements are the line's pipe and bends (and its entrance or exit).

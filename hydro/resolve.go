@@ -49,15 +49,12 @@ type sizer struct {
 	centerEls   []line.Element // the main valve's P→T path, for an unloading center
 }
 
-// newSizer resolves a validated spec at working pressure p.
-func newSizer(s Spec, p units.Pressure, pRule components.Rule) (*sizer, error) {
+// newSizer resolves a validated spec, whose validation built fluid fl, at
+// working pressure p.
+func newSizer(s Spec, fl fluid.Fluid, p units.Pressure, pRule components.Rule) (*sizer, error) {
 	z := &sizer{spec: s, sys: units.Metric()}
 	if s.Units == "us" {
 		z.sys = units.USCustomary()
-	}
-	fl, err := s.Fluid.build()
-	if err != nil {
-		return nil, &FieldError{Path: fluidPath(err), Err: err}
 	}
 	z.fl, z.win = fl, fluid.DefaultWindow()
 	if s.Fluid.Window != nil {

@@ -4,6 +4,7 @@ import (
 	"math"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/fluid"
 	"github.com/hydrosize/hydrosize/hydro/line"
 	"github.com/hydrosize/hydrosize/hydro/pump"
 	"github.com/hydrosize/hydrosize/units"
@@ -53,22 +54,24 @@ import (
 // rarely, a combination the families refuse (a *FieldError naming the part
 // of the spec concerned); the report is then the zero Report.
 func Size(s Spec) (Report, error) {
-	if err := s.Validate(); err != nil {
+	fl, err := s.validated()
+	if err != nil {
 		return Report{}, err
 	}
 	if r := s.Design.PressureRange; r != nil && s.Design.Pressure == 0 {
-		return sizeBest(s, *r)
+		return sizeBest(s, fl, *r)
 	}
 	p, rule := s.Design.Pressure, components.CallerRule("design.pressure")
 	if p == 0 {
 		p, rule = DefaultPressure, components.OurRule("working pressure of the ISO 6020-2 16 MPa cylinder series")
 	}
-	return sizeAt(s, p, rule)
+	return sizeAt(s, fl, p, rule)
 }
 
-// sizeAt sizes a validated spec at working pressure p.
-func sizeAt(s Spec, p units.Pressure, rule components.Rule) (Report, error) {
-	z, err := newSizer(s, p, rule)
+// sizeAt sizes a validated spec, whose validation built fluid fl, at
+// working pressure p.
+func sizeAt(s Spec, fl fluid.Fluid, p units.Pressure, rule components.Rule) (Report, error) {
+	z, err := newSizer(s, fl, p, rule)
 	if err != nil {
 		return Report{}, err
 	}

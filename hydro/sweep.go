@@ -5,6 +5,7 @@ import (
 	"sync"
 
 	"github.com/hydrosize/hydrosize/components"
+	"github.com/hydrosize/hydrosize/fluid"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -130,11 +131,12 @@ func run(n int, f func(int)) {
 // sizeRow sizes one combination into a row.
 func sizeRow(s Spec) Row {
 	row := Row{Pressure: s.Design.Pressure, PumpSpeed: s.Design.PumpSpeed}
-	if err := s.Validate(); err != nil {
+	fl, err := s.validated()
+	if err != nil {
 		row.Error = err.Error()
 		return row
 	}
-	r, err := sizeAt(s, s.Design.Pressure, components.CallerRule("design.pressure"))
+	r, err := sizeAt(s, fl, s.Design.Pressure, components.CallerRule("design.pressure"))
 	if err != nil {
 		row.Error = err.Error()
 		return row
@@ -163,7 +165,7 @@ func (r Report) row() Row {
 // sizeBest sizes a spec over its pressure range and returns the report of
 // the pressure with the smallest drive rating (then the smallest RMS power,
 // then the lowest pressure).
-func sizeBest(s Spec, pr PressureRange) (Report, error) {
+func sizeBest(s Spec, fl fluid.Fluid, pr PressureRange) (Report, error) {
 	var pressures []units.Pressure
 	for p := pr.From; p <= pr.To*(1+1e-12); p += pr.Step {
 		pressures = append(pressures, p)
@@ -173,7 +175,7 @@ func sizeBest(s Spec, pr PressureRange) (Report, error) {
 	run(len(pressures), func(i int) {
 		t := s
 		t.Design.Pressure, t.Design.PressureRange = pressures[i], nil
-		reports[i], errs[i] = sizeAt(t, pressures[i], components.CallerRule("design.pressure_range"))
+		reports[i], errs[i] = sizeAt(t, fl, pressures[i], components.CallerRule("design.pressure_range"))
 	})
 	best := -1
 	for i, r := range reports {

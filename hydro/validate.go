@@ -8,6 +8,7 @@ import (
 	"strings"
 	"time"
 
+	"github.com/hydrosize/hydrosize/fluid"
 	"github.com/hydrosize/hydrosize/hydro/contamination"
 	"github.com/hydrosize/hydrosize/internal/validate"
 	"github.com/hydrosize/hydrosize/units"
@@ -19,22 +20,33 @@ import (
 // contradicting another field). [Size] validates first; call Validate to
 // check a spec without sizing it.
 func (s Spec) Validate() error {
-	var ps problems
-	s.check(&ps)
-	return ps.err()
+	_, err := s.validated()
+	return err
 }
 
-// check adds every problem of s to ps.
-func (s Spec) check(ps *problems) {
+// validated validates s and returns the fluid its check built, which the
+// sizing takes rather than building it again.
+func (s Spec) validated() (fluid.Fluid, error) {
+	var ps problems
+	fl := s.check(&ps)
+	if err := ps.err(); err != nil {
+		return fluid.Fluid{}, err
+	}
+	return fl, nil
+}
+
+// check adds every problem of s to ps, and returns the fluid it built.
+func (s Spec) check(ps *problems) fluid.Fluid {
 	names := s.checkActuators(ps)
 	s.Cycle.check(ps, s.Actuators, names)
 	s.Supply.check(ps)
 	s.Site.check(ps)
-	s.Fluid.check(ps)
+	fl := s.Fluid.check(ps)
 	s.Cleanliness.check(ps)
 	s.Circuit.check(ps, s.Actuators, names)
 	s.Design.check(ps, s.Site, s.Supply)
 	oneOf(ps, "units", s.Units, unitSystems)
+	return fl
 }
 
 // The words a spec's string fields accept; the first is the default where a
@@ -477,7 +489,9 @@ func (s Site) check(ps *problems) {
 	add(ps, validate.InRange(validateFn, "site.altitude", s.Altitude, 0, 5000*units.Metre))
 }
 
-func (f Fluid) check(ps *problems) {
+// check adds the fluid's problems to ps, and returns the fluid built from
+// it (the zero Fluid when it has problems).
+func (f Fluid) check(ps *problems) fluid.Fluid {
 	before := len(ps.list)
 	oneOf(ps, "fluid.class", f.Class, fluidClasses)
 	if f.Window != nil {
@@ -501,14 +515,16 @@ func (f Fluid) check(ps *problems) {
 		unused(ps, "fluid.v100", f.V100, "v100 goes with v40 (data-sheet values)")
 	default:
 		ps.missing("fluid.grade", "an ISO 3448 grade such as \"VG 46\", or data-sheet v40 and v100")
-		return
+		return fluid.Fluid{}
 	}
 	if len(ps.list) > before {
-		return // the fluid cannot be built from missing or contradicting fields
+		return fluid.Fluid{} // the fluid cannot be built from missing or contradicting fields
 	}
-	if _, err := f.build(); err != nil {
+	fl, err := f.build()
+	if err != nil {
 		ps.add(fluidPath(err), err)
 	}
+	return fl
 }
 
 // fluidPath returns the spec path of a field fluid names in err.

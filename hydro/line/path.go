@@ -82,6 +82,9 @@ func (p Path) Drop(q units.Flow, o Oil) (PathDrop, error) {
 	for i, e := range p.Elements {
 		out.assess(e, out.Elements[i], own[i])
 	}
+	if len(out.Findings) > 1 { // merged once, not one by one
+		out.Findings = components.Findings(nil).Merge(out.Findings...)
+	}
 	return out, nil
 }
 
@@ -149,7 +152,8 @@ func nameElement(fn string, err error, i int) error {
 	return validate.Renamed(err, fn, validate.Fields("Elements["+strconv.Itoa(i)+"].", nil))
 }
 
-// assess adds the checks and findings of one element.
+// assess adds the checks and findings of one element; Drop merges the
+// findings once all are in.
 func (d *PathDrop) assess(e Element, ed ElementDrop, own units.Pressure) {
 	switch e := e.(type) {
 	case Rated:
@@ -157,7 +161,7 @@ func (d *PathDrop) assess(e Element, ed ElementDrop, own units.Pressure) {
 			c := components.Within(own, e.Bypass, components.CallerRule(ed.Name+": bypass setting"))
 			d.Checks = append(d.Checks, c)
 			if !c.OK() {
-				d.Findings = d.Findings.Merge(components.NewFinding(components.Caution, components.FilterBypass,
+				d.Findings = append(d.Findings, components.NewFinding(components.Caution, components.FilterBypass,
 					"line.bypass", c.Rule, "%v would drop %v at this flow, above its bypass setting of %v: the bypass opens and unfiltered oil passes",
 					ed.Name, own, e.Bypass))
 			}
@@ -166,20 +170,20 @@ func (d *PathDrop) assess(e Element, ed ElementDrop, own units.Pressure) {
 			c := components.Within(ed.Inlet, e.Rating, components.CallerRule(ed.Name+": pressure rating"))
 			d.Checks = append(d.Checks, c)
 			if !c.OK() {
-				d.Findings = d.Findings.Merge(components.NewFinding(components.Warning, components.Burst,
+				d.Findings = append(d.Findings, components.NewFinding(components.Warning, components.Burst,
 					"line.rating", c.Rule, "%v sees %v at its inlet, above its rating of %v: it can burst",
 					ed.Name, ed.Inlet, e.Rating))
 			}
 		}
 	case Pipe:
 		if ed.Regime == Transitional {
-			d.Findings = d.Findings.Merge(components.NewFinding(components.Notice, components.NoHazard,
+			d.Findings = append(d.Findings, components.NewFinding(components.Notice, components.NoHazard,
 				"line.transitional", components.OurRule("transition band taken as turbulent"),
 				"the flow in %v is transitional (Re %v): its drop is taken as turbulent and may be lower", ed.Name, ed.Reynolds))
 		}
 	case Fitting:
 		if ed.Regime == Laminar {
-			d.Findings = d.Findings.Merge(components.NewFinding(components.Notice, components.NoHazard,
+			d.Findings = append(d.Findings, components.NewFinding(components.Notice, components.NoHazard,
 				"line.fitting-laminar", ed.Rule,
 				"the flow through %v is laminar (Re %v): its K factor is for turbulent flow and understates the loss", ed.Name, ed.Reynolds))
 		}
