@@ -108,8 +108,7 @@ const deadLength = 200 * units.Millimetre
 // sizeCylinder chooses the cylinder that meets every move, then works out
 // each move with it.
 func (z *sizer) sizeCylinder(a *act) error {
-	var best actuator.CylinderSize
-	var governs fitted
+	var governs fitted // the governing move's sizing
 	found, failed := false, false
 	for _, m := range a.moves {
 		d := z.duty(m, z.available(m))
@@ -130,21 +129,21 @@ func (z *sizer) sizeCylinder(a *act) error {
 		}
 		if !r.Bore.OK() {
 			if !failed {
-				best, governs, a.governing = r, fitted{d, true}, m.phase.name
+				governs, a.governing = fitted{d, r, true}, m.phase.name
 			}
 			failed = true
 			continue
 		}
-		if !failed && (!found || larger(r.Cylinder, best.Cylinder)) {
-			best, governs, a.governing, found = r, fitted{d, true}, m.phase.name, true
+		if !failed && (!found || larger(r.Cylinder, governs.size.Cylinder)) {
+			governs, a.governing, found = fitted{d, r, true}, m.phase.name, true
 		}
 	}
-	a.size, a.fit, a.ok = best, governs, found && !failed
+	a.fit, a.ok = governs, found && !failed
 	if !a.ok {
 		a.cyl = actuator.Cylinder{}
 		return nil
 	}
-	a.cyl = best.Cylinder
+	a.cyl = governs.size.Cylinder
 	if a.cyl.Stroke == 0 {
 		a.cyl.Stroke = a.spec.Stroke
 	}
@@ -216,7 +215,7 @@ func timeMove(c actuator.Cylinder, m *mv) error {
 // pump flow and the return flow.
 func (z *sizer) cylinderMove(a *act, m *mv) error {
 	c := a.cyl
-	eta := a.size.SealEfficiency
+	eta := a.fit.size.SealEfficiency
 	m.port, m.flow, m.capFlow, m.ret, m.holding, m.fit = 0, 0, 0, 0, nil, fitted{}
 	switch {
 	case m.spec.Regenerative:
@@ -249,15 +248,16 @@ func (z *sizer) cylinderMove(a *act, m *mv) error {
 	}
 	m.port = r.Pressure.Value
 	m.flow, m.capFlow, m.ret = r.Flow, r.Flow, r.ReturnFlow
-	m.fit = fitted{duty: d, ok: true}
+	m.fit = fitted{d, r, true}
 	return nil
 }
 
 // fitted is a cylinder sizing the passes ran without its findings
-// (actuator.Duty.Fit), kept so that the report can take them from the
-// family once (actuator.Duty.Size, the same sizing with its findings).
+// (actuator.Duty.Fit): the duty and its sizing, kept so that the report can
+// ask the family for the findings of the last one (actuator.Duty.Findings).
 type fitted struct {
 	duty actuator.Duty
+	size actuator.CylinderSize
 	ok   bool // a sizing was run
 }
 
@@ -266,11 +266,7 @@ func (f fitted) findings() components.Findings {
 	if !f.ok {
 		return nil
 	}
-	r, err := f.duty.Size()
-	if err != nil {
-		return nil // Fit ran the same duty without an error
-	}
-	return r.Findings
+	return f.duty.Findings(f.size)
 }
 
 // regenerative works out a regenerative extend through the family's

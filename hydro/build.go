@@ -99,14 +99,14 @@ func (z *sizer) actuatorResult(a *act) (ActuatorResult, components.Findings) {
 	r := ActuatorResult{Name: a.spec.Name, Kind: a.spec.Kind, Governing: a.governing}
 	var fs, sized components.Findings
 	if a.cylinder() {
-		r.Bore, r.Rod, r.Stroke = a.size.Bore, a.size.Rod, a.spec.Stroke
+		r.Bore, r.Rod, r.Stroke = a.fit.size.Bore, a.fit.size.Rod, a.spec.Stroke
 		sized = about(a.fit.findings(), a.spec.Name)
 		fs = sized
 		if a.ok {
 			phi, _ := a.cyl.AreaRatio()
 			r.AreaRatio = Value[float64]{phi, components.PhysicsRule("φ = A_cap/A_annulus of the chosen bore and rod")}
 		}
-		if b := a.size.Buckling; b != nil {
+		if b := a.fit.size.Buckling; b != nil {
 			r.Buckling = &Buckling{
 				FreeLength: Value[units.Length]{b.FreeLength, b.KRule}, Critical: Value[units.Force]{b.Critical, b.ERule},
 				Thrust: Value[units.Force]{b.Thrust, reliefRule}, Safety: b.Safety, Method: b.Method.String(),

@@ -3,6 +3,7 @@ package hydro
 import (
 	"math"
 	"strconv"
+	"strings"
 	"time"
 
 	"github.com/hydrosize/hydrosize/hydro/actuator"
@@ -21,17 +22,16 @@ type act struct {
 	// Set by each pass.
 	cyl       actuator.Cylinder
 	motor     actuator.Motor
-	size      actuator.CylinderSize // the governing cylinder sizing, without its findings
-	fit       fitted                // the governing sizing's duty, for its findings
-	chosen    chosenSeries          // the chosen bore and rod as series
-	msize     actuator.MotorSize    // the governing motor sizing
-	governing string                // the phase that set the size
-	ok        bool                  // a standard size was found
-	valve     int                   // index into valveSizes, −1 when none is large enough
-	lineA     *lineRun              // work line to the cap side (or motor port A)
-	lineB     *lineRun              // work line to the annulus side (or port B)
-	paths     branches              // the paths through the valve and work lines
-	holder    *holder               // the counterbalance valve fitted, if any
+	fit       fitted             // the governing cylinder sizing (without its findings) and its duty
+	chosen    chosenSeries       // the chosen bore and rod as series
+	msize     actuator.MotorSize // the governing motor sizing
+	governing string             // the phase that set the size
+	ok        bool               // a standard size was found
+	valve     int                // index into valveSizes, −1 when none is large enough
+	lineA     *lineRun           // work line to the cap side (or motor port A)
+	lineB     *lineRun           // work line to the annulus side (or port B)
+	paths     branches           // the paths through the valve and work lines
+	holder    *holder            // the counterbalance valve fitted, if any
 }
 
 func (a *act) cylinder() bool { return a.spec.Kind == "cylinder" }
@@ -49,14 +49,24 @@ type labels struct {
 }
 
 func labelsFor(name string) labels {
+	// Each label is a slice of one string: the builder's bytes, once
+	// written, do not change, so every slice of them stays as it was.
+	var b strings.Builder
+	b.Grow(14 * (len(name) + 20))
+	l := func(suffix string) string {
+		start := b.Len()
+		b.WriteString(name)
+		b.WriteString(suffix)
+		return b.String()[start:]
+	}
 	return labels{
-		valveIn:  [2]string{name + " valve P→A", name + " valve P→B"},
-		valveOut: [2]string{name + " valve A→T", name + " valve B→T"},
-		control:  name + " flow control",
-		in:       name + " valve and lines in", out: name + " valve and lines out",
-		lowered: name + " lowered load", holder: name + " counterbalance valve",
-		seal: name + " seal friction", motor: name + " motor losses",
-		port: name + " inlet port", supply: name + " valve and work line", back: name + " work line and valve",
+		valveIn:  [2]string{l(" valve P→A"), l(" valve P→B")},
+		valveOut: [2]string{l(" valve A→T"), l(" valve B→T")},
+		control:  l(" flow control"),
+		in:       l(" valve and lines in"), out: l(" valve and lines out"),
+		lowered: l(" lowered load"), holder: l(" counterbalance valve"),
+		seal: l(" seal friction"), motor: l(" motor losses"),
+		port: l(" inlet port"), supply: l(" valve and work line"), back: l(" work line and valve"),
 	}
 }
 

@@ -174,7 +174,7 @@ func (z *sizer) moveLoads(m *mv, add func(thermal.Load, error) error) (units.Pow
 		}
 		// (1 − η) of the pressure's force on the pump's flow: the cap flow,
 		// or on a regenerative extend the rod section's (RegenerativeFor).
-		return 0, add(thermal.MotorLoss(name.seal, m.port, m.flow, m.act.size.SealEfficiency))
+		return 0, add(thermal.MotorLoss(name.seal, m.port, m.flow, m.act.fit.size.SealEfficiency))
 	}
 	return 0, add(thermal.MotorLoss(name.motor, m.port-m.back, m.capFlow, motorVolumetric*motorMechanical))
 }

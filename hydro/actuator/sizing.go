@@ -327,6 +327,23 @@ func (d Duty) Fit() (CylinderSize, error) {
 	return r, nil
 }
 
+// Findings returns the findings [Duty.Size] gives for the duty with r, the
+// sizing [Duty.Fit] returned for it: d.Size() is d.Fit() with Findings set
+// to d.Findings(r). A loop that fits a duty again and again asks for the
+// findings of its last fit alone, without sizing it once more (except when
+// no size was found, where the warning of the last bore tried is worked
+// out again). For an r that is not d's fit the findings say nothing
+// useful.
+func (d Duty) Findings(r CylinderSize) components.Findings {
+	var why components.Findings
+	if r.Bore.Chosen == 0 {
+		if _, last, err := d.size("actuator.Duty.Findings"); err == nil {
+			why = last.findings(rodsOr(d.Rods))
+		}
+	}
+	return d.findings(r, boresOr(d.Bores), why)
+}
+
 // size sizes the cylinder for fn without the findings; last says why the
 // last bore tried had no rod.
 func (d Duty) size(fn string) (CylinderSize, noRod, error) {
@@ -489,11 +506,13 @@ func (d Duty) tryBore(b units.Length, rods components.Series[units.Length], phi 
 		rod.Chosen = 0 // the rod buckling asks leaves no annulus: a larger bore takes it
 		return boreFit{rod: rod}, false
 	}
-	col.Cylinder = c
-	chk, err := col.Check()
-	if err != nil {
-		rod.Chosen = 0
-		return boreFit{rod: rod}, false
+	chk := bk.Check // the rod buckling chose, which MinimumRod has checked
+	if c.Rod != bk.Rod.Chosen {
+		col.Cylinder = c
+		if chk, err = col.Check(); err != nil {
+			rod.Chosen = 0
+			return boreFit{rod: rod}, false
+		}
 	}
 	return boreFit{cyl: c, rod: rod, bk: &chk}, true
 }

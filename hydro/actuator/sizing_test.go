@@ -377,7 +377,7 @@ func delivered(c Cylinder, dir Direction, p, back units.Pressure, eta float64) u
 }
 
 // TestFitIsSizeWithoutFindings: Fit gives Size's result, field for field,
-// with no findings, for duties that land on a preferred and a second-choice
+// with no findings, and Findings of the fit gives Size's findings, for duties that land on a preferred and a second-choice
 // bore, need a thicker rod for buckling, find no rod that does not buckle,
 // are beyond every standard size and pull against a back pressure; and its
 // errors are Size's, naming Fit.
@@ -408,6 +408,9 @@ func TestFitIsSizeWithoutFindings(t *testing.T) {
 		got, err := d.Fit()
 		if err != nil || got.Findings != nil {
 			t.Errorf("%s: Fit error %v, findings %v; want none", name, err, got.Findings)
+		}
+		if diff := cmp.Diff(want.Findings, d.Findings(got), cmp.Comparer(sameText)); diff != "" {
+			t.Errorf("%s: Findings of the fit differ from Size's (-Size +Findings):\n%s", name, diff)
 		}
 		want.Findings = nil
 		if diff := cmp.Diff(want, got); diff != "" {
@@ -485,4 +488,11 @@ func TestRodLeavesAnAnnulus(t *testing.T) {
 	if r, err := d.Size(); err != nil || !r.Bore.OK() || r.AreaRatio != 3 {
 		t.Errorf("area ratio 3: %+v, %v", r.Bore, err)
 	}
+}
+
+// sameText compares findings by what they say: severity, hazard, topic,
+// rule and sentence.
+func sameText(f, g components.Finding) bool {
+	m := units.Metric()
+	return f.Severity == g.Severity && f.Hazard == g.Hazard && f.Topic == g.Topic && f.Rule == g.Rule && f.Text(m) == g.Text(m)
 }
