@@ -2,10 +2,10 @@ package units
 
 import (
 	"math"
-	"os/exec"
-	"strconv"
 	"strings"
 	"testing"
+
+	"github.com/hydrosize/hydrosize/internal/checktest"
 )
 
 // GNU units (Debian package units), version 2.22 with its bundled
@@ -99,43 +99,13 @@ var gnuUnitsTable = []gnuUnitsRow{
 	{10, "Δ°C", "Δ°F", "10 degC", "degF"},
 }
 
-// gnuUnitsPath finds the units program or skips the test.
-func gnuUnitsPath(t *testing.T) string {
-	t.Helper()
-	path, err := exec.LookPath("units")
-	if err != nil {
-		t.Skip("GNU units (Debian package units) is not installed; .ci/run installs it")
-	}
-	out, err := exec.Command(path, "--version").Output()
-	if err != nil || !strings.HasPrefix(string(out), "GNU Units version") {
-		t.Skipf("%s is not GNU units: %v %q", path, err, out)
-	}
-	t.Logf("%s", strings.SplitN(string(out), "\n", 2)[0])
-	return path
-}
-
-// gnuUnits runs one conversion and parses the number it prints.
-func gnuUnits(t *testing.T, path, from, to string) float64 {
-	t.Helper()
-	out, err := exec.Command(path, "-t", "-o", "%.17g", "--", from, to).CombinedOutput()
-	if err != nil {
-		t.Fatalf("units %q %q: %v: %s", from, to, err, out)
-	}
-	s := strings.TrimSpace(string(out))
-	v, err := strconv.ParseFloat(s, 64)
-	if err != nil {
-		t.Fatalf("units %q %q printed %q", from, to, s)
-	}
-	return v
-}
-
 func TestGNUUnits(t *testing.T) {
-	path := gnuUnitsPath(t)
+	path := checktest.GNUUnits(t)
 	if len(gnuUnitsTable) < 25 {
 		t.Fatalf("only %d cross-checks; keep at least 25 (one per quantity type and more for the trade units)", len(gnuUnitsTable))
 	}
 	for _, r := range gnuUnitsTable {
-		want := gnuUnits(t, path, r.gnuFrom, r.gnuTo)
+		want := checktest.GNUUnitsValue(t, path, r.gnuFrom, r.gnuTo)
 		got, err := Convert(r.value, r.from, r.to)
 		if err != nil {
 			t.Errorf("Convert(%g, %q, %q): %v", r.value, r.from, r.to, err)
@@ -155,27 +125,27 @@ func TestGNUUnits(t *testing.T) {
 // against GNU units: the value a form field gives and the number a report
 // shows.
 func TestGNUUnitsTyped(t *testing.T) {
-	path := gnuUnitsPath(t)
+	path := checktest.GNUUnits(t)
 	rel := func(got, want float64) bool { return math.Abs(got-want) <= 1e-14*math.Abs(want) }
 
 	p, err := ParsePressure("3000 psig")
-	if want := gnuUnits(t, path, "3000 psi", "bar"); err != nil || !rel(p.Bar(), want) {
+	if want := checktest.GNUUnitsValue(t, path, "3000 psi", "bar"); err != nil || !rel(p.Bar(), want) {
 		t.Errorf("ParsePressure(3000 psig).Bar() = %.17g, %v; GNU units %.17g", p.Bar(), err, want)
 	}
 	q, err := ParseFlow("1.3 gal/min")
-	if want := gnuUnits(t, path, "1.3 gallon/min", "L/min"); err != nil || !rel(q.LitresPerMinute(), want) {
+	if want := checktest.GNUUnitsValue(t, path, "1.3 gallon/min", "L/min"); err != nil || !rel(q.LitresPerMinute(), want) {
 		t.Errorf("ParseFlow(1.3 gal/min).LitresPerMinute() = %.17g, %v; GNU units %.17g", q.LitresPerMinute(), err, want)
 	}
 	d, err := ParseDisplacement("1.95 in^3/rev")
-	if want := gnuUnits(t, path, "1.95 in^3", "cm^3"); err != nil || !rel(d.CubicCentimetresPerRevolution(), want) {
+	if want := checktest.GNUUnitsValue(t, path, "1.95 in^3", "cm^3"); err != nil || !rel(d.CubicCentimetresPerRevolution(), want) {
 		t.Errorf("ParseDisplacement(1.95 in^3/rev) = %.17g cm³/rev, %v; GNU units %.17g", d.CubicCentimetresPerRevolution(), err, want)
 	}
 	w := 7.5 * Kilowatt
-	if want := gnuUnits(t, path, "7.5 kW", "hp"); !rel(w.Horsepower(), want) {
+	if want := checktest.GNUUnitsValue(t, path, "7.5 kW", "hp"); !rel(w.Horsepower(), want) {
 		t.Errorf("7.5 kW = %.17g hp; GNU units %.17g", w.Horsepower(), want)
 	}
 	temp, err := ParseTemperature("120 °F")
-	if want := gnuUnits(t, path, "tempF(120)", "tempC"); err != nil || math.Abs(temp.Celsius()-want) > 1e-12 {
+	if want := checktest.GNUUnitsValue(t, path, "tempF(120)", "tempC"); err != nil || math.Abs(temp.Celsius()-want) > 1e-12 {
 		t.Errorf("ParseTemperature(120 °F).Celsius() = %.17g, %v; GNU units %.17g", temp.Celsius(), err, want)
 	}
 }

@@ -93,8 +93,8 @@ func TestCheckInlet(t *testing.T) {
 	checktest.Near(t, "static head", r.Static, -870*9.80665*0.4, 1e-15)
 	want := float64(amb.Pressure) - 870*9.80665*0.4 - 0.12e5
 	checktest.Near(t, "inlet pressure", float64(r.Pressure), want, 1e-15)
-	path := gnuUnitsPath(t)
-	got := gnuUnits(t, path, formatG(amb.Pressure.Pascals())+" Pa + 870 kg/m^3 * gravity * (-0.4 m) - 0.12 bar", "Pa")
+	path := checktest.GNUUnits(t)
+	got := checktest.GNUUnitsValue(t, path, formatG(amb.Pressure.Pascals())+" Pa + 870 kg/m^3 * gravity * (-0.4 m) - 0.12 bar", "Pa")
 	checktest.Near(t, "inlet pressure vs GNU units", float64(r.Pressure), got, 1e-14)
 	// 0.66 bar(a) is below the 0.8 bar(a) minimum: a cavitation warning.
 	if r.Check.OK() || len(r.Findings.Hazard(components.Cavitation)) != 1 || r.Findings[0].Severity != components.Warning {

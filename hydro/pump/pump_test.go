@@ -76,9 +76,9 @@ func TestPumpAgainstGNUUnits(t *testing.T) {
 	}
 	checktest.Near(t, "flow, L/min", pt.Flow.LitresPerMinute(), 61.987499999999997, 1e-14)
 	checktest.Near(t, "torque, N·m", pt.Torque, 163.47980567591426, 1e-14)
-	path := gnuUnitsPath(t)
-	checktest.Near(t, "flow vs GNU units", pt.Flow.LitresPerMinute(), gnuUnits(t, path, "45 cm^3 * 1450/min * 0.95", "L/min"), 1e-14)
-	checktest.Near(t, "torque vs GNU units", float64(pt.Torque), gnuUnits(t, path, "45 cm^3 * 210 bar / (2 pi) / 0.92", "N m"), 1e-14)
+	path := checktest.GNUUnits(t)
+	checktest.Near(t, "flow vs GNU units", pt.Flow.LitresPerMinute(), checktest.GNUUnitsValue(t, path, "45 cm^3 * 1450/min * 0.95", "L/min"), 1e-14)
+	checktest.Near(t, "torque vs GNU units", float64(pt.Torque), checktest.GNUUnitsValue(t, path, "45 cm^3 * 210 bar / (2 pi) / 0.92", "N m"), 1e-14)
 }
 
 func TestDisplacementFor(t *testing.T) {

@@ -2,34 +2,11 @@ package valve
 
 import (
 	"math"
-	"os/exec"
-	"strconv"
-	"strings"
 	"testing"
 
 	"github.com/hydrosize/hydrosize/internal/checktest"
 	"github.com/hydrosize/hydrosize/units"
 )
-
-// gnuUnits evaluates have in the units of want with GNU units (Debian
-// package units, 2.22), or skips the test where it is not installed;
-// .ci/run installs it.
-func gnuUnits(t *testing.T, have, want string) float64 {
-	t.Helper()
-	path, err := exec.LookPath("units")
-	if err != nil {
-		t.Skip("GNU units (Debian package units) is not installed; .ci/run installs it")
-	}
-	out, err := exec.Command(path, "-t", "-o", "%.17g", have, want).CombinedOutput()
-	if err != nil {
-		t.Fatalf("units %q %q: %v: %s", have, want, err, out)
-	}
-	v, err := strconv.ParseFloat(strings.TrimSpace(string(out)), 64)
-	if err != nil {
-		t.Fatalf("units %q %q printed %q", have, want, out)
-	}
-	return v
-}
 
 // The orifice equation against GNU units 2.22, which evaluates the same
 // expression in its own unit definitions:
@@ -51,9 +28,9 @@ func TestOrificeAgainstGNUUnits(t *testing.T) {
 	}
 	checktest.Near(t, "drop, bar", dp.Bar(), 12.852492984058475, 1e-14)
 	checktest.Near(t, "flow vs GNU units", q.LitresPerMinute(),
-		gnuUnits(t, "0.61 * (pi/4) * (3 mm)^2 * sqrt(2 * 70 bar / (870 kg/m^3))", "L/min"), 1e-14)
+		checktest.GNUUnitsValue(t, checktest.GNUUnits(t), "0.61 * (pi/4) * (3 mm)^2 * sqrt(2 * 70 bar / (870 kg/m^3))", "L/min"), 1e-14)
 	checktest.Near(t, "drop vs GNU units", dp.Bar(),
-		gnuUnits(t, "870 kg/m^3 / 2 * (25 L/min / (0.61 * (pi/4) * (4 mm)^2))^2", "bar"), 1e-14)
+		checktest.GNUUnitsValue(t, checktest.GNUUnits(t), "870 kg/m^3 / 2 * (25 L/min / (0.61 * (pi/4) * (4 mm)^2))^2", "bar"), 1e-14)
 }
 
 // The three solutions are one equation: flow → drop → area round trips.
@@ -103,7 +80,7 @@ func TestSharpEdgedCd(t *testing.T) {
 // (from memory).
 func TestKvCv(t *testing.T) {
 	checktest.Near(t, "Cv of Kv 1", float64(Kv(1).Cv()), 1.1560992283536564, 1e-15)
-	checktest.Near(t, "Cv/Kv vs GNU units", float64(Kv(1).Cv()), gnuUnits(t, "1 m^3/hr * sqrt(psi/bar)", "gal/min"), 1e-15)
+	checktest.Near(t, "Cv/Kv vs GNU units", float64(Kv(1).Cv()), checktest.GNUUnitsValue(t, checktest.GNUUnits(t), "1 m^3/hr * sqrt(psi/bar)", "gal/min"), 1e-15)
 	if c := float64(Kv(1).Cv()); math.Round(c*1000)/1000 != 1.156 {
 		t.Errorf("Cv/Kv = %v; the trade prints 1.156", c)
 	}

@@ -28,3 +28,15 @@ func TestClose(t *testing.T) {
 		t.Errorf("Near reported %d failures for 1.1 against 1 ±1 %%; want 1", len(r.failed))
 	}
 }
+
+// 1 psi is 6894.757293168361 Pa (NIST SP 811: lbf/in² from the exact
+// inch, pound and standard gravity).
+func TestGNUUnitsValue(t *testing.T) {
+	path := GNUUnits(t)
+	if got := GNUUnitsValue(t, path, "1 psi", "Pa"); !Close(got, 6894.757293168361, 1e-15) {
+		t.Errorf("GNU units 1 psi = %v Pa", got)
+	}
+	if got := GNUUnitsValue(t, path, "-40", "1"); got != -40 {
+		t.Errorf("GNU units -40 = %v; a negative value must reach it after --", got)
+	}
+}
