@@ -4,6 +4,7 @@ import (
 	"encoding/json"
 	"fmt"
 
+	"github.com/hydrosize/hydrosize/internal/enum"
 	"github.com/hydrosize/hydrosize/internal/validate"
 )
 
@@ -27,11 +28,13 @@ func (b Bound) String() string {
 }
 
 // MarshalText writes "at most" or "at least".
-func (b Bound) MarshalText() ([]byte, error) { return marshalName("Bound", b, boundNames[:]) }
+func (b Bound) MarshalText() ([]byte, error) {
+	return enum.Marshal("components.Bound.MarshalText", b, boundNames[:])
+}
 
 // UnmarshalText reads a name written by MarshalText.
 func (b *Bound) UnmarshalText(t []byte) error {
-	return unmarshalName("components.Bound.UnmarshalText", t, b, boundNames[:])
+	return enum.Unmarshal("components.Bound.UnmarshalText", t, b, boundNames[:])
 }
 
 // Check holds a computed value against a limit: the value, the limit,

@@ -8,6 +8,7 @@ import (
 	"slices"
 	"strings"
 
+	"github.com/hydrosize/hydrosize/internal/enum"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -37,11 +38,13 @@ func (s Severity) String() string {
 }
 
 // MarshalText writes the signal word.
-func (s Severity) MarshalText() ([]byte, error) { return marshalName("Severity", s, severityNames[:]) }
+func (s Severity) MarshalText() ([]byte, error) {
+	return enum.Marshal("components.Severity.MarshalText", s, severityNames[:])
+}
 
 // UnmarshalText reads a signal word written by MarshalText.
 func (s *Severity) UnmarshalText(b []byte) error {
-	return unmarshalName("components.Severity.UnmarshalText", b, s, severityNames[:])
+	return enum.Unmarshal("components.Severity.UnmarshalText", b, s, severityNames[:])
 }
 
 // Hazard is the kind of harm a finding is about; [NoHazard] marks a design
@@ -81,11 +84,13 @@ func (h Hazard) String() string {
 }
 
 // MarshalText writes the hazard's name.
-func (h Hazard) MarshalText() ([]byte, error) { return marshalName("Hazard", h, hazardNames[:]) }
+func (h Hazard) MarshalText() ([]byte, error) {
+	return enum.Marshal("components.Hazard.MarshalText", h, hazardNames[:])
+}
 
 // UnmarshalText reads a name written by MarshalText.
 func (h *Hazard) UnmarshalText(b []byte) error {
-	return unmarshalName("components.Hazard.UnmarshalText", b, h, hazardNames[:])
+	return enum.Unmarshal("components.Hazard.UnmarshalText", b, h, hazardNames[:])
 }
 
 // Finding is one statement for the reader of a result: how serious, about

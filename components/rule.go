@@ -4,8 +4,8 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
-	"strings"
 
+	"github.com/hydrosize/hydrosize/internal/enum"
 	"github.com/hydrosize/hydrosize/units"
 )
 
@@ -35,11 +35,13 @@ func (k RuleKind) String() string {
 }
 
 // MarshalText writes the kind's name.
-func (k RuleKind) MarshalText() ([]byte, error) { return marshalName("RuleKind", k, ruleKindNames[:]) }
+func (k RuleKind) MarshalText() ([]byte, error) {
+	return enum.Marshal("components.RuleKind.MarshalText", k, ruleKindNames[:])
+}
 
 // UnmarshalText reads a name written by MarshalText.
 func (k *RuleKind) UnmarshalText(b []byte) error {
-	return unmarshalName("components.RuleKind.UnmarshalText", b, k, ruleKindNames[:])
+	return enum.Unmarshal("components.RuleKind.UnmarshalText", b, k, ruleKindNames[:])
 }
 
 // Rule says where a number or a limit comes from: its kind and, for a
@@ -76,27 +78,6 @@ func (r Rule) String() string {
 		return r.Kind.String()
 	}
 	return r.Kind.String() + ": " + r.Source
-}
-
-// marshalName writes names[v] or fails for a value outside the table.
-func marshalName[T ~uint8](typ string, v T, names []string) ([]byte, error) {
-	if int(v) >= len(names) {
-		return nil, &units.RangeError{Func: "components." + typ + ".MarshalText", Param: "value",
-			Value: fmt.Sprint(uint8(v)), Valid: "0 to " + fmt.Sprint(len(names)-1)}
-	}
-	return []byte(names[v]), nil
-}
-
-// unmarshalName reads one of names into v.
-func unmarshalName[T ~uint8](fn string, b []byte, v *T, names []string) error {
-	for i, n := range names {
-		if n == string(b) {
-			*v = T(i)
-			return nil
-		}
-	}
-	return &units.ParseError{Func: fn, Input: string(b), Err: units.ErrSyntax,
-		Detail: "want one of " + strings.Join(names, ", ")}
 }
 
 // decodeJSON is json.Unmarshal for the UnmarshalJSON method fn. An error

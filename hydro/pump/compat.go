@@ -310,18 +310,25 @@ func (p Pump) surplus(c Circuit, d Demand) (components.Finding, bool, error) {
 	if err != nil {
 		return components.Finding{}, false, err
 	}
-	switch {
-	case d.Flow > pt.Flow:
-		return components.NewFinding(components.Notice, components.NoHazard, "pump.short",
-			components.PhysicsRule("flow continuity"),
-			"%v asks %v, more than the pump's %v: it moves slower", d.Name, d.Flow, pt.Flow), true, nil
-	case d.Flow == pt.Flow:
-		return components.Finding{}, false, nil
+	if d.Flow >= pt.Flow {
+		f, ok := short(d, pt)
+		return f, ok, nil
 	}
 	heat := c.Relief.TimesFlow(pt.Flow) - d.Pressure.TimesFlow(d.Flow)
 	return components.NewFinding(components.Caution, components.HotSurface, "pump.surplus", heatRule,
 		"while %v moves at %v it takes %v of the pump's %v: the other %v passes the relief at %v, and with the valve throttling the rest that is %v of heat",
 		d.Name, d.Pressure, d.Flow, pt.Flow, pt.Flow-d.Flow, c.Relief, heat), true, nil
+}
+
+// short is a demand that takes the whole pump flow: a notice when it asks
+// more, nothing when it takes exactly all of it.
+func short(d Demand, pt Point) (components.Finding, bool) {
+	if d.Flow == pt.Flow {
+		return components.Finding{}, false
+	}
+	return components.NewFinding(components.Notice, components.NoHazard, "pump.short",
+		components.PhysicsRule("flow continuity"),
+		"%v asks %v, more than the pump's %v: it moves slower", d.Name, d.Flow, pt.Flow), true
 }
 
 // bleedsOff reports a circuit whose valves meter a fixed pump by bleeding
@@ -339,13 +346,9 @@ func (p Pump) bleed(d Demand) (components.Finding, bool, error) {
 	if err != nil {
 		return components.Finding{}, false, err
 	}
-	switch {
-	case d.Flow > pt.Flow:
-		return components.NewFinding(components.Notice, components.NoHazard, "pump.short",
-			components.PhysicsRule("flow continuity"),
-			"%v asks %v, more than the pump's %v: it moves slower", d.Name, d.Flow, pt.Flow), true, nil
-	case d.Flow == pt.Flow:
-		return components.Finding{}, false, nil
+	if d.Flow >= pt.Flow {
+		f, ok := short(d, pt)
+		return f, ok, nil
 	}
 	heat := d.Pressure.TimesFlow(pt.Flow - d.Flow)
 	return components.NewFinding(components.Caution, components.HotSurface, "pump.bleed-off", heatRule,
